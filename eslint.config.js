@@ -1,0 +1,48 @@
+// @ts-check
+import js from "@eslint/js";
+import tseslint from "typescript-eslint";
+import importX from "eslint-plugin-import-x";
+import reactHooks from "eslint-plugin-react-hooks";
+import globals from "globals";
+
+export default tseslint.config(
+  { ignores: ["dist/**", "node_modules/**", ".var/**", "drizzle/**", "public/**"] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    languageOptions: { globals: { ...globals.node, ...globals.browser } },
+    plugins: { "import-x": importX },
+    settings: { "import-x/resolver-next": [] },
+    rules: {
+      "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_", caughtErrors: "none" }],
+      "@typescript-eslint/no-explicit-any": "error",
+      // Code flows one way: shared → (server | src); features do not reach into each other.
+      "no-restricted-imports": "off",
+    },
+  },
+  {
+    files: ["shared/**/*.ts"],
+    rules: {
+      "no-restricted-imports": ["error", {
+        patterns: [
+          { group: ["**/src/**", "**/server/**", "@/*", "@server/*"], message: "shared/ is the pure core: it imports nothing from src/ or server/." },
+          { group: ["react", "react-dom", "express", "drizzle-orm", "drizzle-orm/*", "postgres", "node:*"], message: "shared/ is pure TypeScript: no React, Express, Drizzle or Node I/O." },
+        ],
+      }],
+    },
+  },
+  {
+    files: ["server/**/*.ts"],
+    rules: {
+      "no-restricted-imports": ["error", { patterns: [{ group: ["**/src/**", "@/*", "react", "react-dom"], message: "server/ never imports the client." }] }],
+    },
+  },
+  {
+    files: ["src/**/*.{ts,tsx}"],
+    plugins: { "react-hooks": reactHooks },
+    rules: {
+      ...reactHooks.configs.recommended.rules,
+      "no-restricted-imports": ["error", { patterns: [{ group: ["**/server/**", "@server/*", "express", "drizzle-orm", "postgres"], message: "src/ never imports the server." }] }],
+    },
+  },
+);

@@ -1,0 +1,51 @@
+import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { ensureCluster, ensureDatabase, devCluster, testCluster, type ClusterConfig } from "./postgres.ts";
+import { runMigrations } from "./migrate.ts";
+import { projectRoot, log } from "./paths.ts";
+
+export interface Environment {
+  cluster: ClusterConfig;
+  databaseUrl: string;
+  env: NodeJS.ProcessEnv;
+}
+
+/** PostgreSQL up, database present, migrations applied: the common first half of start, dev and test. */
+export async function prepareDatabase(kind: "dev" | "test", opts: { recreate?: boolean } = {}): Promise<Environment> {
+  const cluster = kind === "dev" ? devCluster() : testCluster();
+  const info = ensureCluster(cluster);
+  const database = kind === "dev" ? "eavesight" : "eavesight_test";
+  ensureDatabase(cluster, database, { recreate: opts.recreate });
+  const databaseUrl = info.appUrl(database);
+  await runMigrations(databaseUrl);
+  return { cluster, databaseUrl, env: { ...process.env, DATABASE_URL: databaseUrl } };
+}
+
+export function buildClient(): void {
+  log("building the client (vite build)…");
+  const r = spawnSync(process.execPath, ["node_modules/vite/bin/vite.js", "build", "--logLevel", "warn"], { cwd: projectRoot, stdio: "inherit" });
+  if (r.status !== 0) throw new Error("vite build failed");
+}
+
+/** Starts the API server as a child process and resolves once it listens. */
+export function startServer(env: NodeJS.ProcessEnv, opts: { watch?: boolean } = {}): Promise<ChildProcess> {
+  const args = opts.watch ? ["--import", "tsx", "--watch", "server/index.ts"] : ["--import", "tsx", "server/index.ts"];
+  const child = spawn(process.execPath, args, { cwd: projectRoot, env, stdio: ["ignore", "inherit", "inherit", "ipc"] });
+  return new Promise((resolve, reject) => {
+    const onExit = (code: number | null) => reject(new Error(`the server exited with code ${code} before it was ready`));
+    child.once("exit", onExit);
+    child.on("message", (m: { ready?: boolean }) => {
+      if (m?.ready) {
+        child.off("exit", onExit);
+        resolve(child);
+      }
+    });
+  });
+}
+
+export function stopChild(child: ChildProcess | undefined, signal: NodeJS.Signals = "SIGTERM"): Promise<void> {
+  if (!child || child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
+  return new Promise((resolve) => {
+    child.once("exit", () => resolve());
+    child.kill(signal);
+  });
+}

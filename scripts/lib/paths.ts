@@ -1,0 +1,8 @@
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+
+export const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..", "..");
+
+export function log(message: string): void {
+  console.log(`[eavesight] ${message}`);
+}

@@ -1,0 +1,86 @@
+/**
+ * `npm test`: the whole suite as CI runs it. Bootstraps a throwaway PostgreSQL cluster and
+ * database, the fake SMTP server and (for the browser tests) the built app, then runs
+ * type-check, lint, unit + API tests, and end-to-end tests in Debian's Chromium.
+ * Every step runs even if an earlier one failed; the last line sums them up.
+ * `npm test -- --only unit,api` runs a subset.
+ */
+import { spawnSync, type SpawnSyncReturns } from "node:child_process";
+import { existsSync, mkdirSync, readFileSync, rmSync } from "node:fs";
+import path from "node:path";
+import { prepareDatabase, buildClient, startServer, stopChild } from "../lib/environment.ts";
+import { startFakeSmtp } from "../lib/fake-smtp.ts";
+import { seedDemo } from "../lib/seed.ts";
+import { ensureChromium } from "../lib/chromium.ts";
+import { projectRoot, log } from "../lib/paths.ts";
+
+const started = Date.now();
+const onlyArg = process.argv.find((a) => a.startsWith("--only="))?.slice(7) ?? process.argv[process.argv.indexOf("--only") + 1];
+const only = process.argv.includes("--only") || onlyArg ? new Set((onlyArg ?? "").split(",")) : null;
+const wants = (step: string) => !only || only.has(step);
+
+const results: { step: string; ok: boolean; summary: string }[] = [];
+const reportDir = path.join(projectRoot, ".var", "test-reports");
+rmSync(reportDir, { recursive: true, force: true });
+mkdirSync(reportDir, { recursive: true });
+
+function run(step: string, args: string[], env: NodeJS.ProcessEnv): SpawnSyncReturns<Buffer> {
+  log(`── ${step} ──`);
+  return spawnSync(process.execPath, args, { cwd: projectRoot, env, stdio: "inherit" });
+}
+
+function vitest(step: string, projects: string[], env: NodeJS.ProcessEnv) {
+  const out = path.join(reportDir, `${step}.json`);
+  const r = run(step, [
+    "node_modules/vitest/vitest.mjs", "run", ...projects.flatMap((p) => ["--project", p]),
+    "--reporter=default", "--reporter=json", `--outputFile.json=${out}`,
+  ], env);
+  let summary = r.status === 0 ? "passed" : "FAILED";
+  if (existsSync(out)) {
+    const j = JSON.parse(readFileSync(out, "utf8")) as { numPassedTests: number; numFailedTests: number; numTotalTests: number };
+    summary = `${j.numPassedTests}/${j.numTotalTests} passed${j.numFailedTests ? `, ${j.numFailedTests} failed` : ""}`;
+  }
+  results.push({ step, ok: r.status === 0, summary });
+}
+
+const testPort = Number(process.env.EAVESIGHT_TEST_PORT ?? 3100);
+const smtpPort = Number(process.env.EAVESIGHT_TEST_SMTP_PORT ?? 2526);
+const { databaseUrl, env: baseEnv } = await prepareDatabase("test", { recreate: true });
+await seedDemo(databaseUrl);
+const smtp = await startFakeSmtp({ port: smtpPort, databaseUrl, quiet: true });
+const env: NodeJS.ProcessEnv = {
+  ...baseEnv, NODE_ENV: "test", SMTP_PORT: String(smtpPort), LOG_LEVEL: "warn",
+  EAVESIGHT_TEST_DATABASE_URL: databaseUrl,
+};
+
+try {
+  if (wants("typecheck")) {
+    const r = run("typecheck", ["node_modules/typescript/bin/tsc", "--noEmit", "-p", "."], env);
+    results.push({ step: "typecheck", ok: r.status === 0, summary: r.status === 0 ? "no errors" : "errors" });
+  }
+  if (wants("lint")) {
+    const r = run("lint", ["node_modules/eslint/bin/eslint.js", "--max-warnings=0", "."], env);
+    results.push({ step: "lint", ok: r.status === 0, summary: r.status === 0 ? "clean" : "problems" });
+  }
+  if (wants("unit") || wants("api")) {
+    vitest("unit+api", [...(wants("unit") ? ["unit"] : []), ...(wants("api") ? ["api"] : [])], env);
+  }
+  if (wants("e2e")) {
+    ensureChromium();
+    buildClient();
+    const server = await startServer({ ...env, PORT: String(testPort), LOG_LEVEL: "error" });
+    try {
+      vitest("e2e", ["e2e"], { ...env, E2E_BASE_URL: `http://127.0.0.1:${testPort}` });
+    } finally {
+      await stopChild(server);
+    }
+  }
+} finally {
+  await smtp.close();
+}
+
+const seconds = Math.round((Date.now() - started) / 1000);
+const ok = results.length > 0 && results.every((r) => r.ok);
+console.log("\n" + results.map((r) => `  ${r.ok ? "ok  " : "FAIL"}  ${r.step.padEnd(10)} ${r.summary}`).join("\n"));
+console.log(`\neavesight test: ${ok ? "PASS" : "FAIL"} — ${results.map((r) => `${r.step} ${r.ok ? "ok" : "failed"}`).join(", ")} — ${seconds}s`);
+process.exit(ok ? 0 : 1);

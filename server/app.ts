@@ -1,0 +1,113 @@
+import express, { type Express } from "express";
+import helmet from "helmet";
+import { pinoHttp } from "pino-http";
+import path from "node:path";
+import { existsSync } from "node:fs";
+import { sql as rawSql } from "drizzle-orm";
+import type { Env } from "./env.ts";
+import type { Database } from "./db/client.ts";
+import type { Logger } from "./lib/logger.ts";
+import type { Jobs } from "./lib/jobs.ts";
+import { errorMiddleware } from "./lib/error-middleware.ts";
+import { originCheck } from "./lib/csrf.ts";
+import { AppError } from "./lib/errors.ts";
+import { createAudit } from "./lib/audit.ts";
+import { createLucia } from "./modules/auth/lucia.ts";
+import { sessionMiddleware, requireSignIn } from "./modules/auth/session.middleware.ts";
+import { createAuthRepository } from "./modules/auth/auth.repository.ts";
+import { createAuthService } from "./modules/auth/auth.service.ts";
+import { authRouter } from "./modules/auth/auth.router.ts";
+import { createTeamRepository } from "./modules/team/team.repository.ts";
+import { createTeamService } from "./modules/team/team.service.ts";
+import { teamRouter } from "./modules/team/team.router.ts";
+import { outboxRouter } from "./modules/outbox/outbox.router.ts";
+
+export interface AppDeps {
+  env: Env;
+  db: Database;
+  logger: Logger;
+  jobs: Jobs;
+  /** Folder of the built client, served with an index.html fallback; omitted in API tests. */
+  clientDir?: string;
+}
+
+export function createApp(deps: AppDeps): Express {
+  const { env, db, logger } = deps;
+  const app = express();
+  app.disable("x-powered-by");
+  app.set("trust proxy", "loopback");
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          imgSrc: ["'self'", "data:", "blob:"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          fontSrc: ["'self'", "data:"],
+          connectSrc: ["'self'"],
+          frameSrc: ["'self'", "blob:"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'self'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => req.url === "/api/health" },
+      serializers: {
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+      },
+    }),
+  );
+
+  const appOrigin = (fallback?: string) => env.APP_ORIGIN ?? fallback ?? `http://${env.HOST}:${env.PORT}`;
+  const audit = createAudit(db);
+  const lucia = createLucia(db);
+  const authRepo = createAuthRepository(db);
+  const authService = createAuthService({ repo: authRepo, lucia, audit, jobs: deps.jobs, appOrigin });
+  const teamService = createTeamService({
+    repo: createTeamRepository(db), audit, jobs: deps.jobs, appOrigin,
+    companyName: async (id) => (await authRepo.findCompany(id))?.name ?? "your company",
+  });
+
+  const api = express.Router();
+  api.use(express.json({ limit: "1mb" }));
+  api.use(originCheck({ allowedOrigins: env.APP_ORIGIN ? [env.APP_ORIGIN] : [], exemptPaths: [/^\/webhooks\//] }));
+
+  api.get("/health", async (_req, res) => {
+    try {
+      await Promise.race([
+        db.execute(rawSql`select 1`),
+        new Promise((_, reject) => setTimeout(() => reject(new Error("timeout")), 2_000)),
+      ]);
+      res.json({ status: "ok", database: "reachable" });
+    } catch {
+      res.status(503).json({ status: "degraded", database: "unreachable" });
+    }
+  });
+
+  api.use(sessionMiddleware(lucia));
+  api.use("/auth", authRouter(authService, lucia));
+  api.use("/team", requireSignIn, teamRouter(teamService));
+  api.use("/outbox", requireSignIn, outboxRouter(db));
+
+  api.use((req, _res, next) => next(new AppError("not-found", `No API route ${req.method} ${req.path}.`, 404)));
+  app.use("/api", api);
+
+  if (deps.clientDir && existsSync(deps.clientDir)) {
+    const dir = deps.clientDir;
+    app.use(express.static(dir, { index: false, maxAge: "1h", setHeaders: (res, file) => {
+      if (file.includes(`${path.sep}assets${path.sep}`)) res.setHeader("Cache-Control", "public, max-age=31536000, immutable");
+    } }));
+    app.get("/{*splat}", (_req, res) => res.sendFile(path.join(dir, "index.html")));
+  }
+
+  app.use(errorMiddleware(logger));
+  return app;
+}

@@ -1,0 +1,38 @@
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import { parseEnv } from "./env.ts";
+import { createDb } from "./db/client.ts";
+import { createLogger } from "./lib/logger.ts";
+import { createMailer } from "./lib/mailer.ts";
+import { startJobs } from "./lib/jobs.ts";
+import { createApp } from "./app.ts";
+
+const env = parseEnv();
+const logger = createLogger(env.LOG_LEVEL, { pretty: Boolean(process.stdout.isTTY) });
+const { db, sql } = createDb(env.DATABASE_URL);
+const mailer = createMailer({ host: env.SMTP_HOST, port: env.SMTP_PORT, from: env.MAIL_FROM });
+const jobs = await startJobs({ databaseUrl: env.DATABASE_URL, logger, mailer });
+const clientDir = env.SERVE_CLIENT === "true" ? path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..", "dist", "client") : undefined;
+const app = createApp({ env, db, logger, jobs, clientDir });
+
+const server = app.listen(env.PORT, env.HOST, () => {
+  logger.info(`Eavesight listening on http://${env.HOST}:${env.PORT}`);
+  process.send?.({ ready: true });
+});
+
+let stopping = false;
+async function shutdown(signal: string) {
+  if (stopping) return;
+  stopping = true;
+  logger.info({ signal }, "shutting down");
+  const force = setTimeout(() => process.exit(1), 10_000);
+  force.unref();
+  // Stop taking requests, finish the ones in flight, then the jobs, then the pool.
+  await new Promise<void>((resolve) => server.close(() => resolve()));
+  await jobs.stop().catch(() => {});
+  mailer.close();
+  await sql.end({ timeout: 5 });
+  process.exit(0);
+}
+process.on("SIGINT", () => void shutdown("SIGINT"));
+process.on("SIGTERM", () => void shutdown("SIGTERM"));

@@ -1,0 +1,46 @@
+import PgBoss from "pg-boss";
+import type { Logger } from "./logger.ts";
+import type { Mailer, OutgoingEmail } from "./mailer.ts";
+
+export const QUEUES = { email: "email-send" } as const;
+
+export interface Jobs {
+  sendEmail(mail: OutgoingEmail, opts?: { singletonKey?: string }): Promise<void>;
+  boss: PgBoss;
+  stop(): Promise<void>;
+}
+
+/**
+ * Background work on pg-boss, in the same PostgreSQL: a request only enqueues; workers in
+ * any server process pick the job up, with retries.
+ */
+export async function startJobs(opts: { databaseUrl: string; logger: Logger; mailer: Mailer; runWorkers?: boolean }): Promise<Jobs> {
+  const boss = new PgBoss({ connectionString: opts.databaseUrl, max: 4 });
+  boss.on("error", (err) => opts.logger.warn({ err: { message: err.message } }, "job queue error"));
+  await boss.start();
+  await boss.createQueue(QUEUES.email);
+
+  if (opts.runWorkers !== false) {
+    await boss.work<OutgoingEmail>(QUEUES.email, { pollingIntervalSeconds: 0.5 }, async (batch) => {
+      for (const job of batch) {
+        const messageId = await opts.mailer.send(job.data);
+        opts.logger.info({ job: job.id, messageId, to: job.data.to }, "e-mail sent");
+      }
+    });
+  }
+
+  return {
+    boss,
+    async sendEmail(mail, o = {}) {
+      await boss.send(QUEUES.email, mail, {
+        retryLimit: 5,
+        retryDelay: 2,
+        retryBackoff: true,
+        ...(o.singletonKey ? { singletonKey: o.singletonKey } : {}),
+      });
+    },
+    async stop() {
+      await boss.stop({ graceful: true, timeout: 5_000 });
+    },
+  };
+}

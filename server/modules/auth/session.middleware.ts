@@ -1,0 +1,53 @@
+import type { Request, Response, RequestHandler } from "express";
+import type { Cookie } from "lucia";
+import { forbidden, unauthorized } from "../../lib/errors.ts";
+import { can, type Permission } from "../../../shared/schemas/roles.ts";
+import type { AppLucia } from "./lucia.ts";
+
+/** Writes a lucia cookie, Secure whenever this request came over https. */
+export function writeCookie(req: Request, res: Response, cookie: Cookie): void {
+  const a = cookie.attributes;
+  res.cookie(cookie.name, cookie.value, {
+    httpOnly: true,
+    sameSite: "lax",
+    secure: req.secure,
+    path: a.path ?? "/",
+    ...(a.maxAge !== undefined ? { maxAge: a.maxAge * 1000 } : {}),
+    ...(a.expires ? { expires: a.expires } : {}),
+  });
+}
+
+/** Reads the session cookie (if any) and puts the actor on the request. Never refuses by itself. */
+export function sessionMiddleware(lucia: AppLucia): RequestHandler {
+  return async (req, res, next) => {
+    try {
+      const id = lucia.readSessionCookie(req.get("cookie") ?? "");
+      if (!id) return next();
+      const { session, user } = await lucia.validateSession(id);
+      if (!session || !user) {
+        writeCookie(req, res, lucia.createBlankSessionCookie());
+        return next();
+      }
+      if (!user.isActive || session.absoluteExpiresAt.getTime() <= Date.now()) {
+        await lucia.invalidateSession(session.id);
+        writeCookie(req, res, lucia.createBlankSessionCookie());
+        return next();
+      }
+      if (session.fresh) writeCookie(req, res, lucia.createSessionCookie(session.id));
+      req.sessionId = session.id;
+      req.actor = { userId: user.id, companyId: user.companyId, role: user.role, email: user.email, name: user.name };
+      next();
+    } catch (err) {
+      next(err);
+    }
+  };
+}
+
+export const requireSignIn: RequestHandler = (req, _res, next) => next(req.actor ? undefined : unauthorized());
+
+export function requirePermission(permission: Permission): RequestHandler {
+  return (req, _res, next) => {
+    if (!req.actor) return next(unauthorized());
+    next(can(req.actor.role, permission) ? undefined : forbidden());
+  };
+}

@@ -1,0 +1,29 @@
+/** Roles and what each may do (DESIGN.md §2). One table, read by the server's guards and the client's navigation. */
+export const ROLES = ["owner", "estimator", "sales"] as const;
+export type Role = (typeof ROLES)[number];
+
+export const PERMISSIONS = {
+  "team:manage": ["owner"],
+  "company:edit": ["owner"],
+  "outbox:read": ["owner"],
+  "audit:read": ["owner"],
+  "catalog:read": ["owner", "estimator", "sales"],
+  "catalog:edit": ["owner"],
+  "customers:read": ["owner", "estimator", "sales"],
+  "customers:edit": ["owner", "estimator"],
+  "projects:read": ["owner", "estimator", "sales"],
+  "projects:edit": ["owner", "estimator"],
+  "options:edit": ["owner", "estimator", "sales"],
+  "proposals:read": ["owner", "estimator", "sales"],
+  "proposals:draft": ["owner", "estimator", "sales"],
+  "proposals:send": ["owner", "sales"],
+  "proposals:outcome": ["owner", "sales"],
+  "pipeline:read": ["owner", "sales"],
+  "payments:refund": ["owner"],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Permission = keyof typeof PERMISSIONS;
+
+export function can(role: Role, permission: Permission): boolean {
+  return (PERMISSIONS[permission] as readonly Role[]).includes(role);
+}

@@ -1,0 +1,56 @@
+import { fileURLToPath } from "node:url";
+import react from "@vitejs/plugin-react";
+import tailwindcss from "@tailwindcss/vite";
+import { defineConfig } from "vitest/config";
+
+const alias = {
+  "@shared": fileURLToPath(new URL("./shared", import.meta.url)),
+  "@": fileURLToPath(new URL("./src", import.meta.url)),
+};
+
+const apiPort = Number(process.env.PORT ?? 3000);
+
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  resolve: { alias },
+  build: { outDir: "dist/client", sourcemap: true, chunkSizeWarningLimit: 900 },
+  server: {
+    host: "127.0.0.1",
+    port: 5173,
+    proxy: { "/api": `http://127.0.0.1:${apiPort}` },
+  },
+  test: {
+    projects: [
+      {
+        resolve: { alias },
+        test: {
+          name: "unit",
+          include: ["shared/**/*.test.ts", "server/**/*.test.ts", "src/**/*.test.ts"],
+          environment: "node",
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: "api",
+          include: ["tests/api/**/*.test.ts"],
+          environment: "node",
+          fileParallelism: false,
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: "e2e",
+          include: ["tests/e2e/**/*.test.ts"],
+          environment: "node",
+          fileParallelism: false,
+          testTimeout: 90_000,
+          hookTimeout: 120_000,
+        },
+      },
+    ],
+  },
+});
