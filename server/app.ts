@@ -29,10 +29,13 @@ export interface AppDeps {
   jobs: Jobs;
   /** Folder of the built client, served with an index.html fallback; omitted in API tests. */
   clientDir?: string;
+  /** The clock; tests move it to check expiry and lockouts. */
+  now?: () => Date;
 }
 
 export function createApp(deps: AppDeps): Express {
   const { env, db, logger } = deps;
+  const now = deps.now ?? (() => new Date());
   const app = express();
   app.disable("x-powered-by");
   app.set("trust proxy", "loopback");
@@ -70,9 +73,9 @@ export function createApp(deps: AppDeps): Express {
   const audit = createAudit(db);
   const lucia = createLucia(db);
   const authRepo = createAuthRepository(db);
-  const authService = createAuthService({ repo: authRepo, lucia, audit, jobs: deps.jobs, appOrigin });
+  const authService = createAuthService({ repo: authRepo, lucia, audit, jobs: deps.jobs, appOrigin, now });
   const teamService = createTeamService({
-    repo: createTeamRepository(db), audit, jobs: deps.jobs, appOrigin,
+    repo: createTeamRepository(db), audit, jobs: deps.jobs, appOrigin, now,
     companyName: async (id) => (await authRepo.findCompany(id))?.name ?? "your company",
   });
 
@@ -92,7 +95,7 @@ export function createApp(deps: AppDeps): Express {
     }
   });
 
-  api.use(sessionMiddleware(lucia));
+  api.use(sessionMiddleware(lucia, now));
   api.use("/auth", authRouter(authService, lucia));
   api.use("/team", requireSignIn, teamRouter(teamService));
   api.use("/outbox", requireSignIn, outboxRouter(db));

@@ -5,7 +5,7 @@
  * Every step runs even if an earlier one failed; the last line sums them up.
  * `npm test -- --only unit,api` runs a subset.
  */
-import { spawnSync, type SpawnSyncReturns } from "node:child_process";
+import { spawn } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync, rmSync } from "node:fs";
 import path from "node:path";
 import { prepareDatabase, buildClient, startServer, stopChild } from "../lib/environment.ts";
@@ -24,14 +24,16 @@ const reportDir = path.join(projectRoot, ".var", "test-reports");
 rmSync(reportDir, { recursive: true, force: true });
 mkdirSync(reportDir, { recursive: true });
 
-function run(step: string, args: string[], env: NodeJS.ProcessEnv): SpawnSyncReturns<Buffer> {
+/** Runs a step as a child without blocking this process: the fake SMTP server lives here. */
+function run(step: string, args: string[], env: NodeJS.ProcessEnv): Promise<{ status: number | null }> {
   log(`── ${step} ──`);
-  return spawnSync(process.execPath, args, { cwd: projectRoot, env, stdio: "inherit" });
+  const child = spawn(process.execPath, args, { cwd: projectRoot, env, stdio: "inherit" });
+  return new Promise((resolve) => child.on("exit", (status) => resolve({ status })));
 }
 
-function vitest(step: string, projects: string[], env: NodeJS.ProcessEnv) {
+async function vitest(step: string, projects: string[], env: NodeJS.ProcessEnv) {
   const out = path.join(reportDir, `${step}.json`);
-  const r = run(step, [
+  const r = await run(step, [
     "node_modules/vitest/vitest.mjs", "run", ...projects.flatMap((p) => ["--project", p]),
     "--reporter=default", "--reporter=json", `--outputFile.json=${out}`,
   ], env);
@@ -55,22 +57,22 @@ const env: NodeJS.ProcessEnv = {
 
 try {
   if (wants("typecheck")) {
-    const r = run("typecheck", ["node_modules/typescript/bin/tsc", "--noEmit", "-p", "."], env);
+    const r = await run("typecheck", ["node_modules/typescript/bin/tsc", "--noEmit", "-p", "."], env);
     results.push({ step: "typecheck", ok: r.status === 0, summary: r.status === 0 ? "no errors" : "errors" });
   }
   if (wants("lint")) {
-    const r = run("lint", ["node_modules/eslint/bin/eslint.js", "--max-warnings=0", "."], env);
+    const r = await run("lint", ["node_modules/eslint/bin/eslint.js", "--max-warnings=0", "."], env);
     results.push({ step: "lint", ok: r.status === 0, summary: r.status === 0 ? "clean" : "problems" });
   }
   if (wants("unit") || wants("api")) {
-    vitest("unit+api", [...(wants("unit") ? ["unit"] : []), ...(wants("api") ? ["api"] : [])], env);
+    await vitest("unit+api", [...(wants("unit") ? ["unit"] : []), ...(wants("api") ? ["api"] : [])], env);
   }
   if (wants("e2e")) {
     ensureChromium();
     buildClient();
     const server = await startServer({ ...env, PORT: String(testPort), LOG_LEVEL: "error" });
     try {
-      vitest("e2e", ["e2e"], { ...env, E2E_BASE_URL: `http://127.0.0.1:${testPort}` });
+      await vitest("e2e", ["e2e"], { ...env, E2E_BASE_URL: `http://127.0.0.1:${testPort}` });
     } finally {
       await stopChild(server);
     }

@@ -18,7 +18,7 @@ export function writeCookie(req: Request, res: Response, cookie: Cookie): void {
 }
 
 /** Reads the session cookie (if any) and puts the actor on the request. Never refuses by itself. */
-export function sessionMiddleware(lucia: AppLucia): RequestHandler {
+export function sessionMiddleware(lucia: AppLucia, now: () => Date = () => new Date()): RequestHandler {
   return async (req, res, next) => {
     try {
       const id = lucia.readSessionCookie(req.get("cookie") ?? "");
@@ -28,7 +28,7 @@ export function sessionMiddleware(lucia: AppLucia): RequestHandler {
         writeCookie(req, res, lucia.createBlankSessionCookie());
         return next();
       }
-      if (!user.isActive || session.absoluteExpiresAt.getTime() <= Date.now()) {
+      if (!user.isActive || session.absoluteExpiresAt.getTime() <= now().getTime()) {
         await lucia.invalidateSession(session.id);
         writeCookie(req, res, lucia.createBlankSessionCookie());
         return next();
