@@ -1,0 +1,46 @@
+import { data, redirect, type LoaderFunctionArgs } from "react-router";
+import { paths, safeNextPath } from "@/config/paths";
+import { authQueries } from "@/features/auth/api/queries";
+import { canAccess, type Area } from "@/lib/authorization";
+import { queryClient } from "@/lib/query-client";
+import type { Session } from "@/lib/session";
+
+function currentPath(request: Request): string {
+  const url = new URL(request.url);
+  return `${url.pathname}${url.search}`;
+}
+
+async function sessionOrRedirect(request: Request): Promise<Session> {
+  const session = await queryClient.ensureQueryData(authQueries.me());
+  if (!session) throw redirect(paths.auth.signIn.getHref(currentPath(request)));
+  return session;
+}
+
+/** Loader for the signed-in app: a signed-out visitor goes to /sign-in?next=<where they were going>. */
+export async function requireSession({ request }: LoaderFunctionArgs) {
+  await sessionOrRedirect(request);
+  return null;
+}
+
+/** Loader for a route only some roles may use; others get a friendly 403 page inside the shell. */
+export function requireArea(area: Area) {
+  return async ({ request }: LoaderFunctionArgs) => {
+    const session = await sessionOrRedirect(request);
+    if (!canAccess(session.user.role, area)) {
+      throw data("Your role doesn't include this page.", { status: 403 });
+    }
+    return null;
+  };
+}
+
+/** Loader for /sign-in: someone already signed in goes straight on to `next`. */
+export async function redirectIfSignedIn({ request }: LoaderFunctionArgs) {
+  let session: Session | null = null;
+  try {
+    session = await queryClient.ensureQueryData(authQueries.me());
+  } catch {
+    // Server unreachable: still show the form; signing in will report the problem.
+  }
+  if (session) throw redirect(safeNextPath(new URL(request.url).searchParams.get("next")));
+  return null;
+}

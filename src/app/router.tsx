@@ -1,0 +1,94 @@
+import { createBrowserRouter, redirect, type RouteObject } from "react-router";
+import { paths } from "@/config/paths";
+import { redirectIfSignedIn, requireArea, requireSession } from "./guards";
+import { AppLayout } from "./layouts/app-layout";
+import { AuthLayout } from "./layouts/auth-layout";
+import { SettingsLayout } from "./layouts/settings-layout";
+import { FullPageLoading, RootLayout } from "./layouts/root-layout";
+import { RootErrorPage, RouteErrorPage } from "./route-error-page";
+import { Component as NotFoundRoute } from "./routes/not-found";
+
+/*
+ * Pages load lazily from app/routes/* (each module exports `Component`), so later work fills a
+ * route in without touching this file beyond its entry. Role guards are loaders here, next to the
+ * path, so who-may-open-what reads in one place (rules: lib/authorization.ts).
+ */
+const appRoutes: RouteObject[] = [
+  { index: true, loader: () => redirect(paths.app.projects.getHref()) },
+  {
+    path: paths.app.projects.path,
+    loader: requireArea("projects"),
+    lazy: () => import("./routes/projects"),
+  },
+  {
+    path: paths.app.customers.path,
+    loader: requireArea("customers"),
+    lazy: () => import("./routes/customers"),
+  },
+  {
+    path: paths.app.catalog.path,
+    loader: requireArea("catalog"),
+    lazy: () => import("./routes/catalog"),
+  },
+  {
+    path: paths.app.pipeline.path,
+    loader: requireArea("pipeline"),
+    lazy: () => import("./routes/pipeline"),
+  },
+  {
+    path: paths.app.settings.root.path,
+    element: <SettingsLayout />,
+    children: [
+      { index: true, loader: () => redirect(paths.app.settings.profile.getHref()) },
+      {
+        path: paths.app.settings.profile.path,
+        loader: requireArea("profile"),
+        lazy: () => import("./routes/settings/profile"),
+      },
+      {
+        path: paths.app.settings.team.path,
+        loader: requireArea("team"),
+        lazy: () => import("./routes/settings/team"),
+      },
+      {
+        path: paths.app.settings.company.path,
+        loader: requireArea("company"),
+        lazy: () => import("./routes/settings/company"),
+      },
+      {
+        path: paths.app.settings.outbox.path,
+        loader: requireArea("outbox"),
+        lazy: () => import("./routes/settings/outbox"),
+      },
+    ],
+  },
+  { path: "*", Component: NotFoundRoute },
+];
+
+export const routes: RouteObject[] = [
+  {
+    element: <RootLayout />,
+    errorElement: <RootErrorPage />,
+    HydrateFallback: FullPageLoading,
+    children: [
+      {
+        element: <AuthLayout />,
+        errorElement: <RootErrorPage />,
+        children: [
+          { path: paths.auth.signIn.path, loader: redirectIfSignedIn, lazy: () => import("./routes/auth/sign-in") },
+          { path: paths.auth.forgotPassword.path, lazy: () => import("./routes/auth/forgot-password") },
+          { path: paths.auth.resetPassword.path, lazy: () => import("./routes/auth/reset-password") },
+          { path: paths.auth.acceptInvite.path, lazy: () => import("./routes/auth/accept-invite") },
+        ],
+      },
+      {
+        id: "app",
+        loader: requireSession,
+        element: <AppLayout />,
+        children: [{ errorElement: <RouteErrorPage />, children: appRoutes }],
+      },
+    ],
+  },
+];
+
+export const router = createBrowserRouter(routes);

@@ -1,0 +1,1 @@
+export { AcceptInvitePage as Component } from "@/features/auth/pages/accept-invite-page";

@@ -1,0 +1,1 @@
+export { ForgotPasswordPage as Component } from "@/features/auth/pages/forgot-password-page";

@@ -1,0 +1,1 @@
+export { ResetPasswordPage as Component } from "@/features/auth/pages/reset-password-page";

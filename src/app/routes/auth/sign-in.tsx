@@ -1,0 +1,1 @@
+export { SignInPage as Component } from "@/features/auth/pages/sign-in-page";

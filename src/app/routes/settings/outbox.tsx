@@ -1,0 +1,1 @@
+export { OutboxPage as Component } from "@/features/outbox/pages/outbox-page";

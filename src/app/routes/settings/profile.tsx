@@ -1,0 +1,1 @@
+export { ProfilePage as Component } from "@/features/auth/pages/profile-page";

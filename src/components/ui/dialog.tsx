@@ -1,0 +1,113 @@
+import * as RadixDialog from "@radix-ui/react-dialog";
+import type { ReactNode } from "react";
+import { cn } from "@/lib/cn";
+import { Button, type ButtonVariant } from "./button";
+import { CloseIcon } from "./icons";
+
+/** Root of a dialog: `<Dialog open onOpenChange>` (controlled) or with a `DialogTrigger`. */
+export const Dialog = RadixDialog.Root;
+export const DialogTrigger = RadixDialog.Trigger;
+export const DialogClose = RadixDialog.Close;
+
+export interface DialogContentProps {
+  title: ReactNode;
+  /** Read out when the dialog opens. */
+  description?: ReactNode;
+  children?: ReactNode;
+  className?: string;
+  /** Footer buttons; laid out right-aligned on desktop, stacked full-width on phones. */
+  footer?: ReactNode;
+}
+
+/**
+ * A modal dialog: focus is trapped, Escape closes it, focus returns to the trigger.
+ * On phones it rises from the bottom edge, where a thumb can reach the buttons.
+ */
+export function DialogContent({ title, description, children, className, footer }: DialogContentProps) {
+  return (
+    <RadixDialog.Portal>
+      <RadixDialog.Overlay className="fixed inset-0 z-40 bg-ink-950/55 data-[state=open]:animate-[fade-in_150ms_ease-out]" />
+      <RadixDialog.Content
+        className={cn(
+          "fixed z-50 flex max-h-[92dvh] w-full flex-col overflow-hidden bg-white shadow-raised",
+          "inset-x-0 bottom-0 rounded-t-xl pb-[env(safe-area-inset-bottom)]",
+          "sm:inset-auto sm:top-1/2 sm:left-1/2 sm:w-[min(34rem,calc(100vw-2rem))] sm:-translate-x-1/2 sm:-translate-y-1/2 sm:rounded-xl sm:pb-0",
+          "data-[state=open]:animate-[rise-in_180ms_ease-out]",
+          className,
+        )}
+        {...(description ? {} : { "aria-describedby": undefined })}
+      >
+        <div className="flex items-start justify-between gap-4 px-5 pt-5 sm:px-6 sm:pt-6">
+          <div className="space-y-1.5">
+            <RadixDialog.Title className="text-xl font-semibold text-ink-900">{title}</RadixDialog.Title>
+            {description ? (
+              <RadixDialog.Description className="text-base text-ink-700">{description}</RadixDialog.Description>
+            ) : null}
+          </div>
+          <RadixDialog.Close asChild>
+            <Button variant="ghost" size="icon" aria-label="Close" className="-mt-2 -mr-2">
+              <CloseIcon />
+            </Button>
+          </RadixDialog.Close>
+        </div>
+        {children ? <div className="overflow-y-auto px-5 py-4 sm:px-6">{children}</div> : <div className="h-4" />}
+        {footer ? (
+          <div className="flex flex-col-reverse gap-3 border-t border-ink-100 px-5 py-4 sm:flex-row sm:justify-end sm:px-6">
+            {footer}
+          </div>
+        ) : null}
+      </RadixDialog.Content>
+    </RadixDialog.Portal>
+  );
+}
+
+export interface ConfirmDialogProps {
+  open: boolean;
+  onOpenChange: (open: boolean) => void;
+  title: ReactNode;
+  description?: ReactNode;
+  children?: ReactNode;
+  confirmLabel: string;
+  cancelLabel?: string;
+  /** "danger" for actions that remove or end something. */
+  confirmVariant?: ButtonVariant;
+  isPending?: boolean;
+  onConfirm: () => void;
+}
+
+/** "Are you sure?" with a clear verb on the confirm button. The caller closes it when the work is done. */
+export function ConfirmDialog({
+  open,
+  onOpenChange,
+  title,
+  description,
+  children,
+  confirmLabel,
+  cancelLabel = "Cancel",
+  confirmVariant = "primary",
+  isPending = false,
+  onConfirm,
+}: ConfirmDialogProps) {
+  return (
+    <Dialog open={open} onOpenChange={(next) => (isPending ? undefined : onOpenChange(next))}>
+      <DialogContent
+        title={title}
+        description={description}
+        footer={
+          <>
+            <DialogClose asChild>
+              <Button variant="secondary" disabled={isPending} className="w-full sm:w-auto">
+                {cancelLabel}
+              </Button>
+            </DialogClose>
+            <Button variant={confirmVariant} isLoading={isPending} onClick={onConfirm} className="w-full sm:w-auto">
+              {confirmLabel}
+            </Button>
+          </>
+        }
+      >
+        {children}
+      </DialogContent>
+    </Dialog>
+  );
+}
