@@ -1,28 +1,24 @@
-import { mkdtempSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
 import path from "node:path";
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 
 export const BASE_URL = process.env.E2E_BASE_URL ?? "";
 export const SHOTS_DIR = path.resolve(".var", "screenshots");
 
-/** Debian's Chromium driven by playwright-core: never a downloaded browser. */
+/** Debian's Chromium driven by playwright-core (never a downloaded browser), each run on a fresh temporary profile. */
 export async function launchBrowser(): Promise<{ browser: Browser; close: () => Promise<void> }> {
   if (!BASE_URL) throw new Error("E2E_BASE_URL is not set: run the browser tests with `npm test` (or `npm test -- --only e2e`).");
-  const profile = mkdtempSync(path.join(tmpdir(), "eavesight-chromium-"));
   const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
     headless: true,
     args: [
       "--no-sandbox", "--disable-gpu", "--disable-quic", "--disable-background-networking",
-      "--disable-component-update", "--disable-sync", "--no-first-run", `--user-data-dir=${profile}`,
+      "--disable-component-update", "--disable-sync", "--no-first-run",
     ],
   });
   return {
     browser,
     async close() {
       await browser.close();
-      rmSync(profile, { recursive: true, force: true });
     },
   };
 }
