@@ -4,16 +4,27 @@ import { AppError } from "./errors.ts";
 import type { Logger } from "./logger.ts";
 
 /** Postgres says the server is unreachable or shutting down: a 503, not our bug. */
-function isDatabaseUnavailable(err: unknown): boolean {
-  const e = err as { code?: string; errno?: string; message?: string } | null;
-  if (!e) return false;
-  const codes = ["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "CONNECT_TIMEOUT", "CONNECTION_CLOSED", "CONNECTION_ENDED", "CONNECTION_DESTROYED", "57P01", "57P02", "57P03", "08006", "08001", "08003"];
-  return codes.includes(String(e.code)) || codes.includes(String(e.errno));
+const UNAVAILABLE_CODES = new Set([
+  "ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "EPIPE", "CONNECT_TIMEOUT", "CONNECTION_CLOSED", "CONNECTION_ENDED",
+  "CONNECTION_DESTROYED", "57P01", "57P02", "57P03", "08006", "08001", "08003", "08004",
+]);
+/** Drizzle wraps driver errors (DrizzleQueryError.cause), so the whole cause chain is looked at. */
+export function isDatabaseUnavailable(err: unknown): boolean {
+  for (let e = err as { code?: unknown; errno?: unknown; cause?: unknown } | null, depth = 0; e && depth < 5; e = e.cause as typeof e, depth++) {
+    if (UNAVAILABLE_CODES.has(String(e.code)) || UNAVAILABLE_CODES.has(String(e.errno))) return true;
+    if (e instanceof AggregateError && e.errors.some((x) => isDatabaseUnavailable(x))) return true;
+  }
+  return false;
 }
 
 export function zodFields(err: ZodError): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of err.issues) {
+    // A strict schema names the unexpected keys themselves, so the client can point at them.
+    if (issue.code === "unrecognized_keys") {
+      for (const k of issue.keys) fields[[...issue.path, k].join(".")] ??= "This field is not expected here.";
+      continue;
+    }
     const key = issue.path.length ? issue.path.join(".") : "_";
     fields[key] ??= issue.message;
   }
@@ -24,7 +35,7 @@ export function errorMiddleware(logger: Logger): ErrorRequestHandler {
   return (err, req, res, _next) => {
     if (res.headersSent) return;
     if (err instanceof AppError) {
-      res.status(err.status).json({ error: { code: err.code, message: err.message, fields: err.fields ?? {} } });
+      res.status(err.status).json({ error: { ...err.details, code: err.code, message: err.message, fields: err.fields ?? {} } });
       return;
     }
     if (err instanceof ZodError) {
@@ -46,7 +57,7 @@ export function errorMiddleware(logger: Logger): ErrorRequestHandler {
       return;
     }
     if (isDatabaseUnavailable(err)) {
-      logger.warn({ err: { code: e.code, message: e.message } }, "database unavailable");
+      logger.warn({ err: { message: e.message } }, "database unavailable");
       res.status(503).set("Retry-After", "5").json({ error: { code: "unavailable", message: "The service is briefly unavailable. Please try again in a moment.", fields: {} } });
       return;
     }

@@ -1,0 +1,197 @@
+/**
+ * analyzeAttic: one attic space in, one explained analysis out. Pure: no I/O, no clock.
+ */
+import { diagnoseFan } from "../diagnostics/fan-diagnostics";
+import { formatNumber, roundTo, SQ_IN_PER_SQ_FT } from "../units/format";
+import { sectionGeometry } from "./attic-volume";
+import { providedNfa, type ProvidedNfa } from "./balance";
+import { fanIntakeNeededSqIn, recommendFanCfm, STEEP_PITCH_IN_12 } from "./fan-sizing";
+import { describeSectionArea, sectionAreaSqFt } from "./floor-area";
+import { sortFindings, ventilationFindings, type Finding } from "./findings";
+import { requiredNfa, type Requirement } from "./requirement";
+import { AtticInputSchema, type AtticInput } from "./schema";
+import { ventNfa } from "./vent-nfa";
+import { riseLookup, ventPosition } from "./vent-position";
+
+export interface SectionAnalysis {
+  index: number;
+  id?: string;
+  areaSqFt: number;
+  /** e.g. "40 ft × 30 ft = 1,200 sq ft". */
+  areaExplanation: string;
+  riseFt: number | null;
+  volumeCuFt: number | null;
+  /** How the volume was found, or why it could not be. */
+  volumeExplanation: string;
+}
+
+export interface FanAnalysis {
+  /** Installed powered-fan airflow, cfm. */
+  installedCfm: number;
+  recommendedCfm: number;
+  areaMethodCfm: number;
+  airChangeMethodCfm: number | null;
+  isDarkOrSteep: boolean;
+  /** Intake NFA the installed fans need (1 sq ft per 300 cfm), sq in. */
+  intakeNeededSqIn: number;
+  /** Intake NFA a fan of the recommended size would need, sq in. */
+  intakeNeededForRecommendedSqIn: number;
+  /** Passive intake NFA provided, sq in. */
+  intakeProvidedSqIn: number;
+  reasons: string[];
+}
+
+export interface AtticAnalysis {
+  /** Plan-view attic floor area, sq ft. */
+  floorAreaSqFt: number;
+  sections: SectionAnalysis[];
+  /** Attic air volume, cu ft, or null when a section lacks roof form, pitch or span. */
+  volumeCuFt: number | null;
+  requirement: Requirement;
+  provided: ProvidedNfa;
+  /** Powered-fan sizing, or null when the attic has no powered fan. */
+  fan: FanAnalysis | null;
+  /**
+   * Meets the code minimum: passive NFA provided ≥ the required NFA (IRC R806.2) and the eave
+   * vents are not blocked by insulation (IRC R806.3).
+   */
+  compliant: boolean;
+  /** One plain sentence a homeowner can read. */
+  summary: string;
+  /** Critical first, then warnings, then notes. */
+  findings: Finding[];
+}
+
+/**
+ * Analyses one attic space. The input is validated with AtticInputSchema first; invalid input
+ * throws the ZodError (use `tryAnalyzeAttic` for a result instead).
+ *
+ * @example
+ * // TRADE-REFERENCES §8 E1: 1,500 sq ft at 1/150 → 10 sq ft = 1,440 sq in
+ * const a = analyzeAttic({ codeBasis: "strict-150", climateZone: 4, ceilingVaporRetarder: "none", roofColor: "medium",
+ *   sections: [{ kind: "area", areaSqFt: 1500 }], vents: [] });
+ * a.requirement.totalSqIn // 1440
+ * a.requirement.reasons.at(-2) // "Required: 1,500 sq ft ÷ 150 = 10 sq ft = 1,440 sq in."
+ */
+export function analyzeAttic(input: AtticInput): AtticAnalysis {
+  const attic = AtticInputSchema.parse(input);
+  const site = attic.site ?? {};
+
+  const sections: SectionAnalysis[] = attic.sections.map((section, index) => {
+    const areaSqFt = sectionAreaSqFt(section);
+    const geometry = sectionGeometry(section, (n) => formatNumber(n));
+    return {
+      index,
+      ...(section.id !== undefined ? { id: section.id } : {}),
+      areaSqFt,
+      areaExplanation: describeSectionArea(section, (n) => formatNumber(n)),
+      riseFt: geometry.isKnown ? geometry.riseFt : null,
+      volumeCuFt: geometry.isKnown ? geometry.volumeCuFt : null,
+      volumeExplanation: geometry.isKnown ? geometry.explanation : geometry.reason,
+    };
+  });
+  // Rounded to 1e-6 sq ft only to drop float noise from outlines; tiny sections must not vanish.
+  const floorAreaSqFt = roundTo(sections.reduce((acc, s) => acc + s.areaSqFt, 0), 6);
+  const unknownVolume = sections.find((s) => s.volumeCuFt === null);
+  const volumeCuFt = unknownVolume ? null : roundTo(sections.reduce((acc, s) => acc + (s.volumeCuFt ?? 0), 0), 2);
+
+  const riseOf = riseLookup(attic.sections);
+  const vents = attic.vents.map((vent) => ({
+    vent,
+    nfa: ventNfa(vent),
+    position: ventPosition(vent, riseOf(vent.sectionId)),
+    label: vent.label,
+  }));
+  const provided = providedNfa(vents.map((v) => v.nfa));
+  const requirement = requiredNfa({
+    floorAreaSqFt,
+    codeBasis: attic.codeBasis,
+    climateZone: attic.climateZone,
+    ceilingVaporRetarder: attic.ceilingVaporRetarder,
+    vents,
+  });
+
+  let fan: FanAnalysis | null = null;
+  if (provided.poweredCfm > 0) {
+    const isSteep = attic.sections.some((s) => s.pitchIn12 !== undefined && s.pitchIn12 >= STEEP_PITCH_IN_12);
+    const sizing = recommendFanCfm({
+      floorAreaSqFt,
+      volumeCuFt,
+      isDark: attic.roofColor === "dark",
+      isSteep,
+      volumeUnknownReason: unknownVolume
+        ? `for section ${unknownVolume.index + 1}${unknownVolume.id ? ` (${unknownVolume.id})` : ""} ${unknownVolume.volumeExplanation}`
+        : undefined,
+    });
+    const intakeNeededSqIn = fanIntakeNeededSqIn(provided.poweredCfm);
+    fan = {
+      installedCfm: provided.poweredCfm,
+      recommendedCfm: sizing.recommendedCfm,
+      areaMethodCfm: sizing.areaMethodCfm,
+      airChangeMethodCfm: sizing.airChangeMethodCfm,
+      isDarkOrSteep: sizing.isDarkOrSteep,
+      intakeNeededSqIn,
+      intakeNeededForRecommendedSqIn: fanIntakeNeededSqIn(sizing.recommendedCfm),
+      intakeProvidedSqIn: provided.intakeSqIn,
+      reasons: [
+        ...sizing.reasons,
+        `Intake the installed ${formatNumber(provided.poweredCfm)} cfm needs (HVI: 1 sq ft per 300 cfm): ${formatNumber(provided.poweredCfm)} ÷ 300 = ${formatNumber(provided.poweredCfm / 300, { maxFractionDigits: 3 })} sq ft = ${formatNumber(intakeNeededSqIn)} sq in; the intake vents give ${formatNumber(provided.intakeSqIn)} sq in.`,
+      ],
+    };
+  }
+
+  const findings = ventilationFindings({
+    floorAreaSqFt,
+    vents: attic.vents,
+    perVent: provided.perVent,
+    provided,
+    requirement,
+    fan,
+    site,
+    required300SqIn: (floorAreaSqFt * SQ_IN_PER_SQ_FT) / 300,
+  });
+  for (const vent of attic.vents) {
+    if (vent.diagnostics) findings.push(...diagnoseFan(vent.diagnostics, vent.id));
+  }
+
+  const meetsArea = provided.totalSqIn >= requirement.totalSqIn;
+  const compliant = meetsArea && site.soffitsBlocked !== true;
+  const summary = meetsArea
+    ? compliant
+      ? `Meets the code minimum: ${formatNumber(provided.totalSqIn)} sq in of vent area provided, ${formatNumber(requirement.totalSqIn)} sq in required at 1/${requirement.ratio}.`
+      : `Enough vent area on paper (${formatNumber(provided.totalSqIn)} of ${formatNumber(requirement.totalSqIn)} sq in at 1/${requirement.ratio}), but insulation blocks the soffit vents, so it does not meet the code (IRC R806.3).`
+    : `Below the code minimum: ${formatNumber(provided.totalSqIn)} sq in of vent area provided, ${formatNumber(requirement.totalSqIn)} sq in required at 1/${requirement.ratio}.`;
+
+  return {
+    floorAreaSqFt,
+    sections,
+    volumeCuFt,
+    requirement,
+    provided,
+    fan,
+    compliant,
+    summary,
+    findings: sortFindings(findings),
+  };
+}
+
+export type TryAnalyzeResult =
+  | { ok: true; analysis: AtticAnalysis }
+  | { ok: false; issues: { path: string; message: string }[] };
+
+/**
+ * Like analyzeAttic, for untrusted input (a form being typed): never throws on bad input.
+ *
+ * @example
+ * tryAnalyzeAttic({ codeBasis: "irc-2018" }).ok // false
+ */
+export function tryAnalyzeAttic(input: unknown): TryAnalyzeResult {
+  const parsed = AtticInputSchema.safeParse(input);
+  if (!parsed.success) {
+    return {
+      ok: false,
+      issues: parsed.error.issues.map((issue) => ({ path: issue.path.map(String).join("."), message: issue.message })),
+    };
+  }
+  return { ok: true, analysis: analyzeAttic(parsed.data) };
+}

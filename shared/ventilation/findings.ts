@@ -1,0 +1,382 @@
+/**
+ * Findings: what the analysis noticed, each with a severity, a title, a plain detail that says
+ * what to do, and the vents involved. Codes are part of the contract (DESIGN.md §4).
+ */
+import { ATTIC_SAFETY_CAUTION, COMBUSTION_SAFETY_CAUTION, FAN_SAFETY_CAUTION, ROOF_SAFETY_CAUTION } from "../diagnostics/cautions";
+import { formatNumber, formatPercent } from "../units/format";
+import type { ProvidedNfa } from "./balance";
+import { FAN_OVERSIZED_ABOVE, FAN_UNDERSIZED_BELOW } from "./fan-sizing";
+import type { Requirement } from "./requirement";
+import type { Site, Vent } from "./schema";
+import { EAVE_KINDS, VENT_KIND_LABELS, type VentKind } from "./vent-kinds";
+import type { VentNfa } from "./vent-nfa";
+
+export const FINDING_CODES = [
+  // ventilation (DESIGN.md §4)
+  "below-minimum",
+  "no-intake",
+  "no-exhaust",
+  "exhaust-exceeds-intake",
+  "powered-with-passive-exhaust",
+  "mixed-exhaust",
+  "gable-with-ridge",
+  "fan-intake-short",
+  "fan-undersized",
+  "fan-oversized",
+  "backdraft-risk",
+  "exception-not-met",
+  "upper-vent-too-low",
+  "gable-fan-unsealed",
+  "soffits-blocked",
+  // further site findings
+  "baffles-missing",
+  "bath-fan-into-attic",
+  "appliance-exhaust-into-attic",
+  "powered-fan-depressurization",
+  "upper-vent-position-unknown",
+  "vent-location-unusual",
+  // fan diagnostics (shared/diagnostics)
+  "fan-power-not-verified",
+  "fan-power-verified",
+  "fan-winding-open",
+  "fan-winding-suspect",
+  "fan-winding-ok",
+  "fan-bearings-seized",
+  "fan-bearings-ok",
+  "fan-thermostat-failed",
+  "fan-thermostat-inconclusive",
+  "fan-thermostat-ok",
+] as const;
+
+export type FindingCode = (typeof FINDING_CODES)[number];
+export type Severity = "critical" | "warning" | "info";
+
+export interface Finding {
+  code: FindingCode;
+  severity: Severity;
+  title: string;
+  /** Plain words: what is wrong, the numbers, and what to do about it. */
+  detail: string;
+  ventIds: string[];
+  /** The safety caution to show with it, when the fix is physical work. */
+  caution?: string;
+}
+
+const SEVERITY_ORDER: Record<Severity, number> = { critical: 0, warning: 1, info: 2 };
+
+/** Critical first, then warnings, then notes; stable within a severity. */
+export function sortFindings(findings: Finding[]): Finding[] {
+  return findings
+    .map((finding, index) => ({ finding, index }))
+    .sort((a, b) => SEVERITY_ORDER[a.finding.severity] - SEVERITY_ORDER[b.finding.severity] || a.index - b.index)
+    .map(({ finding }) => finding);
+}
+
+export interface FanSummary {
+  installedCfm: number;
+  recommendedCfm: number;
+  intakeNeededSqIn: number;
+  intakeProvidedSqIn: number;
+}
+
+export interface FindingContext {
+  floorAreaSqFt: number;
+  vents: ReadonlyArray<Vent>;
+  perVent: ReadonlyArray<VentNfa>;
+  provided: ProvidedNfa;
+  requirement: Requirement;
+  fan: FanSummary | null;
+  site: Site;
+  required300SqIn: number;
+}
+
+const PASSIVE_EXHAUST_KINDS: ReadonlySet<VentKind> = new Set<VentKind>(["ridge", "box", "turbine", "off-ridge", "cupola", "gable-louver"]);
+
+const kindLabel = (kind: VentKind) => VENT_KIND_LABELS[kind];
+const plural = (n: number, one: string, many: string) => (n === 1 ? one : many);
+
+/** Every ventilation finding for one attic space (fan diagnostics are added by the caller). */
+export function ventilationFindings(ctx: FindingContext): Finding[] {
+  const findings: Finding[] = [];
+  const { provided, requirement, site } = ctx;
+  const passive = ctx.perVent.filter((v) => !v.isPowered);
+  const powered = ctx.perVent.filter((v) => v.isPowered);
+  const passiveUpper = passive.filter((v) => v.location === "upper" && v.nfaSqIn > 0);
+  const passiveLower = passive.filter((v) => v.location === "lower" && v.nfaSqIn > 0);
+  const ids = (items: ReadonlyArray<VentNfa>) => items.map((v) => v.ventId);
+
+  // IRC R806.2 minimum.
+  if (provided.totalSqIn < requirement.totalSqIn) {
+    const shortSqIn = requirement.totalSqIn - provided.totalSqIn;
+    findings.push({
+      code: "below-minimum",
+      severity: "critical",
+      title: "Less vent area than the code minimum",
+      detail:
+        `The attic has ${formatNumber(provided.totalSqIn)} sq in of net free vent area; at 1/${requirement.ratio} it needs ${formatNumber(requirement.totalSqIn)} sq in, ` +
+        `${formatNumber(shortSqIn)} sq in short. Add vent area — intake at the eaves first, then exhaust high on the roof — keeping intake at least equal to exhaust.`,
+      ventIds: ids(passive),
+      caution: ROOF_SAFETY_CAUTION,
+    });
+  }
+
+  if (passiveLower.length === 0) {
+    findings.push({
+      code: "no-intake",
+      severity: "critical",
+      title: "No intake vents",
+      detail:
+        "Nothing lets outside air in low at the eaves, so any exhaust vent or fan draws its air from the house or from other high vents. Add soffit or other eave intake, with baffles so insulation can't block it.",
+      ventIds: ids([...passiveUpper, ...powered]),
+      caution: ATTIC_SAFETY_CAUTION,
+    });
+  }
+  if (passiveUpper.length === 0 && powered.length === 0) {
+    findings.push({
+      code: "no-exhaust",
+      severity: "critical",
+      title: "No exhaust vents",
+      detail:
+        "Nothing lets warm, moist attic air out high on the roof. Add one kind of exhaust near the ridge — a ridge vent is usual — sized with the intake.",
+      ventIds: ids(passiveLower),
+      caution: ROOF_SAFETY_CAUTION,
+    });
+  }
+
+  if (provided.exhaustSqIn > provided.intakeSqIn && passiveLower.length > 0) {
+    findings.push({
+      code: "exhaust-exceeds-intake",
+      severity: "warning",
+      title: "More exhaust than intake",
+      detail:
+        `Exhaust vents give ${formatNumber(provided.exhaustSqIn)} sq in but intake only ${formatNumber(provided.intakeSqIn)} sq in. With more exhaust than intake the attic pulls air from the house through ceiling leaks. ` +
+        "Add intake at the eaves (or reduce exhaust) until intake is at least equal to exhaust.",
+      ventIds: ids(passiveUpper),
+    });
+  }
+
+  // Short-circuiting [PRACTICE; TRADE-REFERENCES §5.4, SRC 19].
+  const highOpenings = passive.filter((v) => v.location === "upper" && PASSIVE_EXHAUST_KINDS.has(v.kind));
+  if (powered.length > 0 && highOpenings.length > 0) {
+    findings.push({
+      code: "powered-with-passive-exhaust",
+      severity: "critical",
+      title: "Powered fan short-circuits through other high vents",
+      detail:
+        `A fan pulls air from the nearest, easiest opening. With ${highOpenings.map((v) => `${kindLabel(v.kind)} ${v.ventId}`).join(", ")} in the same attic, ` +
+        "it draws outside air in through them instead of through the soffits, so the attic floor and roof deck are not swept. " +
+        "Either remove the fan and rely on passive vents, or close off the other high vents so the fan draws from the eaves.",
+      ventIds: [...ids(powered), ...ids(highOpenings)],
+      caution: ROOF_SAFETY_CAUTION,
+    });
+  }
+
+  const exhaustKinds = new Set(passiveUpper.map((v) => v.kind));
+  const hasRidge = exhaustKinds.has("ridge");
+  const gables = passive.filter((v) => v.kind === "gable-louver" && v.nfaSqIn > 0);
+  const isGableWithRidge = hasRidge && gables.length > 0;
+  if (isGableWithRidge) {
+    const ridges = passiveUpper.filter((v) => v.kind === "ridge");
+    findings.push({
+      code: "gable-with-ridge",
+      severity: "warning",
+      title: "Gable louvers together with a ridge vent",
+      detail:
+        "The ridge vent draws air in through the gable louvers, close by and high up, instead of from the soffits, leaving most of the roof deck unvented. " +
+        "Close off the gable louvers from the inside when a ridge vent serves the attic (common practice).",
+      ventIds: [...ids(ridges), ...ids(gables)],
+    });
+  }
+  const mixKinds = [...exhaustKinds].filter((k) => !(isGableWithRidge && k === "gable-louver"));
+  if (mixKinds.length >= 2) {
+    const mixed = passiveUpper.filter((v) => mixKinds.includes(v.kind));
+    findings.push({
+      code: "mixed-exhaust",
+      severity: "warning",
+      title: "More than one kind of exhaust vent",
+      detail:
+        `This attic has ${mixKinds.map(kindLabel).join(", ")}. Different exhaust vents can feed each other — one draws outside air in through the other — so air bypasses the soffit-to-ridge path. ` +
+        "Use one kind of exhaust per attic space (common practice; manufacturers' instructions usually say the same) and close off the rest.",
+      ventIds: ids(mixed),
+      caution: ROOF_SAFETY_CAUTION,
+    });
+  }
+
+  // Powered fans [HVI, SRC 6; cautions TRADE-REFERENCES §5].
+  if (ctx.fan && powered.length > 0) {
+    const fan = ctx.fan;
+    if (fan.intakeProvidedSqIn < fan.intakeNeededSqIn) {
+      findings.push({
+        code: "fan-intake-short",
+        severity: "warning",
+        title: "Not enough intake for the fan",
+        detail:
+          `The fan${plural(powered.length, "", "s")} move${plural(powered.length, "s", "")} ${formatNumber(fan.installedCfm)} cfm and need${plural(powered.length, "s", "")} 1 sq ft of intake per 300 cfm: ` +
+          `${formatNumber(fan.installedCfm)} ÷ 300 × 144 = ${formatNumber(fan.intakeNeededSqIn)} sq in; the eaves give ${formatNumber(fan.intakeProvidedSqIn)} sq in. ` +
+          "A starved fan pulls conditioned air out of the house. Add intake vents or use a smaller fan.",
+        ventIds: ids(powered),
+      });
+    }
+    if (fan.installedCfm < fan.recommendedCfm * FAN_UNDERSIZED_BELOW) {
+      findings.push({
+        code: "fan-undersized",
+        severity: "warning",
+        title: "Fan far smaller than recommended",
+        detail:
+          `Installed ${formatNumber(fan.installedCfm)} cfm is ${formatPercent(fan.installedCfm / fan.recommendedCfm)} of the recommended ${formatNumber(fan.recommendedCfm)} cfm. ` +
+          "Consider passive ventilation instead, or a fan sized to the recommendation with intake to match.",
+        ventIds: ids(powered),
+      });
+    } else if (fan.installedCfm > fan.recommendedCfm * FAN_OVERSIZED_ABOVE) {
+      findings.push({
+        code: "fan-oversized",
+        severity: "warning",
+        title: "Fan far larger than recommended",
+        detail:
+          `Installed ${formatNumber(fan.installedCfm)} cfm is ${formatPercent(fan.installedCfm / fan.recommendedCfm)} of the recommended ${formatNumber(fan.recommendedCfm)} cfm. ` +
+          "An oversized fan is more likely to pull conditioned air and combustion gases out of the house; use a smaller fan or passive vents.",
+        ventIds: ids(powered),
+      });
+    }
+    if (site.atmosphericCombustionAppliance === true) {
+      findings.push({
+        code: "backdraft-risk",
+        severity: "critical",
+        title: "Risk of backdrafting a gas appliance",
+        detail:
+          "This house has a natural-draft (atmospheric) combustion appliance and a powered attic fan. " + COMBUSTION_SAFETY_CAUTION +
+          " Until then, consider switching the fan off; passive ventilation avoids the risk.",
+        ventIds: ids(powered),
+        caution: COMBUSTION_SAFETY_CAUTION,
+      });
+    } else {
+      findings.push({
+        code: "powered-fan-depressurization",
+        severity: "info",
+        title: "Powered fans can depressurize the house",
+        detail:
+          (site.atmosphericCombustionAppliance === false
+            ? "No atmospheric combustion appliance was recorded, but "
+            : "Check whether the house has a natural-draft gas water heater, furnace or boiler: ") +
+          COMBUSTION_SAFETY_CAUTION +
+          (site.ceilingAirSealed === true ? "" : " Air-sealing the ceiling first reduces how much house air the fan can pull."),
+        ventIds: ids(powered),
+        caution: COMBUSTION_SAFETY_CAUTION,
+      });
+    }
+    const gableFans = ctx.vents.filter(
+      (v) => (v.kind === "powered-gable" || v.mounting === "gable") && (v.sealedToOpening === false || (v.sealedToOpening === undefined && site.gableFanSealed === false)),
+    );
+    if (gableFans.length > 0) {
+      findings.push({
+        code: "gable-fan-unsealed",
+        severity: "warning",
+        title: "Gable fan not sealed to its opening",
+        detail:
+          "Gaps around a gable fan let it blow air in a circle, from the fan back into the attic, instead of out. Seal the fan to the louver opening with a shroud or a plywood baffle.",
+        ventIds: gableFans.map((v) => v.id),
+        caution: FAN_SAFETY_CAUTION,
+      });
+    }
+  }
+
+  // Exception and upper-vent position (IRC R806.2, per edition).
+  if (requirement.exception.isAvailable && requirement.ratio === 150 && provided.totalSqIn < requirement.totalSqIn) {
+    const wouldPass = provided.totalSqIn >= Math.ceil(ctx.required300SqIn - 1e-6);
+    const failed = requirement.exception.conditions.filter((c) => c.status === "not-met").map((c) => c.reason);
+    findings.push({
+      code: "exception-not-met",
+      severity: wouldPass ? "warning" : "info",
+      title: "The 1/300 exception does not apply",
+      detail:
+        (wouldPass
+          ? `The ${formatNumber(provided.totalSqIn)} sq in provided would meet 1/300 (${formatNumber(Math.ceil(ctx.required300SqIn - 1e-6))} sq in), but the exception's conditions are not met, so 1/150 applies. `
+          : "Even the 1/300 route would need more vent area than is provided. ") +
+        `What falls short: ${failed.join(" ")} To use 1/300, place 40–50 % of the vent area (50–80 % under IRC 2009) high near the ridge and the balance at the eaves, or meet the vapor-retarder condition where it applies.`,
+      ventIds: [],
+    });
+  }
+  if (requirement.tooLowUpperVentIds.length > 0) {
+    const isIrc2009 = requirement.codeBasis === "irc-2009";
+    findings.push({
+      code: "upper-vent-too-low",
+      severity: requirement.exception.isMet ? "info" : "warning",
+      title: "Upper vents too low to count as upper vents",
+      detail:
+        (isIrc2009
+          ? "Under IRC 2009 the upper vents for the 1/300 route must be at least 3 ft above the eave vents; these are lower."
+          : "For the 1/300 route the upper vents must be no more than 3 ft below the ridge, measured vertically; these are lower.") +
+        " They still count toward the 1/150 total. Move exhaust up near the ridge (a ridge vent or vents within 3 ft of it) if the 1/300 route is wanted.",
+      ventIds: requirement.tooLowUpperVentIds,
+    });
+  }
+  if (requirement.unknownPositionVentIds.length > 0 && !requirement.exception.isMet) {
+    findings.push({
+      code: "upper-vent-position-unknown",
+      severity: "info",
+      title: "Upper vent position not recorded",
+      detail:
+        "Eavesight can't tell whether these vents are high enough for the 1/300 route. Record each vent's drop below the ridge (or the roof pitch and span with the vent's height above the eaves).",
+      ventIds: requirement.unknownPositionVentIds,
+    });
+  }
+
+  // Insulation at the eaves: IRC R806.3 (1 in air space) [SRC 1, SRC 2]; baffles per NREL SWS [SRC 9].
+  const eaveVents = passiveLower.filter((v) => EAVE_KINDS.has(v.kind));
+  if (site.soffitsBlocked === true) {
+    findings.push({
+      code: "soffits-blocked",
+      severity: "critical",
+      title: "Insulation blocks the soffit vents",
+      detail:
+        "IRC R806.3 requires that insulation not block the free flow of air at eave vents, with at least a 1 in air space between insulation and roof sheathing. " +
+        "Pull the insulation back and install baffles (vent chutes) in every rafter bay, reaching above the insulation; until then the soffit intake counts for little.",
+      ventIds: ids(eaveVents),
+      caution: ATTIC_SAFETY_CAUTION,
+    });
+  }
+  if (site.bafflesPresent === false && eaveVents.length > 0 && site.soffitsBlocked !== true) {
+    findings.push({
+      code: "baffles-missing",
+      severity: "warning",
+      title: "No baffles at the eaves",
+      detail:
+        "Without baffles, insulation tends to slide over the soffit vents. Install a baffle in every rafter bay at the eaves, keeping at least a 1 in air space to the sheathing (IRC R806.3) and reaching above the insulation.",
+      ventIds: ids(eaveVents),
+      caution: ATTIC_SAFETY_CAUTION,
+    });
+  }
+  if (site.bathFanIntoAttic === true) {
+    findings.push({
+      code: "bath-fan-into-attic",
+      severity: "warning",
+      title: "Bath fan exhausts into the attic",
+      detail:
+        "Moist bathroom air dumped into the attic condenses on the cold roof deck. Duct the fan to the outdoors through a roof or wall cap (not just toward a soffit vent), with insulated duct in cold climates. Wiring changes are for a licensed electrician.",
+      ventIds: [],
+      caution: ATTIC_SAFETY_CAUTION,
+    });
+  }
+  if (site.kitchenOrDryerIntoAttic === true) {
+    findings.push({
+      code: "appliance-exhaust-into-attic",
+      severity: "warning",
+      title: "Kitchen or dryer exhaust into the attic",
+      detail: "Grease- or lint-laden moist air must go outdoors. Duct the exhaust through a proper roof or wall cap as the appliance instructions require.",
+      ventIds: [],
+      caution: ATTIC_SAFETY_CAUTION,
+    });
+  }
+
+  const oddLocation = passive.filter((v) => (EAVE_KINDS.has(v.kind) && v.location === "upper") || ((v.kind === "ridge" || v.kind === "off-ridge" || v.kind === "cupola" || v.kind === "turbine") && v.location === "lower"));
+  if (oddLocation.length > 0) {
+    findings.push({
+      code: "vent-location-unusual",
+      severity: "info",
+      title: "Check where these vents are",
+      detail: "These vents are recorded in an unusual place for their kind (for example a soffit vent as an upper vent). Check the survey: intake and exhaust totals depend on it.",
+      ventIds: ids(oddLocation),
+    });
+  }
+  return findings;
+}

@@ -1,0 +1,56 @@
+/**
+ * Vent kinds (trade terms, DESIGN.md §4) and what each implies for the rules.
+ */
+
+export const VENT_KINDS = [
+  "ridge",
+  "soffit-continuous",
+  "soffit-individual",
+  "drip-edge",
+  "fascia",
+  "box",
+  "turbine",
+  "off-ridge",
+  "cupola",
+  "gable-louver",
+  "powered-roof",
+  "powered-gable",
+  "solar-powered",
+] as const;
+
+export type VentKind = (typeof VENT_KINDS)[number];
+
+export const POWERED_KINDS: ReadonlySet<VentKind> = new Set<VentKind>(["powered-roof", "powered-gable", "solar-powered"]);
+
+/** Eave and cornice vents: the "eave or cornice vents" of IRC R806.2. */
+export const EAVE_KINDS: ReadonlySet<VentKind> = new Set<VentKind>([
+  "soffit-continuous",
+  "soffit-individual",
+  "drip-edge",
+  "fascia",
+]);
+
+/**
+ * Kinds that sit at (or within inches of) the ridge, so their drop below the ridge is taken as
+ * 0 ft when the estimator did not record one. An off-ridge vent sits just below the ridge line;
+ * a cupola straddles it. This is Eavesight's assumption and is stated in the reasons.
+ */
+export const AT_RIDGE_KINDS: ReadonlySet<VentKind> = new Set<VentKind>(["ridge", "off-ridge", "cupola"]);
+
+export const isPoweredKind = (kind: VentKind): boolean => POWERED_KINDS.has(kind);
+
+export const VENT_KIND_LABELS: Readonly<Record<VentKind, string>> = {
+  ridge: "ridge vent",
+  "soffit-continuous": "continuous soffit vent",
+  "soffit-individual": "individual soffit vent",
+  "drip-edge": "drip-edge intake vent",
+  fascia: "fascia vent",
+  box: "box (static) vent",
+  turbine: "turbine vent",
+  "off-ridge": "off-ridge vent",
+  cupola: "cupola",
+  "gable-louver": "gable louver",
+  "powered-roof": "powered roof fan",
+  "powered-gable": "powered gable fan",
+  "solar-powered": "solar-powered fan",
+};

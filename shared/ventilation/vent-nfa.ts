@@ -1,0 +1,70 @@
+/**
+ * Net free area of each recorded vent. NFA is the open area air can pass through after screens,
+ * louvers and baffles (the figure R806.2 counts). Powered fans are mechanical: they are rated in
+ * cfm and contribute no NFA here [issue 3; HVI treats them separately, SRC 6].
+ */
+import { formatNumber, roundTo } from "../units/format";
+import { coveringFactor, describeCovering } from "./covering-factors";
+import type { Vent, VentLocation } from "./schema";
+import { isPoweredKind, type VentKind } from "./vent-kinds";
+
+export interface VentNfa {
+  ventId: string;
+  kind: VentKind;
+  location: VentLocation;
+  isPowered: boolean;
+  /** Net free area of the whole entry (all units), sq in, rounded to 0.01; 0 for powered fans. */
+  nfaSqIn: number;
+  /** Rated airflow of the whole entry (all units), cfm; 0 for passive vents. */
+  airflowCfm: number;
+  /** The arithmetic in words, e.g. "40 ft × 18 sq in per ft = 720 sq in". */
+  explanation: string;
+}
+
+/**
+ * @example
+ * ventNfa({ id: "g1", kind: "gable-louver", location: "upper", grossWidthIn: 14, grossHeightIn: 24, covering: { mesh: "1/8", louvers: true } }).nfaSqIn
+ * // 149.33  (336 sq in ÷ 2.25)
+ */
+export function ventNfa(vent: Vent): VentNfa {
+  const quantity = vent.quantity ?? 1;
+  const base = { ventId: vent.id, kind: vent.kind, location: vent.location };
+  const qtyText = (each: string) => (quantity > 1 ? `${formatNumber(quantity)} × ${each}` : each);
+
+  if (isPoweredKind(vent.kind)) {
+    const airflowCfm = quantity * (vent.cfm ?? 0);
+    return {
+      ...base,
+      isPowered: true,
+      nfaSqIn: 0,
+      airflowCfm,
+      explanation: `${qtyText(`${formatNumber(vent.cfm ?? 0)} cfm`)}${quantity > 1 ? ` = ${formatNumber(airflowCfm)} cfm` : ""}; a powered fan is mechanical and adds no net free area`,
+    };
+  }
+
+  let exactSqIn: number;
+  let explanation: string;
+  if (vent.nfaSqIn !== undefined) {
+    exactSqIn = quantity * vent.nfaSqIn;
+    explanation = `rated ${qtyText(`${formatNumber(vent.nfaSqIn)} sq in`)}`;
+  } else if (vent.nfaSqInPerUnit !== undefined) {
+    exactSqIn = quantity * vent.nfaSqInPerUnit;
+    explanation = qtyText(`${formatNumber(vent.nfaSqInPerUnit)} sq in`);
+  } else if (vent.lengthFt !== undefined && vent.nfaSqInPerFt !== undefined) {
+    exactSqIn = quantity * vent.lengthFt * vent.nfaSqInPerFt;
+    explanation = qtyText(`${formatNumber(vent.lengthFt)} ft × ${formatNumber(vent.nfaSqInPerFt)} sq in per ft`);
+  } else if (vent.grossWidthIn !== undefined && vent.grossHeightIn !== undefined && vent.covering !== undefined) {
+    const grossSqIn = vent.grossWidthIn * vent.grossHeightIn;
+    const factor = coveringFactor(vent.covering);
+    exactSqIn = (quantity * grossSqIn) / factor;
+    explanation = qtyText(
+      `${formatNumber(vent.grossWidthIn)} in × ${formatNumber(vent.grossHeightIn)} in = ${formatNumber(grossSqIn)} sq in gross ÷ ${formatNumber(factor)} (${describeCovering(vent.covering)})`,
+    );
+  } else {
+    // Unreachable for schema-valid input; kept finite on purpose.
+    exactSqIn = 0;
+    explanation = "no size recorded";
+  }
+  const nfaSqIn = roundTo(exactSqIn, 2);
+  return { ...base, isPowered: false, nfaSqIn, airflowCfm: 0, explanation: `${explanation} = ${formatNumber(nfaSqIn)} sq in` };
+}
