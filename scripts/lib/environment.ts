@@ -10,14 +10,27 @@ export interface Environment {
 }
 
 /** PostgreSQL up, database present, migrations applied: the common first half of start, dev and test. */
-export async function prepareDatabase(kind: "dev" | "test", opts: { recreate?: boolean } = {}): Promise<Environment> {
+export async function prepareDatabase(kind: "dev" | "test", opts: { recreate?: boolean; database?: string } = {}): Promise<Environment> {
   const cluster = kind === "dev" ? devCluster() : testCluster();
   const info = ensureCluster(cluster);
-  const database = kind === "dev" ? "eavesight" : "eavesight_test";
+  const database = opts.database ?? (kind === "dev" ? "eavesight" : "eavesight_test");
   ensureDatabase(cluster, database, { recreate: opts.recreate });
   const databaseUrl = info.appUrl(database);
   await runMigrations(databaseUrl);
   return { cluster, databaseUrl, env: { ...process.env, DATABASE_URL: databaseUrl } };
+}
+
+/** A free TCP port on loopback, so several test runs on one machine never collide. */
+export async function freePort(): Promise<number> {
+  const { createServer } = await import("node:net");
+  return new Promise((resolve, reject) => {
+    const srv = createServer();
+    srv.once("error", reject);
+    srv.listen(0, "127.0.0.1", () => {
+      const port = (srv.address() as { port: number }).port;
+      srv.close(() => resolve(port));
+    });
+  });
 }
 
 export function buildClient(): void {

@@ -178,6 +178,17 @@ export function ensureDatabase(cfg: ClusterConfig, database: string, opts: { rec
   if (has !== "1") psqlSuper(bin, p.socketDir, cfg.port, `create database ${q} owner ${APP_ROLE}`);
 }
 
+export function listDatabases(cfg: ClusterConfig): string[] {
+  const p = clusterPaths(cfg);
+  return psqlSuper(pgBinDir(), p.socketDir, cfg.port, "select datname from pg_database where not datistemplate").split("\n").filter(Boolean);
+}
+
+export function dropDatabase(cfg: ClusterConfig, database: string): void {
+  const p = clusterPaths(cfg);
+  const q = database.replace(/[^a-z0-9_]/g, "");
+  psqlSuper(pgBinDir(), p.socketDir, cfg.port, `drop database if exists ${q} with (force)`);
+}
+
 export function stopCluster(cfg: ClusterConfig, mode: "fast" | "immediate" = "fast"): void {
   const bin = findBinDir();
   const p = clusterPaths(cfg);

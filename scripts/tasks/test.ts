@@ -8,7 +8,8 @@
 import { spawn } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync, rmSync } from "node:fs";
 import path from "node:path";
-import { prepareDatabase, buildClient, startServer, stopChild } from "../lib/environment.ts";
+import { prepareDatabase, buildClient, startServer, stopChild, freePort } from "../lib/environment.ts";
+import { dropDatabase, listDatabases, testCluster } from "../lib/postgres.ts";
 import { startFakeSmtp } from "../lib/fake-smtp.ts";
 import { seedDemo } from "../lib/seed.ts";
 import { ensureChromium } from "../lib/chromium.ts";
@@ -45,9 +46,24 @@ async function vitest(step: string, projects: string[], env: NodeJS.ProcessEnv) 
   results.push({ step, ok: r.status === 0, summary });
 }
 
-const testPort = Number(process.env.EAVESIGHT_TEST_PORT ?? 3100);
-const smtpPort = Number(process.env.EAVESIGHT_TEST_SMTP_PORT ?? 2526);
-const { databaseUrl, env: baseEnv } = await prepareDatabase("test", { recreate: true });
+// Each run gets its own database and ports, so two runs on one machine never disturb each other;
+// databases left by runs that died are dropped here.
+const testPort = Number(process.env.EAVESIGHT_TEST_PORT ?? (await freePort()));
+const smtpPort = Number(process.env.EAVESIGHT_TEST_SMTP_PORT ?? (await freePort()));
+const database = `eavesight_test_${process.pid}`;
+const { databaseUrl, env: baseEnv } = await prepareDatabase("test", { recreate: true, database });
+for (const name of listDatabases(testCluster())) {
+  const pid = Number(/^eavesight_test_(\d+)$/.exec(name)?.[1]);
+  if (pid && pid !== process.pid && !isAlive(pid)) dropDatabase(testCluster(), name);
+}
+function isAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch {
+    return false;
+  }
+}
 await seedDemo(databaseUrl);
 const smtp = await startFakeSmtp({ port: smtpPort, databaseUrl, quiet: true });
 const env: NodeJS.ProcessEnv = {
@@ -79,6 +95,7 @@ try {
   }
 } finally {
   await smtp.close();
+  dropDatabase(testCluster(), database);
 }
 
 const seconds = Math.round((Date.now() - started) / 1000);
