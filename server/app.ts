@@ -21,6 +21,7 @@ import { createTeamRepository } from "./modules/team/team.repository.ts";
 import { createTeamService } from "./modules/team/team.service.ts";
 import { teamRouter } from "./modules/team/team.router.ts";
 import { outboxRouter } from "./modules/outbox/outbox.router.ts";
+import { createOutboxRepository } from "./modules/outbox/outbox.repository.ts";
 
 export interface AppDeps {
   env: Env;
@@ -98,7 +99,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(sessionMiddleware(lucia, now));
   api.use("/auth", authRouter(authService, lucia));
   api.use("/team", requireSignIn, teamRouter(teamService));
-  api.use("/outbox", requireSignIn, outboxRouter(db));
+  api.use("/outbox", requireSignIn, outboxRouter(createOutboxRepository(db)));
 
   api.use((req, _res, next) => next(new AppError("not-found", `No API route ${req.method} ${req.path}.`, 404)));
   app.use("/api", api);
