@@ -16,8 +16,10 @@ import { ensureChromium } from "../lib/chromium.ts";
 import { projectRoot, log } from "../lib/paths.ts";
 
 const started = Date.now();
-const onlyArg = process.argv.find((a) => a.startsWith("--only="))?.slice(7) ?? process.argv[process.argv.indexOf("--only") + 1];
-const only = process.argv.includes("--only") || onlyArg ? new Set((onlyArg ?? "").split(",")) : null;
+// `--only unit,api` or `--only=unit,api` runs a subset; no flag runs everything.
+const onlyIndex = process.argv.indexOf("--only");
+const onlyArg = process.argv.find((a) => a.startsWith("--only="))?.slice(7) ?? (onlyIndex >= 0 ? process.argv[onlyIndex + 1] : undefined);
+const only = onlyArg ? new Set(onlyArg.split(",")) : null;
 const wants = (step: string) => !only || only.has(step);
 
 const results: { step: string; ok: boolean; summary: string }[] = [];
