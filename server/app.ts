@@ -22,6 +22,23 @@ import { createTeamService } from "./modules/team/team.service.ts";
 import { teamRouter } from "./modules/team/team.router.ts";
 import { outboxRouter } from "./modules/outbox/outbox.router.ts";
 import { createOutboxRepository } from "./modules/outbox/outbox.repository.ts";
+import { createStorage, type Storage } from "./lib/storage/index.ts";
+import type { RouteInfo } from "./lib/routes.ts";
+import { createCustomersRepository } from "./modules/customers/customers.repository.ts";
+import { createCustomersService } from "./modules/customers/customers.service.ts";
+import { customersRouter } from "./modules/customers/customers.router.ts";
+import { createProjectsRepository } from "./modules/projects/projects.repository.ts";
+import { createProjectsService } from "./modules/projects/projects.service.ts";
+import { projectsRouter } from "./modules/projects/projects.router.ts";
+import { createSpacesRepository } from "./modules/spaces/spaces.repository.ts";
+import { createSpacesService } from "./modules/spaces/spaces.service.ts";
+import { spacesRouter } from "./modules/spaces/spaces.router.ts";
+import { createPhotosRepository } from "./modules/photos/photos.repository.ts";
+import { createPhotosService } from "./modules/photos/photos.service.ts";
+import { photosRouter } from "./modules/photos/photos.router.ts";
+import { createUsersRepository } from "./modules/users/users.repository.ts";
+import { createUsersService } from "./modules/users/users.service.ts";
+import { usersRouter } from "./modules/users/users.router.ts";
 
 export interface AppDeps {
   env: Env;
@@ -32,6 +49,8 @@ export interface AppDeps {
   clientDir?: string;
   /** The clock; tests move it to check expiry and lockouts. */
   now?: () => Date;
+  /** File storage; by default the driver STORAGE_DRIVER names. */
+  storage?: Storage;
 }
 
 export function createApp(deps: AppDeps): Express {
@@ -79,6 +98,14 @@ export function createApp(deps: AppDeps): Express {
     repo: createTeamRepository(db), audit, jobs: deps.jobs, appOrigin, now,
     companyName: async (id) => (await authRepo.findCompany(id))?.name ?? "your company",
   });
+  const storage = deps.storage ?? createStorage(env);
+  const projectsRepo = createProjectsRepository(db);
+  const spacesRepo = createSpacesRepository(db);
+  const photosService = createPhotosService({ repo: createPhotosRepository(db), storage, projects: projectsRepo, spaces: spacesRepo });
+  const spacesService = createSpacesService({ repo: spacesRepo, projects: projectsRepo });
+  const projectsService = createProjectsService({ repo: projectsRepo, spaces: spacesRepo, photos: photosService, audit });
+  const customersService = createCustomersService({ repo: createCustomersRepository(db), audit });
+  const usersService = createUsersService({ repo: createUsersRepository(db) });
 
   const api = express.Router();
   api.use(express.json({ limit: "1mb" }));
@@ -100,6 +127,10 @@ export function createApp(deps: AppDeps): Express {
   api.use("/auth", authRouter(authService, lucia));
   api.use("/team", requireSignIn, teamRouter(teamService));
   api.use("/outbox", requireSignIn, outboxRouter(createOutboxRepository(db)));
+  // Declared routes (server/lib/routes.ts): each carries its method, path and access, listed in app.locals.routes.
+  const declared = [customersRouter(customersService), projectsRouter(projectsService), spacesRouter(spacesService), photosRouter(photosService), usersRouter(usersService)];
+  for (const router of declared) api.use(router);
+  app.locals.routes = declared.flatMap((router) => router.routes.map((route): RouteInfo => ({ ...route, path: `/api${route.path}` })));
 
   api.use((req, _res, next) => next(new AppError("not-found", `No API route ${req.method} ${req.path}.`, 404)));
   app.use("/api", api);

@@ -4,11 +4,14 @@
  * rows are found by their natural keys and only missing ones are added.
  */
 import { randomUUID } from "node:crypto";
-import { sql as rawSql } from "drizzle-orm";
+import { and, eq, sql as rawSql } from "drizzle-orm";
 import { createDb, type Database } from "../../server/db/client.ts";
-import { companies, users } from "../../server/db/schema/index.ts";
+import { atticSpaces, companies, customers, projects, users } from "../../server/db/schema/index.ts";
 import { hashPassword } from "../../server/lib/password.ts";
 import type { Role } from "../../shared/schemas/roles.ts";
+import type { ProjectStatus } from "../../shared/schemas/projects.ts";
+import { SpaceSurveySchema, type SpaceSurvey } from "../../shared/schemas/survey.ts";
+import type { CodeBasis, RoofColor, VaporRetarder } from "../../shared/ventilation/index.ts";
 import { log } from "./paths.ts";
 
 export const DEMO_PASSWORD = "eavesight-demo";
@@ -50,10 +53,191 @@ export async function seedAccounts(db: Database): Promise<Record<string, string>
   return companyIds;
 }
 
+interface DemoCustomer {
+  company: string;
+  name: string;
+  phone?: string;
+  email?: string;
+  billingAddress?: string;
+  notes?: string;
+}
+
+export interface DemoProject {
+  company: string;
+  /** Natural key within the company. */
+  title: string;
+  customer: string;
+  siteAddress: string;
+  status: ProjectStatus;
+  estimatorEmail: string | null;
+  climateZone: number;
+  moistureRegime: "A" | "B" | "C" | null;
+  codeBasis: CodeBasis;
+  ceilingVaporRetarder: VaporRetarder;
+  roofColor: RoofColor;
+  notes?: string;
+  /** Input of SpaceSurveySchema (defaults filled in when seeding). */
+  spaces: (Partial<SpaceSurvey> & { name: string })[];
+}
+
+export const DEMO_CUSTOMERS: DemoCustomer[] = [
+  { company: "tallgrass", name: "Odette Varnum", phone: "(555) 014-3108", email: "odette.varnum@example.com", billingAddress: "214 Thistledown Lane, Marrow Creek" },
+  { company: "tallgrass", name: "Silas Brennock", phone: "(555) 014-6621", email: "silas.brennock@example.com", billingAddress: "87 Kestrel Ridge Road, Marrow Creek" },
+  { company: "tallgrass", name: "Imogen Farrowby", phone: "(555) 014-2257", email: "imogen.farrowby@example.com", billingAddress: "5 Cattail Court, Marrow Creek" },
+  { company: "tallgrass", name: "Theo Quillan", phone: "(555) 014-9034", billingAddress: "1120 Sweetgrass Avenue, Marrow Creek", notes: "Prefers calls after 5 pm." },
+  { company: "tallgrass", name: "June Castellane", email: "june.castellane@example.com", billingAddress: "33 Larkspur Way, Marrow Creek" },
+  { company: "tallgrass", name: "Amos Whitcombe", phone: "(555) 014-4480", billingAddress: "PO Box 12, Marrow Creek", notes: "Rental property; tenant lets us in." },
+  { company: "bluestem", name: "Lorna Pettibone", phone: "(555) 014-7302", billingAddress: "19 Old Mill Crossing, Marrow Creek" },
+];
+
+const TALLGRASS_ESTIMATOR = "estimator@tallgrass.example";
+const zone4 = { climateZone: 4, moistureRegime: "A" as const, codeBasis: "irc-2018" as const, ceilingVaporRetarder: "none" as const };
+
+export const DEMO_PROJECTS: DemoProject[] = [
+  {
+    // (a) A powered gable fan high on the gable, a ridge vent beside it and little soffit intake:
+    // the fan pulls air in through the ridge (short circuit) and starves for intake. The fan is also dead.
+    company: "tallgrass", title: "Varnum attic — gable fan and ridge vent", customer: "Odette Varnum",
+    siteAddress: "214 Thistledown Lane, Marrow Creek", status: "surveyed", estimatorEmail: TALLGRASS_ESTIMATOR,
+    ...zone4, roofColor: "dark", notes: "Homeowner reports a hot upstairs and a fan that hums but does not turn.",
+    spaces: [{
+      name: "Main attic",
+      roof: { form: "gable", pitchIn12: 6, ridgeLengthFt: 40, eaveLengthFt: 80 },
+      sections: [{ kind: "rect", lengthFt: 40, widthFt: 30 }],
+      vents: [
+        { id: "ridge-1", kind: "ridge", location: "upper", lengthFt: 36, nfaSqInPerFt: 18, label: "Shingle-over ridge vent" },
+        {
+          id: "gable-fan-1", kind: "powered-gable", location: "upper", dropBelowRidgeFt: 2, cfm: 1200, mounting: "gable",
+          hasThermostat: true, thermostatSetPointF: 100, control: "thermostat", sealedToOpening: true, label: "East gable fan",
+          diagnostics: { isPowerVerifiedOff: true, isBladeFreeToSpin: false, windingResistanceOhms: "open" },
+        },
+        { id: "soffit-1", kind: "soffit-individual", location: "lower", quantity: 6, nfaSqInPerUnit: 50, label: "Rectangular soffit vents" },
+      ],
+      site: { atmosphericCombustionAppliance: true, gableFanSealed: true, bafflesPresent: true },
+      notes: "Fan blade will not turn by hand: sealed bearings seized. Winding reads open (OL) on the meter. Gas water heater in the basement.",
+    }],
+  },
+  {
+    // (b) Balanced ridge and continuous soffit meeting 1/300 under the 2018 text in zone 4:
+    // 324 sq in upper at the ridge (45 % of the 720 sq in required), 405 sq in low at the eaves.
+    company: "tallgrass", title: "Brennock attic — balanced ridge and soffit", customer: "Silas Brennock",
+    siteAddress: "87 Kestrel Ridge Road, Marrow Creek", status: "proposed", estimatorEmail: TALLGRASS_ESTIMATOR,
+    ...zone4, roofColor: "medium",
+    spaces: [{
+      name: "Main attic",
+      roof: { form: "gable", pitchIn12: 6, ridgeLengthFt: 40, eaveLengthFt: 100 },
+      sections: [{ kind: "rect", lengthFt: 50, widthFt: 30 }],
+      vents: [
+        { id: "ridge-1", kind: "ridge", location: "upper", lengthFt: 36, nfaSqInPerFt: 9, label: "Ridge vent" },
+        { id: "soffit-1", kind: "soffit-continuous", location: "lower", lengthFt: 90, nfaSqInPerFt: 4.5, label: "Continuous soffit strip" },
+      ],
+      site: { bafflesPresent: true, ceilingAirSealed: true },
+    }],
+  },
+  {
+    // (c) An L-shaped ranch: the main attic as one outline, the attached garage vented on its own.
+    company: "tallgrass", title: "Farrowby ranch — L-shaped attic and garage", customer: "Imogen Farrowby",
+    siteAddress: "5 Cattail Court, Marrow Creek", status: "surveyed", estimatorEmail: TALLGRASS_ESTIMATOR,
+    ...zone4, roofColor: "light",
+    spaces: [
+      {
+        name: "Main attic",
+        roof: { form: "hip", pitchIn12: 5, ridgeLengthFt: 28, eaveLengthFt: 200 },
+        sections: [{ kind: "polygon", id: "main-l", label: "L-shaped house", pointsFt: [[0, 0], [48, 0], [48, 28], [20, 28], [20, 52], [0, 52]], spanFt: 28 }],
+        vents: [
+          { id: "box-1", kind: "box", location: "upper", quantity: 6, nfaSqInPerUnit: 50, dropBelowRidgeFt: 1.5, label: "Box vents near the ridge" },
+          { id: "soffit-1", kind: "soffit-individual", location: "lower", quantity: 12, nfaSqInPerUnit: 40, label: "Round soffit vents" },
+        ],
+        site: { soffitsBlocked: true, bafflesPresent: false },
+        notes: "Blown insulation covers about half the soffit vents on the north leg.",
+      },
+      {
+        name: "Garage attic",
+        roof: { form: "gable", pitchIn12: 6, ridgeLengthFt: 24, eaveLengthFt: 48 },
+        sections: [{ kind: "rect", lengthFt: 24, widthFt: 22 }],
+        vents: [
+          { id: "gable-louver-1", kind: "gable-louver", location: "upper", grossWidthIn: 14, grossHeightIn: 18, covering: { mesh: "1/4", louvers: true }, dropBelowRidgeFt: 2, label: "North gable louver" },
+          { id: "gable-louver-2", kind: "gable-louver", location: "upper", grossWidthIn: 14, grossHeightIn: 18, covering: { mesh: "1/4", louvers: true }, dropBelowRidgeFt: 2, label: "South gable louver" },
+        ],
+        site: {},
+      },
+    ],
+  },
+  {
+    company: "tallgrass", title: "Quillan reroof — add ridge vent", customer: "Theo Quillan",
+    siteAddress: "1120 Sweetgrass Avenue, Marrow Creek", status: "lead", estimatorEmail: null, ...zone4, roofColor: "medium",
+    notes: "Called about a reroof; wants ventilation looked at while the shingles are off.", spaces: [],
+  },
+  {
+    company: "tallgrass", title: "Castellane attic — bath fan into attic", customer: "June Castellane",
+    siteAddress: "33 Larkspur Way, Marrow Creek", status: "sold", estimatorEmail: TALLGRASS_ESTIMATOR, ...zone4, roofColor: "medium",
+    spaces: [{
+      name: "Main attic",
+      roof: { form: "gable", pitchIn12: 8, ridgeLengthFt: 34, eaveLengthFt: 68 },
+      sections: [{ kind: "area", areaSqFt: 1020 }],
+      vents: [
+        { id: "turbine-1", kind: "turbine", location: "upper", quantity: 2, nfaSqInPerUnit: 112, dropBelowRidgeFt: 1 },
+        { id: "soffit-1", kind: "soffit-continuous", location: "lower", lengthFt: 60, nfaSqInPerFt: 6 },
+      ],
+      site: { bathFanIntoAttic: true, moistureOrMould: true },
+      notes: "Frost and staining on the sheathing above the bathroom.",
+    }],
+  },
+  {
+    company: "tallgrass", title: "Whitcombe rental — turbine replacement", customer: "Amos Whitcombe",
+    siteAddress: "402 Old Mill Crossing, Marrow Creek", status: "lost", estimatorEmail: TALLGRASS_ESTIMATOR, ...zone4, roofColor: "dark", spaces: [],
+  },
+  {
+    company: "tallgrass", title: "Varnum garage — soffit repair", customer: "Odette Varnum",
+    siteAddress: "214 Thistledown Lane, Marrow Creek", status: "completed", estimatorEmail: TALLGRASS_ESTIMATOR, ...zone4, roofColor: "dark", spaces: [],
+  },
+  {
+    company: "bluestem", title: "Pettibone attic survey", customer: "Lorna Pettibone",
+    siteAddress: "19 Old Mill Crossing, Marrow Creek", status: "lead", estimatorEmail: null,
+    climateZone: 4, moistureRegime: "A", codeBasis: "irc-2018", ceilingVaporRetarder: "none", roofColor: "medium",
+    spaces: [{ name: "Main attic", sections: [{ kind: "rect", lengthFt: 36, widthFt: 28 }], vents: [] }],
+  },
+];
+
+/** Customers, projects and attic spaces of the demo, each added only when its natural key is missing. */
+export async function seedSurveys(db: Database, companyIds: Record<string, string>): Promise<void> {
+  const customerIds = new Map<string, string>();
+  for (const c of DEMO_CUSTOMERS) {
+    const companyId = companyIds[c.company]!;
+    const find = () => db.select({ id: customers.id }).from(customers).where(and(eq(customers.companyId, companyId), eq(customers.name, c.name))).limit(1);
+    let [row] = await find();
+    if (!row) {
+      [row] = await db.insert(customers).values({ companyId, name: c.name, phone: c.phone ?? null, email: c.email ?? null, billingAddress: c.billingAddress ?? null, notes: c.notes ?? null }).returning({ id: customers.id });
+    }
+    customerIds.set(`${c.company}/${c.name}`, row!.id);
+  }
+  for (const p of DEMO_PROJECTS) {
+    const companyId = companyIds[p.company]!;
+    let [project] = await db.select({ id: projects.id }).from(projects).where(and(eq(projects.companyId, companyId), eq(projects.title, p.title))).limit(1);
+    if (!project) {
+      const [estimator] = p.estimatorEmail ? await db.select({ id: users.id }).from(users).where(rawSql`lower(${users.email}) = ${p.estimatorEmail}`) : [];
+      [project] = await db.insert(projects).values({
+        companyId, customerId: customerIds.get(`${p.company}/${p.customer}`)!, title: p.title, siteAddress: p.siteAddress, status: p.status,
+        estimatorId: estimator?.id ?? null, climateZone: p.climateZone, moistureRegime: p.moistureRegime, codeBasis: p.codeBasis,
+        ceilingVaporRetarder: p.ceilingVaporRetarder, roofColor: p.roofColor, notes: p.notes ?? null,
+      }).returning({ id: projects.id });
+    }
+    // Spaces only go into a project that has none, so a space someone deleted in the demo stays deleted.
+    const [hasSpace] = await db.select({ id: atticSpaces.id }).from(atticSpaces).where(eq(atticSpaces.projectId, project!.id)).limit(1);
+    if (hasSpace) continue;
+    for (const [position, space] of p.spaces.entries()) {
+      // Parsed by the same schema the API uses, so demo data can never be something the API would refuse.
+      const survey = SpaceSurveySchema.parse({ roof: {}, sections: [], vents: [], ...space });
+      await db.insert(atticSpaces).values({ ...survey, companyId, projectId: project!.id, position });
+    }
+  }
+}
+
 export async function seedDemo(databaseUrl: string): Promise<void> {
   const { db, sql } = createDb(databaseUrl, { max: 2 });
   try {
-    await seedAccounts(db);
+    const companyIds = await seedAccounts(db);
+    await seedSurveys(db, companyIds);
     log("demo data seeded (Tallgrass Exteriors, Bluestem Roofing)");
   } finally {
     await sql.end();

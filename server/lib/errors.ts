@@ -5,6 +5,8 @@ export class AppError extends Error {
     message: string,
     readonly status: number = 400,
     readonly fields?: Record<string, string>,
+    /** Extra members of the error body the client needs, e.g. the current record on a 409. */
+    readonly details?: Record<string, unknown>,
   ) {
     super(message);
     this.name = "AppError";

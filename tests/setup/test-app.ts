@@ -1,4 +1,7 @@
 import { randomUUID } from "node:crypto";
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
 import request from "supertest";
 import { eq, sql as rawSql } from "drizzle-orm";
 import { createApp } from "../../server/app.ts";
@@ -15,10 +18,17 @@ import { testDatabaseUrl, testSmtpPort } from "./test-env.ts";
 export const ORIGIN = "http://127.0.0.1:3999";
 export const TEST_PASSWORD = "correct horse battery";
 
-/** The real app on the real test database, with a clock the test can move. */
-export async function startTestApp() {
+/**
+ * The real app on the real test database, with a clock the test can move. Files go to a
+ * throwaway folder of this test file unless `envOverrides` names other storage.
+ */
+export async function startTestApp(opts: { envOverrides?: Record<string, string> } = {}) {
   const databaseUrl = testDatabaseUrl();
-  const env = parseEnv({ ...process.env, DATABASE_URL: databaseUrl, APP_ORIGIN: ORIGIN, LOG_LEVEL: "silent", SERVE_CLIENT: "false" });
+  const storageDir = mkdtempSync(path.join(tmpdir(), "eavesight-files-"));
+  const env = parseEnv({
+    ...process.env, DATABASE_URL: databaseUrl, APP_ORIGIN: ORIGIN, LOG_LEVEL: "silent", SERVE_CLIENT: "false",
+    STORAGE_DRIVER: "local", STORAGE_DIR: storageDir, ...opts.envOverrides,
+  });
   const logger = createLogger("silent");
   const { db, sql } = createDb(databaseUrl, { max: 5 });
   const mailer = createMailer({ host: "127.0.0.1", port: testSmtpPort(), from: "Eavesight <no-reply@eavesight.example>" });
@@ -64,7 +74,8 @@ export async function startTestApp() {
     await jobs.stop();
     mailer.close();
     await sql.end({ timeout: 2 });
+    rmSync(storageDir, { recursive: true, force: true });
   }
-  return { app, db, sql, clock, makeCompany, makeUser, signIn, waitForMail, mailCount, close, request: () => request(app) };
+  return { app, db, sql, clock, env, makeCompany, makeUser, signIn, waitForMail, mailCount, close, request: () => request(app) };
 }
 export type TestApp = Awaited<ReturnType<typeof startTestApp>>;

@@ -4,3 +4,7 @@ export * from "./sessions.ts";
 export * from "./auth-tokens.ts";
 export * from "./audit-events.ts";
 export * from "./outbox-messages.ts";
+export * from "./customers.ts";
+export * from "./projects.ts";
+export * from "./attic-spaces.ts";
+export * from "./photos.ts";

@@ -1,0 +1,36 @@
+import { asc, eq } from "drizzle-orm";
+import type { Database } from "../../db/client.ts";
+import { photos } from "../../db/schema/index.ts";
+import { scoped } from "../../lib/tenant.ts";
+import type { Actor } from "../../lib/request-context.ts";
+
+const photoColumns = {
+  id: photos.id, projectId: photos.projectId, spaceId: photos.spaceId, ventId: photos.ventId, findingCode: photos.findingCode,
+  caption: photos.caption, storageKey: photos.storageKey, thumbKey: photos.thumbKey, contentType: photos.contentType,
+  sizeBytes: photos.sizeBytes, width: photos.width, height: photos.height, uploadedBy: photos.uploadedBy, createdAt: photos.createdAt,
+};
+
+export function createPhotosRepository(db: Database) {
+  return {
+    listForProject: (actor: Actor, projectId: string) =>
+      db.select(photoColumns).from(photos).where(scoped(photos, actor, eq(photos.projectId, projectId))).orderBy(asc(photos.createdAt), asc(photos.id)),
+    async find(actor: Actor, id: string) {
+      const [row] = await db.select(photoColumns).from(photos).where(scoped(photos, actor, eq(photos.id, id))).limit(1);
+      return row ?? null;
+    },
+    async insert(actor: Actor, row: Omit<typeof photos.$inferInsert, "companyId">) {
+      const [created] = await db.insert(photos).values({ ...row, companyId: actor.companyId }).returning(photoColumns);
+      return created!;
+    },
+    async updateCaption(actor: Actor, id: string, caption: string | null) {
+      const [row] = await db.update(photos).set({ caption }).where(scoped(photos, actor, eq(photos.id, id))).returning(photoColumns);
+      return row ?? null;
+    },
+    async remove(actor: Actor, id: string) {
+      const [row] = await db.delete(photos).where(scoped(photos, actor, eq(photos.id, id))).returning(photoColumns);
+      return row ?? null;
+    },
+  };
+}
+export type PhotosRepository = ReturnType<typeof createPhotosRepository>;
+export type PhotoRow = NonNullable<Awaited<ReturnType<PhotosRepository["find"]>>>;

@@ -1,0 +1,107 @@
+import { AppError, notFound } from "../../lib/errors.ts";
+import type { Audit } from "../../lib/audit.ts";
+import type { Actor, RequestMeta } from "../../lib/request-context.ts";
+import type { ListQuery, ProjectInput, ProjectPatch } from "../../../shared/schemas/projects.ts";
+import { analyzeAttic, AtticInputSchema, type AtticAnalysis } from "../../../shared/ventilation/index.ts";
+import { toAtticInput, type ProjectBasis } from "../../../shared/survey/to-attic-input.ts";
+import type { SpaceSurvey } from "../../../shared/schemas/survey.ts";
+import type { PhotosService } from "../photos/photos.service.ts";
+import type { SpacesRepository } from "../spaces/spaces.repository.ts";
+import type { ProjectRow, ProjectsRepository } from "./projects.repository.ts";
+
+export const STALE_PROJECT_MESSAGE = "Someone else saved this project since you opened it.";
+
+export interface SpaceAnalysis {
+  spaceId: string;
+  name: string;
+  analysis: AtticAnalysis | null;
+  issues: { path: string; message: string }[];
+}
+
+/**
+ * One space through the shared core, exactly as the client's live panel does it: the same
+ * toAtticInput, the same schema, the same analyzeAttic. Never stored: always recomputed.
+ */
+export function analyzeSpace(project: ProjectBasis, space: SpaceSurvey & { id: string }): SpaceAnalysis {
+  const base = { spaceId: space.id, name: space.name };
+  if (space.sections.length === 0) {
+    return { ...base, analysis: null, issues: [{ path: "sections", message: "Add at least one section of attic floor to see the analysis." }] };
+  }
+  const parsed = AtticInputSchema.safeParse(toAtticInput(project, space));
+  if (!parsed.success) {
+    return { ...base, analysis: null, issues: parsed.error.issues.map((i) => ({ path: i.path.map(String).join("."), message: i.message })) };
+  }
+  return { ...base, analysis: analyzeAttic(parsed.data), issues: [] };
+}
+
+export function createProjectsService(deps: { repo: ProjectsRepository; spaces: SpacesRepository; photos: PhotosService; audit: Audit }) {
+  const { repo } = deps;
+
+  async function requireProject(actor: Actor, id: string): Promise<ProjectRow> {
+    const project = await repo.find(actor, id);
+    if (!project) throw notFound("That project");
+    return project;
+  }
+
+  /** Ids in the body must name rows of the caller's own company; a foreign one reads as "not found" in that field. */
+  async function checkReferences(actor: Actor, input: { customerId?: string; estimatorId?: string | null }) {
+    const fields: Record<string, string> = {};
+    if (input.customerId !== undefined && !(await repo.customerExists(actor, input.customerId))) fields.customerId = "Choose one of your customers.";
+    if (input.estimatorId) {
+      const user = await repo.findUser(actor, input.estimatorId);
+      if (!user || !user.isActive) fields.estimatorId = "Choose an active member of your team.";
+    }
+    const first = Object.entries(fields)[0];
+    if (first) throw new AppError("invalid-input", `Please check ${first[0]}: ${first[1]}`, 400, fields);
+  }
+
+  return {
+    requireProject,
+
+    async list(actor: Actor, query: ListQuery) {
+      const { items, total } = await repo.list(actor, query);
+      return { items, total, page: query.page, pageSize: query.pageSize };
+    },
+
+    async create(actor: Actor, input: ProjectInput, meta: RequestMeta): Promise<ProjectRow> {
+      await checkReferences(actor, input);
+      const project = await repo.insert(actor, {
+        ...input,
+        codeBasis: input.codeBasis ?? (await repo.defaultCodeBasis(actor)),
+        estimatorId: input.estimatorId ?? null,
+        moistureRegime: input.moistureRegime ?? null,
+        notes: input.notes ?? null,
+      });
+      await deps.audit({ event: "project-created", companyId: actor.companyId, userId: actor.userId, detail: { projectId: project.id } }, meta);
+      return project;
+    },
+
+    async detail(actor: Actor, id: string) {
+      const project = await requireProject(actor, id);
+      const [customer, estimator, spaces, photos] = await Promise.all([
+        repo.findCustomer(actor, project.customerId),
+        project.estimatorId ? repo.findUser(actor, project.estimatorId) : Promise.resolve(null),
+        deps.spaces.listForProject(actor, id),
+        deps.photos.listForProject(actor, id),
+      ]);
+      return { project, customer, estimator: estimator ? { id: estimator.id, name: estimator.name } : null, spaces, photos };
+    },
+
+    async update(actor: Actor, id: string, input: ProjectPatch): Promise<ProjectRow> {
+      const { version, ...patch } = input;
+      await requireProject(actor, id);
+      await checkReferences(actor, patch);
+      const updated = await repo.updateIfVersion(actor, id, version, patch);
+      if (updated) return updated;
+      const current = await requireProject(actor, id);
+      throw new AppError("stale-version", STALE_PROJECT_MESSAGE, 409, {}, { current });
+    },
+
+    async analysis(actor: Actor, id: string): Promise<{ spaces: SpaceAnalysis[] }> {
+      const project = await requireProject(actor, id);
+      const spaces = await deps.spaces.listForProject(actor, id);
+      return { spaces: spaces.map((space) => analyzeSpace(project, space)) };
+    },
+  };
+}
+export type ProjectsService = ReturnType<typeof createProjectsService>;

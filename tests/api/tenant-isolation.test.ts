@@ -1,0 +1,119 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import sharp from "sharp";
+import type { RouteInfo } from "../../server/lib/routes.ts";
+import { can, ROLES } from "../../shared/schemas/roles.ts";
+import { ORIGIN, startTestApp, type TestApp } from "../setup/test-app.ts";
+import { createCustomer, createProject, createSpace, mainAttic, makeTeam, type Agent, type Team } from "../setup/survey-fixtures.ts";
+
+let t: TestApp;
+let tallgrass: Team;
+let bluestem: Team;
+const ids: Record<string, string> = {};
+let png: Buffer;
+
+beforeAll(async () => {
+  t = await startTestApp();
+  [tallgrass, bluestem] = await Promise.all([makeTeam(t, "Tallgrass-like"), makeTeam(t, "Bluestem-like")]);
+  png = await sharp({ create: { width: 8, height: 8, channels: 3, background: "#888" } }).png().toBuffer();
+  const customer = await createCustomer(tallgrass.asOwner, { name: "Zephyrine Oddly-Unique" });
+  const project = await createProject(tallgrass.asOwner, customer.id, { title: "Qwertyuiop attic" });
+  const space = await createSpace(tallgrass.asOwner, project.id, mainAttic);
+  const second = await createSpace(tallgrass.asOwner, project.id, mainAttic);
+  const photo = await tallgrass.asOwner.post(`/api/projects/${project.id}/photos`).set("origin", ORIGIN).attach("file", png, "p.png");
+  Object.assign(ids, { customer: customer.id, project: project.id, space: space.id, secondSpace: second.id, photo: photo.body.photo.id });
+});
+afterAll(async () => t?.close());
+
+/** A body that would be accepted from the owner company, so only the tenant check can refuse it. */
+const BODIES: Record<string, () => Record<string, unknown> | "multipart" | undefined> = {
+  "get /api/customers/:id": () => undefined,
+  "patch /api/customers/:id": () => ({ name: "Taken over" }),
+  "delete /api/customers/:id": () => undefined,
+  "get /api/projects/:id": () => undefined,
+  "patch /api/projects/:id": () => ({ version: 1, title: "Taken over" }),
+  "get /api/projects/:id/analysis": () => undefined,
+  "post /api/projects/:id/spaces": () => ({ name: "Intruder attic" }),
+  "put /api/projects/:id/spaces/:spaceId": () => ({ ...mainAttic, version: 1 }),
+  "delete /api/projects/:id/spaces/:spaceId": () => undefined,
+  "post /api/projects/:id/spaces/:spaceId/copy-vents": () => ({ fromSpaceId: ids.secondSpace }),
+  "post /api/projects/:id/photos": () => "multipart",
+  "get /api/photos/:id": () => undefined,
+  "patch /api/photos/:id": () => ({ caption: "Taken over" }),
+  "delete /api/photos/:id": () => undefined,
+};
+
+function urlFor(route: RouteInfo, id: (param: string, route: RouteInfo) => string) {
+  return route.path.replace(/:(\w+)/g, (_, param: string) => id(param, route));
+}
+const realId = (param: string, route: RouteInfo) => {
+  if (param === "spaceId") return ids.space!;
+  if (route.path.startsWith("/api/customers")) return ids.customer!;
+  if (route.path.startsWith("/api/photos")) return ids.photo!;
+  return ids.project!;
+};
+
+function call(agent: Agent, route: RouteInfo, url: string) {
+  const body = BODIES[`${route.method} ${route.path}`]!();
+  const req = agent[route.method](url).set("origin", ORIGIN);
+  if (body === "multipart") return req.attach("file", png, "p.png");
+  return body ? req.send(body) : req;
+}
+
+const idRoutes = () => (t.app.locals.routes as RouteInfo[]).filter((r) => r.idParams?.length);
+
+describe("tenant isolation (generated from the declared routes)", () => {
+  it("when a route takes an id, then this test has a request body for it (so a new route cannot skip the check)", () => {
+    const declared = idRoutes().map((r) => `${r.method} ${r.path}`);
+    expect(declared.length).toBeGreaterThanOrEqual(14);
+    expect(declared.filter((key) => !(key in BODIES))).toEqual([]);
+  });
+
+  it("when another company's owner uses the first company's ids on every id-taking route, then each answers 404 and nothing changes", async () => {
+    for (const route of idRoutes()) {
+      const res = await call(bluestem.asOwner, route, urlFor(route, realId));
+      expect(res.status, `${route.method} ${route.path}`).toBe(404);
+      expect(res.body.error?.code, `${route.method} ${route.path}`).toMatch(/not-found/);
+    }
+    const detail = await tallgrass.asOwner.get(`/api/projects/${ids.project}`).expect(200);
+    expect(detail.body.project).toMatchObject({ title: "Qwertyuiop attic", version: 1 });
+    expect(detail.body.customer.name).toBe("Zephyrine Oddly-Unique");
+    expect(detail.body.spaces.map((s: { version: number; vents: unknown[] }) => [s.version, s.vents.length])).toEqual([[1, 3], [1, 3]]);
+    expect(detail.body.photos).toHaveLength(1);
+    expect(detail.body.photos[0].caption).toBeNull();
+  });
+
+  it("when an id in the path is malformed or path-like, then every id-taking route answers 404 too", async () => {
+    for (const route of idRoutes()) {
+      const res = await call(tallgrass.asOwner, route, urlFor(route, () => "..%2F..%2Fetc%2Fpasswd"));
+      expect(res.status, `${route.method} ${route.path}`).toBe(404);
+    }
+  });
+
+  it("when the other company lists and searches, then none of the first company's rows appear", async () => {
+    expect((await bluestem.asOwner.get("/api/projects?q=qwertyuiop")).body).toMatchObject({ items: [], total: 0 });
+    expect((await bluestem.asOwner.get("/api/projects")).body.total).toBe(0);
+    expect((await bluestem.asOwner.get("/api/customers?q=zephyrine")).body).toMatchObject({ items: [], total: 0 });
+    const users = (await bluestem.asOwner.get("/api/users")).body.map((u: { id: string }) => u.id);
+    expect(users.sort()).toEqual([bluestem.owner.id, bluestem.estimator.id, bluestem.sales.id].sort());
+    expect((await bluestem.asOwner.get(`/api/projects?estimatorId=${tallgrass.estimator.id}`)).body.total).toBe(0);
+  });
+});
+
+describe("roles (generated from the declared routes and shared/schemas/roles.ts)", () => {
+  it("when each role calls each declared route of its own company, then exactly the roles without the permission get 403", async () => {
+    const declared = t.app.locals.routes as RouteInfo[];
+    for (const role of ROLES) {
+      const agent = { owner: tallgrass.asOwner, estimator: tallgrass.asEstimator, sales: tallgrass.asSales }[role];
+      for (const route of declared) {
+        const allowed = route.access === "signed-in" || can(role, route.access);
+        // Writes are only tried where they must be refused, so the first company's rows stay as they are.
+        if (allowed && route.method !== "get") continue;
+        const key = `${route.method} ${route.path}`;
+        const res = key in BODIES ? await call(agent, route, urlFor(route, realId)) : await agent[route.method](route.path).set("origin", ORIGIN).send({});
+        if (allowed) expect(res.status, `${role} ${key}`).toBe(200);
+        else expect(res.status, `${role} ${key}`).toBe(403);
+      }
+    }
+    expect((await tallgrass.asOwner.get(`/api/projects/${ids.project}`)).body.project.version).toBe(1);
+  });
+});
