@@ -13,7 +13,7 @@ import { originCheck } from "./lib/csrf.ts";
 import { AppError } from "./lib/errors.ts";
 import { createAudit } from "./lib/audit.ts";
 import { createLucia } from "./modules/auth/lucia.ts";
-import { sessionMiddleware, requireSignIn } from "./modules/auth/session.middleware.ts";
+import { sessionMiddleware } from "./modules/auth/session.middleware.ts";
 import { createAuthRepository } from "./modules/auth/auth.repository.ts";
 import { createAuthService } from "./modules/auth/auth.service.ts";
 import { authRouter } from "./modules/auth/auth.router.ts";
@@ -124,11 +124,10 @@ export function createApp(deps: AppDeps): Express {
   });
 
   api.use(sessionMiddleware(lucia, now));
-  api.use("/auth", authRouter(authService, lucia));
-  api.use("/team", requireSignIn, teamRouter(teamService));
-  api.use("/outbox", requireSignIn, outboxRouter(createOutboxRepository(db)));
   // Declared routes (server/lib/routes.ts): each carries its method, path and access, listed in app.locals.routes.
-  const declared = [customersRouter(customersService), projectsRouter(projectsService), spacesRouter(spacesService), photosRouter(photosService), usersRouter(usersService)];
+  const declared = [
+    authRouter(authService, lucia), teamRouter(teamService), outboxRouter(createOutboxRepository(db)),
+    customersRouter(customersService), projectsRouter(projectsService), spacesRouter(spacesService), photosRouter(photosService), usersRouter(usersService)];
   for (const router of declared) api.use(router);
   app.locals.routes = declared.flatMap((router) => router.routes.map((route): RouteInfo => ({ ...route, path: `/api${route.path}` })));
 

@@ -5,8 +5,11 @@ import { IdParam } from "./validate.ts";
 
 export type Method = "get" | "post" | "put" | "patch" | "delete";
 
-/** Who may call a route: holders of a permission (shared/schemas/roles.ts) or any signed-in user. */
-export type Access = Permission | "signed-in";
+/**
+ * Who may call a route: holders of a permission (shared/schemas/roles.ts), any signed-in user,
+ * or anyone ("public": sign-in, password reset, invitations, the homeowner's link).
+ */
+export type Access = Permission | "signed-in" | "public";
 
 /**
  * One API route as data: method, path under /api, who may call it and the handler. Kept
@@ -28,6 +31,7 @@ export type RouteInfo = Pick<RouteSpec, "method" | "path" | "access" | "idParams
 
 function guard(access: Access): RequestHandler {
   return (req, _res, next) => {
+    if (access === "public") return next();
     if (!req.actor) return next(unauthorized());
     if (access !== "signed-in" && !can(req.actor.role, access)) return next(forbidden());
     next();

@@ -20,7 +20,8 @@ beforeAll(async () => {
   const space = await createSpace(tallgrass.asOwner, project.id, mainAttic);
   const second = await createSpace(tallgrass.asOwner, project.id, mainAttic);
   const photo = await tallgrass.asOwner.post(`/api/projects/${project.id}/photos`).set("origin", ORIGIN).attach("file", png, "p.png");
-  Object.assign(ids, { customer: customer.id, project: project.id, space: space.id, secondSpace: second.id, photo: photo.body.photo.id });
+  const invite = await tallgrass.asOwner.post("/api/team/invites").set("origin", ORIGIN).send({ email: `pending-${Date.now()}@test.example`, role: "estimator" });
+  Object.assign(ids, { customer: customer.id, project: project.id, space: space.id, secondSpace: second.id, photo: photo.body.photo.id, invite: invite.body.invite.id });
 });
 afterAll(async () => t?.close());
 
@@ -40,6 +41,10 @@ const BODIES: Record<string, () => Record<string, unknown> | "multipart" | undef
   "get /api/photos/:id": () => undefined,
   "patch /api/photos/:id": () => ({ caption: "Taken over" }),
   "delete /api/photos/:id": () => undefined,
+  "patch /api/team/users/:id": () => ({ role: "sales" }),
+  "post /api/team/users/:id/deactivate": () => undefined,
+  "post /api/team/users/:id/reactivate": () => undefined,
+  "delete /api/team/invites/:id": () => undefined,
 };
 
 function urlFor(route: RouteInfo, id: (param: string, route: RouteInfo) => string) {
@@ -49,6 +54,8 @@ const realId = (param: string, route: RouteInfo) => {
   if (param === "spaceId") return ids.space!;
   if (route.path.startsWith("/api/customers")) return ids.customer!;
   if (route.path.startsWith("/api/photos")) return ids.photo!;
+  if (route.path.startsWith("/api/team/users")) return tallgrass.sales.id;
+  if (route.path.startsWith("/api/team/invites")) return ids.invite!;
   return ids.project!;
 };
 
@@ -64,7 +71,7 @@ const idRoutes = () => (t.app.locals.routes as RouteInfo[]).filter((r) => r.idPa
 describe("tenant isolation (generated from the declared routes)", () => {
   it("when a route takes an id, then this test has a request body for it (so a new route cannot skip the check)", () => {
     const declared = idRoutes().map((r) => `${r.method} ${r.path}`);
-    expect(declared.length).toBeGreaterThanOrEqual(14);
+    expect(declared.length).toBeGreaterThanOrEqual(18);
     expect(declared.filter((key) => !(key in BODIES))).toEqual([]);
   });
 
@@ -104,7 +111,9 @@ describe("roles (generated from the declared routes and shared/schemas/roles.ts)
     const declared = t.app.locals.routes as RouteInfo[];
     for (const role of ROLES) {
       const agent = { owner: tallgrass.asOwner, estimator: tallgrass.asEstimator, sales: tallgrass.asSales }[role];
+      // Public routes (sign-in, reset, invitations) have no role to check; they are covered in auth.test.ts.
       for (const route of declared) {
+        if (route.access === "public") continue;
         const allowed = route.access === "signed-in" || can(role, route.access);
         // Writes are only tried where they must be refused, so the first company's rows stay as they are.
         if (allowed && route.method !== "get") continue;
@@ -115,5 +124,17 @@ describe("roles (generated from the declared routes and shared/schemas/roles.ts)
       }
     }
     expect((await tallgrass.asOwner.get(`/api/projects/${ids.project}`)).body.project.version).toBe(1);
+    const team = (await tallgrass.asOwner.get("/api/team")).body;
+    expect(team.users.find((u: { id: string }) => u.id === tallgrass.sales.id)).toMatchObject({ role: "sales", isActive: true });
+    expect(team.invites.map((i: { id: string }) => i.id)).toContain(ids.invite);
+  });
+
+  it("when the route list is read, then every route but the public ones names a permission or signed-in", () => {
+    const declared = t.app.locals.routes as RouteInfo[];
+    const keys = declared.map((r) => `${r.method} ${r.path}`);
+    expect(keys).toEqual(expect.arrayContaining(["post /api/auth/sign-in", "get /api/team", "get /api/outbox", "get /api/projects"]));
+    expect(new Set(keys).size).toBe(keys.length);
+    const publicRoutes = declared.filter((r) => r.access === "public").map((r) => r.path);
+    expect(publicRoutes.every((p) => p.startsWith("/api/auth/"))).toBe(true);
   });
 });

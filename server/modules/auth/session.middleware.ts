@@ -1,7 +1,5 @@
 import type { Request, Response, RequestHandler } from "express";
 import type { Cookie } from "lucia";
-import { forbidden, unauthorized } from "../../lib/errors.ts";
-import { can, type Permission } from "../../../shared/schemas/roles.ts";
 import type { AppLucia } from "./lucia.ts";
 
 /** Writes a lucia cookie, Secure whenever this request came over https. */
@@ -40,14 +38,5 @@ export function sessionMiddleware(lucia: AppLucia, now: () => Date = () => new D
     } catch (err) {
       next(err);
     }
-  };
-}
-
-export const requireSignIn: RequestHandler = (req, _res, next) => next(req.actor ? undefined : unauthorized());
-
-export function requirePermission(permission: Permission): RequestHandler {
-  return (req, _res, next) => {
-    if (!req.actor) return next(unauthorized());
-    next(can(req.actor.role, permission) ? undefined : forbidden());
   };
 }
