@@ -1,0 +1,231 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { analyzeAttic, type AtticInput } from "../ventilation";
+import { atticArb } from "../ventilation/arbitraries.test-helpers";
+import { buildAirflowPicture } from "./build-airflow-picture";
+import { DEMO_CASES } from "./demo-cases.test-helpers";
+import type { AirflowPicture, ShortCircuitArrow } from "./types";
+
+const build = (input: AtticInput, sectionIndex?: number) => buildAirflowPicture(input, analyzeAttic(input), sectionIndex === undefined ? {} : { sectionIndex });
+const shortCircuits = (p: AirflowPicture) => p.arrows.filter((a): a is ShortCircuitArrow => a.kind === "short-circuit-path");
+const intended = (p: AirflowPicture) => p.arrows.filter((a) => a.kind === "intended-path");
+const shape = (p: AirflowPicture, id: string) => p.shapes.find((s) => s.id === id);
+const dist = (a: readonly [number, number], b: readonly [number, number]) => Math.hypot(a[0] - b[0], a[1] - b[1]);
+
+/** Every number anywhere in the picture, with its path, for the finite check. */
+function numbersIn(value: unknown, path = "picture", out: Array<[string, number]> = []): Array<[string, number]> {
+  if (typeof value === "number") out.push([path, value]);
+  else if (Array.isArray(value)) value.forEach((v, i) => numbersIn(v, `${path}[${i}]`, out));
+  else if (value && typeof value === "object") for (const [k, v] of Object.entries(value)) numbersIn(v, `${path}.${k}`, out);
+  return out;
+}
+
+function expectWellFormed(picture: AirflowPicture) {
+  const bad = numbersIn(picture).filter(([, n]) => !Number.isFinite(n));
+  expect(bad).toEqual([]);
+  expect(picture.viewBox.widthFt).toBeGreaterThan(0);
+  expect(picture.viewBox.heightFt).toBeGreaterThan(0);
+  for (const s of picture.shapes) expect(s.label.length).toBeGreaterThan(0);
+  for (const a of picture.arrows) {
+    expect(a.label.length).toBeGreaterThan(0);
+    expect(a.pointsFt.length).toBeGreaterThanOrEqual(2);
+  }
+  for (const t of picture.texts) expect(t.text).not.toMatch(/NaN|undefined|Infinity/);
+  for (const c of picture.captions) expect(c.text).not.toMatch(/NaN|undefined|Infinity/);
+  // Everything drawn lies inside the viewBox.
+  const { minXFt, minYFt, widthFt, heightFt } = picture.viewBox;
+  const inside = ([x, y]: readonly [number, number]) => x >= minXFt - 1e-6 && x <= minXFt + widthFt + 1e-6 && y >= minYFt - 1e-6 && y <= minYFt + heightFt + 1e-6;
+  for (const a of picture.arrows) for (const p of [...a.pointsFt, ...a.head.pointsFt]) expect(inside(p)).toBe(true);
+  for (const s of picture.shapes) for (const part of s.parts) for (const p of part.type === "circle" ? [part.centerFt] : part.pointsFt) expect(inside(p)).toBe(true);
+}
+
+describe("buildAirflowPicture", () => {
+  it("when a ridge and soffits are balanced, then an intended path starts at each eave with intake and ends out at the ridge, with no short-circuit", () => {
+    const picture = build(DEMO_CASES.balanced);
+    const paths = intended(picture);
+    expect(paths.map((a) => a.fromPlace)).toEqual(["the left soffit", "the right soffit"]);
+    expect(new Set(paths.map((a) => a.toPlace))).toEqual(new Set(["the ridge vent"]));
+    for (const path of paths) {
+      const eave = shape(picture, path.fromPlace === "the left soffit" ? "eave-left" : "eave-right")!;
+      const first = path.pointsFt[0]!;
+      // Starts outdoors under its own eave…
+      expect(first[1]).toBeGreaterThan(picture.riseFt);
+      expect(Math.sign(first[0] - picture.spanFt / 2)).toBe(path.fromPlace === "the left soffit" ? -1 : 1);
+      expect(eave.style).toBe("intake-vent");
+      // …and ends above the ridge (y < 0 is above the ridge line).
+      expect(path.head.pointsFt[1]![1]).toBeLessThan(0);
+      expect(path.head.kind).toBe("filled-triangle");
+      expect(path.dashFt).toEqual([]);
+    }
+    expect(shortCircuits(picture)).toEqual([]);
+    expectWellFormed(picture);
+  });
+
+  it("when soffit intake is 720 sq in on a gable, then each eave shows half of it in its label and text", () => {
+    const picture = build(DEMO_CASES.balanced);
+    expect(shape(picture, "eave-left")!.label).toContain("360 sq in (half of 720 sq in)");
+    expect(picture.texts.filter((t) => t.forId === "eave-right").map((t) => t.text)).toEqual(["Soffit intake", "360 sq in"]);
+    expect(shape(picture, "vent-ridge")!.label).toBe("Ridge vent, 36 ft: 648 sq in");
+  });
+
+  it("when a powered gable fan shares the attic with a ridge vent, then a short-circuit path runs from the ridge to the fan with the finding code", () => {
+    const picture = build(DEMO_CASES.gableFanRidge);
+    const fanShape = shape(picture, "vent-fan")!;
+    expect(fanShape.style).toBe("fan");
+    const path = shortCircuits(picture).find((a) => a.findingCode === "powered-with-passive-exhaust")!;
+    expect(path).toBeDefined();
+    expect(path.fromPlace).toBe("the ridge vent");
+    expect(path.toPlace).toBe("the gable fan");
+    expect(path.ventIds).toEqual(expect.arrayContaining(["ridge", "fan"]));
+    expect(path.caption).toContain("Powered fan short-circuits through other high vents");
+    expect(path.caption).toMatch(/^Short-circuit A — /);
+    // Starts above the roof at the ridge and ends at the fan's edge.
+    expect(path.pointsFt[0]![1]).toBeLessThan(0);
+    const fanCircle = fanShape.parts.find((p) => p.type === "circle")!;
+    if (fanCircle.type !== "circle") throw new Error("fan has no circle");
+    expect(dist(path.head.pointsFt[1]!, fanCircle.centerFt)).toBeLessThan(fanCircle.radiusFt * 1.6);
+    // Drawn distinctly: dashed with an open arrowhead.
+    expect(path.dashFt.length).toBe(2);
+    expect(path.head.kind).toBe("open-chevron");
+  });
+
+  it("when the fan has too little intake, then a short-circuit path rises from the rooms below through the ceiling to the fan", () => {
+    const picture = build(DEMO_CASES.gableFanRidge);
+    const path = shortCircuits(picture).find((a) => a.findingCode === "fan-intake-short")!;
+    expect(path.fromPlace).toBe("the rooms below");
+    const ceilingY = shape(picture, "ceiling")!.parts[0]!;
+    if (ceilingY.type !== "polyline") throw new Error("ceiling is a line");
+    expect(path.pointsFt[0]![1]).toBeGreaterThan(ceilingY.pointsFt[0]![1]);
+    expect(path.caption).toContain("Not enough intake for the fan");
+  });
+
+  it("when box vents share the roof with a ridge vent, then a mixed-exhaust short-circuit runs from the box vents to the ridge", () => {
+    const picture = build(DEMO_CASES.mixedExhaust);
+    const path = shortCircuits(picture).find((a) => a.findingCode === "mixed-exhaust")!;
+    expect(path.fromPlace).toBe("the box vents");
+    expect(path.toPlace).toBe("the ridge vent");
+    expect(shape(picture, "vent-boxes")!.label).toBe("Box (static) vent ×4: 200 sq in");
+    // The box vents, 4.5 ft below a 7.5 ft rise, sit 60 % of the way down the slope.
+    const box = shape(picture, "vent-boxes")!;
+    const ys = box.parts.flatMap((p) => (p.type === "circle" ? [p.centerFt[1]] : p.pointsFt.map((q) => q[1])));
+    const meanY = ys.reduce((a, b) => a + b, 0) / ys.length;
+    expect(meanY / picture.riseFt).toBeGreaterThan(0.45);
+    expect(meanY / picture.riseFt).toBeLessThan(0.65);
+    expect(shortCircuits(picture).map((a) => a.findingCode)).toContain("upper-vent-too-low");
+  });
+
+  it("when there is no intake, then no intended path is drawn, the eaves say so and the exhaust draws from the house", () => {
+    const picture = build(DEMO_CASES.noIntake);
+    expect(intended(picture)).toEqual([]);
+    expect(picture.shapes.some((s) => s.kind === "eave-intake")).toBe(false);
+    expect(picture.texts.filter((t) => t.text === "No intake")).toHaveLength(2);
+    const path = shortCircuits(picture)[0]!;
+    expect(path.findingCode).toBe("no-intake");
+    expect(path.fromPlace).toBe("the rooms below");
+    expect(picture.legend.map((l) => l.style)).toEqual(["short-circuit"]);
+  });
+
+  it("when the soffits are blocked, then the eave paths are blocked (dotted, ending in a bar) and an X marks each eave", () => {
+    const picture = build(DEMO_CASES.blockedSoffits);
+    expect(intended(picture)).toEqual([]);
+    const blocked = picture.arrows.filter((a) => a.kind === "blocked-path");
+    expect(blocked).toHaveLength(2);
+    for (const a of blocked) {
+      expect(a.head.kind).toBe("stop-bar");
+      expect(a.style).toBe("blocked");
+    }
+    expect(picture.shapes.filter((s) => s.kind === "blocked-mark")).toHaveLength(2);
+    expect(shape(picture, "eave-left")!.style).toBe("blocked");
+    expect(picture.texts.filter((t) => t.forId === "eave-left").map((t) => t.text)).toEqual(["Soffit intake", "blocked"]);
+    expect(picture.legend.find((l) => l.style === "blocked")!.words).toContain("Blocked");
+  });
+
+  it("when there is intake but no exhaust, then the eave air is drawn as blocked under the ridge", () => {
+    const input: AtticInput = { ...DEMO_CASES.balanced, vents: [DEMO_CASES.balanced.vents[0]!] };
+    const picture = build(input);
+    const blocked = picture.arrows.filter((a) => a.kind === "blocked-path");
+    expect(blocked.map((a) => a.kind === "blocked-path" && a.findingCode)).toEqual(["no-exhaust", "no-exhaust"]);
+  });
+
+  it("when a gable louver shares the attic with a ridge vent, then a short-circuit runs from the louver to the ridge", () => {
+    const input: AtticInput = {
+      ...DEMO_CASES.balanced,
+      vents: [...DEMO_CASES.balanced.vents, { id: "louver", kind: "gable-louver", location: "upper", grossWidthIn: 14, grossHeightIn: 24, covering: { mesh: "1/8", louvers: true } }],
+    };
+    const path = shortCircuits(build(input)).find((a) => a.findingCode === "gable-with-ridge")!;
+    expect(path.fromPlace).toBe("the gable louver");
+    expect(path.toPlace).toBe("the ridge vent");
+  });
+
+  it("when a shed roof is drawn, then it has one eave with intake and the ridge vent at the high side", () => {
+    const input: AtticInput = { ...DEMO_CASES.balanced, sections: [{ kind: "rect", lengthFt: 30, widthFt: 16, roofForm: "shed", pitchIn12: 3 }] };
+    const picture = build(input);
+    expect(picture.roofForm).toBe("shed");
+    expect(intended(picture).map((a) => a.fromPlace)).toEqual(["the soffit at the low eave"]);
+    expect(picture.riseFt).toBeCloseTo(4, 6); // 16 ft × 3/12
+    expectWellFormed(picture);
+  });
+
+  it("when the roof is a hip, then it is drawn as a gable-like section with a note saying so", () => {
+    const input: AtticInput = { ...DEMO_CASES.balanced, sections: [{ kind: "rect", lengthFt: 40, widthFt: 30, roofForm: "hip", pitchIn12: 6 }] };
+    const picture = build(input);
+    expect(picture.roofForm).toBe("hip");
+    expect(picture.notes.join(" ")).toMatch(/Hip roof: drawn as a cut through the middle/);
+    expect(picture.riseFt).toBeCloseTo(7.5, 6);
+  });
+
+  it("when only an area is known, then the span is its square root and pitch defaults to 6/12 with notes", () => {
+    const input: AtticInput = { ...DEMO_CASES.balanced, sections: [{ kind: "area", areaSqFt: 900 }] };
+    const picture = build(input);
+    expect(picture.spanFt).toBe(30);
+    expect(picture.drawnPitchIn12).toBe(6);
+    expect(picture.recordedPitchIn12).toBeNull();
+    expect(picture.notes.join(" ")).toContain("square root of the floor area (30 ft)");
+  });
+
+  it("when a section is asked for, then that one is drawn; an index out of range falls back to the largest", () => {
+    const input: AtticInput = {
+      ...DEMO_CASES.balanced,
+      sections: [
+        { kind: "rect", lengthFt: 20, widthFt: 12, roofForm: "gable", pitchIn12: 4 },
+        { kind: "rect", lengthFt: 40, widthFt: 30, roofForm: "gable", pitchIn12: 6 },
+      ],
+    };
+    expect(build(input).sectionIndex).toBe(1);
+    expect(build(input, 0).spanFt).toBe(12);
+    expect(build(input, 7).sectionIndex).toBe(1);
+    expect(build(input, 0.5).sectionIndex).toBe(1);
+  });
+
+  it("when the same input is built twice, then the pictures are identical and survive JSON", () => {
+    const a = build(DEMO_CASES.gableFanRidge);
+    const b = build(DEMO_CASES.gableFanRidge);
+    expect(a).toEqual(b);
+    expect(JSON.parse(JSON.stringify(a))).toEqual(a);
+  });
+
+  it("when the span doubles, then every coordinate doubles (sizes come from the data)", () => {
+    const small = build(DEMO_CASES.gableFanRidge);
+    const big = build({ ...DEMO_CASES.gableFanRidge, sections: [{ kind: "rect", lengthFt: 40, widthFt: 60, roofForm: "gable", pitchIn12: 6 }] });
+    expect(big.viewBox.widthFt / small.viewBox.widthFt).toBeCloseTo(2, 2);
+    expect(big.unitFt).toBeCloseTo(small.unitFt * 2, 9);
+  });
+
+  it.each(Object.entries(DEMO_CASES))("when the demo case %s is drawn, then the picture is well formed", (_name, input) => {
+    expectWellFormed(build(input));
+  });
+
+  it("when any valid attic is drawn, then it does not throw, has no NaN and stays inside its viewBox", () => {
+    fc.assert(
+      fc.property(atticArb(10), fc.option(fc.integer({ min: -2, max: 8 }), { nil: undefined }), (input, sectionIndex) => {
+        const picture = build(input, sectionIndex);
+        expectWellFormed(picture);
+        for (const a of shortCircuits(picture)) {
+          expect(a.caption.length).toBeGreaterThan(0);
+          expect(analyzeAttic(input).findings.some((f) => f.code === a.findingCode)).toBe(true);
+        }
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
