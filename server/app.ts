@@ -39,6 +39,12 @@ import { photosRouter } from "./modules/photos/photos.router.ts";
 import { createUsersRepository } from "./modules/users/users.repository.ts";
 import { createUsersService } from "./modules/users/users.service.ts";
 import { usersRouter } from "./modules/users/users.router.ts";
+import { createCatalogRepository } from "./modules/catalog/catalog.repository.ts";
+import { createCatalogService } from "./modules/catalog/catalog.service.ts";
+import { catalogRouter } from "./modules/catalog/catalog.router.ts";
+import { createOptionsRepository } from "./modules/options/options.repository.ts";
+import { createOptionsService } from "./modules/options/options.service.ts";
+import { optionsRouter } from "./modules/options/options.router.ts";
 
 export interface AppDeps {
   env: Env;
@@ -106,6 +112,9 @@ export function createApp(deps: AppDeps): Express {
   const projectsService = createProjectsService({ repo: projectsRepo, spaces: spacesRepo, photos: photosService, audit });
   const customersService = createCustomersService({ repo: createCustomersRepository(db), audit });
   const usersService = createUsersService({ repo: createUsersRepository(db) });
+  const catalogRepo = createCatalogRepository(db);
+  const catalogService = createCatalogService({ repo: catalogRepo, audit });
+  const optionsService = createOptionsService({ repo: createOptionsRepository(db), projects: projectsRepo, spaces: spacesRepo, catalog: catalogRepo });
 
   const api = express.Router();
   api.use(express.json({ limit: "1mb" }));
@@ -127,7 +136,8 @@ export function createApp(deps: AppDeps): Express {
   // Declared routes (server/lib/routes.ts): each carries its method, path and access, listed in app.locals.routes.
   const declared = [
     authRouter(authService, lucia), teamRouter(teamService), outboxRouter(createOutboxRepository(db)),
-    customersRouter(customersService), projectsRouter(projectsService), spacesRouter(spacesService), photosRouter(photosService), usersRouter(usersService)];
+    customersRouter(customersService), projectsRouter(projectsService), spacesRouter(spacesService), photosRouter(photosService), usersRouter(usersService),
+    catalogRouter(catalogService), optionsRouter(optionsService)];
   for (const router of declared) api.use(router);
   app.locals.routes = declared.flatMap((router) => router.routes.map((route): RouteInfo => ({ ...route, path: `/api${route.path}` })));
 

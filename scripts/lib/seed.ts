@@ -6,11 +6,17 @@
 import { randomUUID } from "node:crypto";
 import { and, eq, sql as rawSql } from "drizzle-orm";
 import { createDb, type Database } from "../../server/db/client.ts";
-import { atticSpaces, companies, customers, projects, users } from "../../server/db/schema/index.ts";
+import { atticSpaces, catalogItems, companies, customers, designOptions, projects, users } from "../../server/db/schema/index.ts";
 import { hashPassword } from "../../server/lib/password.ts";
+import { catalogItemProblems } from "../../server/modules/catalog/catalog-rules.ts";
 import type { Role } from "../../shared/schemas/roles.ts";
 import type { ProjectStatus } from "../../shared/schemas/projects.ts";
 import { SpaceSurveySchema, type SpaceSurvey } from "../../shared/schemas/survey.ts";
+import { CatalogItemInputSchema, type CatalogItem, type CatalogItemInput } from "../../shared/schemas/catalog.ts";
+import { DesignOptionInputSchema, type DesignOptionInput } from "../../shared/schemas/options.ts";
+import { applyOption, generateOptions } from "../../shared/design/index.ts";
+import { toAtticInput } from "../../shared/survey/to-attic-input.ts";
+import { analyzeAttic } from "../../shared/ventilation/index.ts";
 import type { CodeBasis, RoofColor, VaporRetarder } from "../../shared/ventilation/index.ts";
 import { log } from "./paths.ts";
 
@@ -233,11 +239,119 @@ export async function seedSurveys(db: Database, companyIds: Record<string, strin
   }
 }
 
+/** Input of CatalogItemInputSchema (defaults filled in when seeding). */
+type DemoCatalogItem = Partial<CatalogItemInput> & Pick<CatalogItemInput, "sku" | "name" | "kind" | "unit" | "materialCostCents" | "sellPriceCents">;
+
+/**
+ * Tallgrass's demo catalog: generic names, no makers or model numbers, prices invented.
+ * NFA figures are typical values from memory; a real product's label wins.
+ */
+export const DEMO_CATALOG: DemoCatalogItem[] = [
+  // Ridge vent is priced by the foot and bought in 4 ft pieces.
+  { sku: "TG-RIDGE-SO", name: "Shingle-over ridge vent (4 ft pieces)", kind: "ridge", unit: "linear-ft", nfaSqInPerFt: 18, soldInLengthFt: 4, materialCostCents: 375, sellPriceCents: 1_150, laborMinutesPerUnit: 6 },
+  { sku: "TG-SOFFIT-STRIP", name: "Continuous soffit vent strip (8 ft pieces)", kind: "soffit-continuous", unit: "linear-ft", nfaSqInPerFt: 9, soldInLengthFt: 8, materialCostCents: 160, sellPriceCents: 650, laborMinutesPerUnit: 5 },
+  { sku: "TG-SOFFIT-RND4", name: "Round soffit vent, 4 in", kind: "soffit-individual", unit: "each", nfaSqInPerUnit: 7, materialCostCents: 140, sellPriceCents: 650, laborMinutesPerUnit: 10 },
+  { sku: "TG-SOFFIT-1608", name: "Rectangular soffit vent, 16 × 8 in", kind: "soffit-individual", unit: "each", nfaSqInPerUnit: 56, materialCostCents: 320, sellPriceCents: 1_400, laborMinutesPerUnit: 15 },
+  { sku: "TG-BOX-50", name: "Static box roof vent", kind: "box", unit: "each", nfaSqInPerUnit: 50, materialCostCents: 1_250, sellPriceCents: 4_800, laborMinutesPerUnit: 45 },
+  { sku: "TG-OFFRIDGE-4", name: "Off-ridge vent, 4 ft", kind: "off-ridge", unit: "each", nfaSqInPerUnit: 72, materialCostCents: 3_600, sellPriceCents: 9_800, laborMinutesPerUnit: 60 },
+  { sku: "TG-TURBINE-12", name: "Turbine vent, 12 in", kind: "turbine", unit: "each", nfaSqInPerUnit: 112, materialCostCents: 3_100, sellPriceCents: 11_500, laborMinutesPerUnit: 60 },
+  { sku: "TG-GABLE-FAN", name: "Gable-mount attic fan with thermostat, 1,200 cfm", kind: "powered-gable", unit: "each", cfm: 1_200, materialCostCents: 9_800, sellPriceCents: 32_500, laborMinutesPerUnit: 120 },
+  { sku: "TG-BAFFLE", name: "Insulation baffle (vent chute)", kind: "baffle", unit: "each", materialCostCents: 160, sellPriceCents: 550, laborMinutesPerUnit: 5 },
+  { sku: "TG-DECK-CUT", name: "Cut roof deck slot for ridge vent", kind: "deck-cut", unit: "linear-ft", materialCostCents: 0, sellPriceCents: 325, laborMinutesPerUnit: 3 },
+  { sku: "TG-PATCH-VENT", name: "Patch and shingle a removed roof vent opening", kind: "patch-vent-opening", unit: "each", materialCostCents: 1_400, sellPriceCents: 9_500, laborMinutesPerUnit: 60 },
+  { sku: "TG-SEAL-GABLE", name: "Seal a gable fan opening (blocking, sheathing, siding)", kind: "seal-gable-opening", unit: "each", materialCostCents: 2_200, sellPriceCents: 12_500, laborMinutesPerUnit: 90 },
+  { sku: "TG-ELEC-DISC", name: "Electrical disconnect of a fan by a licensed electrician", kind: "electrical-disconnect", unit: "each", materialCostCents: 9_000, sellPriceCents: 17_500, laborMinutesPerUnit: 0 },
+  { sku: "TG-INSUL-CLEAR", name: "Clear insulation at the eaves", kind: "insulation-clearing", unit: "hour", materialCostCents: 0, sellPriceCents: 8_500, laborMinutesPerUnit: 60 },
+  { sku: "TG-LABOR", name: "Labour", kind: "labor", unit: "hour", materialCostCents: 0, sellPriceCents: 7_500, laborMinutesPerUnit: 60 },
+];
+
+/** The demo catalog for Tallgrass, each item added only when its code is missing (an owner's edits are kept). */
+export async function seedCatalog(db: Database, companyIds: Record<string, string>): Promise<void> {
+  const companyId = companyIds.tallgrass!;
+  for (const item of DEMO_CATALOG) {
+    // Parsed by the API's own schema, so the demo catalog is always something the API would accept.
+    const values = CatalogItemInputSchema.parse(item);
+    const problems = catalogItemProblems(values);
+    if (Object.keys(problems).length) throw new Error(`demo catalog item ${item.sku}: ${JSON.stringify(problems)}`);
+    await db.insert(catalogItems).values({ ...values, companyId }).onConflictDoNothing();
+  }
+}
+
+/** The demo project with a powered gable fan beside a ridge vent: the one the saved demo options are for. */
+export const FAN_AND_RIDGE_TITLE = "Varnum attic — gable fan and ridge vent";
+export const DEMO_OPTION_NAMES = ["Ridge and soffit (remove fan)", "Keep a gable fan, close the ridge, add intake"] as const;
+
+/**
+ * Two saved options for the fan-and-ridge demo: the generator's ridge-and-soffit proposal (the
+ * fan comes out, so nothing short-circuits the ridge), and a hand-built contrast that keeps a
+ * powered fan (a new one in the old opening), closes the ridge and adds intake. The first must
+ * meet the code: analyzeAttic checks it here, so a broken demo fails loudly.
+ */
+export function demoOptions(project: DemoProject, spaceId: string, space: SpaceSurvey, catalog: readonly CatalogItem[]): DesignOptionInput[] {
+  const bySku = (sku: string) => {
+    const item = catalog.find((c) => c.sku === sku);
+    if (!item) throw new Error(`demo catalog item ${sku} is missing`);
+    return item.id;
+  };
+  const generated = generateOptions({ project, spaceId, space, catalog }).options.find((o) => o.type === "ridge-and-continuous-soffit");
+  const ridgeAndSoffit = DesignOptionInputSchema.parse(generated
+    ? { ...generated.option, name: DEMO_OPTION_NAMES[0], isKept: true }
+    : {
+        name: DEMO_OPTION_NAMES[0], origin: "manual",
+        spaces: [{
+          spaceId, ventActions: { "gable-fan-1": "remove" },
+          added: [
+            { id: "strip", catalogItemId: bySku("TG-SOFFIT-STRIP"), quantity: 48 },
+            { id: "seal", catalogItemId: bySku("TG-SEAL-GABLE"), quantity: 1 },
+            { id: "disconnect", catalogItemId: bySku("TG-ELEC-DISC"), quantity: 1 },
+          ],
+        }],
+      });
+  const keepFan = DesignOptionInputSchema.parse({
+    name: DEMO_OPTION_NAMES[1],
+    notes: "A powered attic fan can depressurize the house and backdraft the gas water heater: a combustion safety test with the fan running is part of this option. The ridge slot is closed so the fan draws through the soffits, not the ridge.",
+    spaces: [{
+      spaceId,
+      ventActions: { "gable-fan-1": "replace", "ridge-1": "remove" },
+      added: [
+        { id: "fan", catalogItemId: bySku("TG-GABLE-FAN"), quantity: 1, replacesVentId: "gable-fan-1" },
+        { id: "strip", catalogItemId: bySku("TG-SOFFIT-STRIP"), quantity: 80 },
+        { id: "rect", catalogItemId: bySku("TG-SOFFIT-1608"), quantity: 3 },
+      ],
+      siteFixes: { sealsGableFan: true },
+    }],
+    laborLines: [{ id: "close-ridge", description: "Close the ridge slot: deck strips and cap shingles", hours: 3, rateCents: 7_500 }],
+  });
+  const first = analyzeAttic(toAtticInput(project, applyOption(space, ridgeAndSoffit.spaces[0]!, catalog)));
+  if (!first.compliant) throw new Error(`demo option "${DEMO_OPTION_NAMES[0]}" does not meet the code: ${first.summary}`);
+  return [ridgeAndSoffit, keepFan];
+}
+
+/** The demo options, added only to the fan-and-ridge project while it has none (so deleted ones stay deleted). */
+export async function seedOptions(db: Database, companyIds: Record<string, string>): Promise<void> {
+  const companyId = companyIds.tallgrass!;
+  const demo = DEMO_PROJECTS.find((p) => p.title === FAN_AND_RIDGE_TITLE);
+  if (!demo) throw new Error(`the demo project "${FAN_AND_RIDGE_TITLE}" is missing from DEMO_PROJECTS`);
+  const [project] = await db.select({ id: projects.id }).from(projects).where(and(eq(projects.companyId, companyId), eq(projects.title, demo.title))).limit(1);
+  if (!project) return;
+  const [hasOption] = await db.select({ id: designOptions.id }).from(designOptions).where(eq(designOptions.projectId, project.id)).limit(1);
+  if (hasOption) return;
+  const [space] = await db.select().from(atticSpaces).where(and(eq(atticSpaces.projectId, project.id), eq(atticSpaces.name, "Main attic"))).limit(1);
+  if (!space) return;
+  const catalog = await db.select().from(catalogItems).where(eq(catalogItems.companyId, companyId));
+  const survey = SpaceSurveySchema.parse(space);
+  for (const [position, option] of demoOptions(demo, space.id, survey, catalog).entries()) {
+    await db.insert(designOptions).values({ ...option, companyId, projectId: project.id, position });
+  }
+}
+
 export async function seedDemo(databaseUrl: string): Promise<void> {
   const { db, sql } = createDb(databaseUrl, { max: 2 });
   try {
     const companyIds = await seedAccounts(db);
     await seedSurveys(db, companyIds);
+    await seedCatalog(db, companyIds);
+    await seedOptions(db, companyIds);
     log("demo data seeded (Tallgrass Exteriors, Bluestem Roofing)");
   } finally {
     await sql.end();

@@ -21,7 +21,16 @@ beforeAll(async () => {
   const second = await createSpace(tallgrass.asOwner, project.id, mainAttic);
   const photo = await tallgrass.asOwner.post(`/api/projects/${project.id}/photos`).set("origin", ORIGIN).attach("file", png, "p.png");
   const invite = await tallgrass.asOwner.post("/api/team/invites").set("origin", ORIGIN).send({ email: `pending-${Date.now()}@test.example`, role: "estimator" });
-  Object.assign(ids, { customer: customer.id, project: project.id, space: space.id, secondSpace: second.id, photo: photo.body.photo.id, invite: invite.body.invite.id });
+  const item = await tallgrass.asOwner.post("/api/catalog").set("origin", ORIGIN)
+    .send({ sku: "QW-RIDGE", name: "Qwerty ridge vent", kind: "ridge", unit: "linear-ft", nfaSqInPerFt: 18, soldInLengthFt: 4, materialCostCents: 300, sellPriceCents: 900 });
+  const option = await tallgrass.asOwner.post(`/api/projects/${project.id}/options`).set("origin", ORIGIN).send({
+    name: "Qwerty option",
+    spaces: [{ spaceId: space.id, ventActions: { "fan-1": "remove" }, added: [{ id: "a1", catalogItemId: item.body.item.id, quantity: 12 }] }],
+  });
+  Object.assign(ids, {
+    customer: customer.id, project: project.id, space: space.id, secondSpace: second.id, photo: photo.body.photo.id, invite: invite.body.invite.id,
+    catalogItem: item.body.item.id, option: option.body.option.id,
+  });
 });
 afterAll(async () => t?.close());
 
@@ -45,6 +54,14 @@ const BODIES: Record<string, () => Record<string, unknown> | "multipart" | undef
   "post /api/team/users/:id/deactivate": () => undefined,
   "post /api/team/users/:id/reactivate": () => undefined,
   "delete /api/team/invites/:id": () => undefined,
+  "patch /api/catalog/:id": () => ({ sellPriceCents: 1, isActive: false }),
+  "get /api/projects/:id/options": () => undefined,
+  "post /api/projects/:id/options": () => ({ name: "Intruder option" }),
+  "post /api/projects/:id/options/generate": () => ({}),
+  "get /api/options/:id": () => undefined,
+  "patch /api/options/:id": () => ({ version: 1, name: "Taken over" }),
+  "delete /api/options/:id": () => undefined,
+  "get /api/options/:id/materials": () => undefined,
 };
 
 function urlFor(route: RouteInfo, id: (param: string, route: RouteInfo) => string) {
@@ -56,6 +73,8 @@ const realId = (param: string, route: RouteInfo) => {
   if (route.path.startsWith("/api/photos")) return ids.photo!;
   if (route.path.startsWith("/api/team/users")) return tallgrass.sales.id;
   if (route.path.startsWith("/api/team/invites")) return ids.invite!;
+  if (route.path.startsWith("/api/catalog")) return ids.catalogItem!;
+  if (route.path.startsWith("/api/options")) return ids.option!;
   return ids.project!;
 };
 
@@ -87,6 +106,10 @@ describe("tenant isolation (generated from the declared routes)", () => {
     expect(detail.body.spaces.map((s: { version: number; vents: unknown[] }) => [s.version, s.vents.length])).toEqual([[1, 3], [1, 3]]);
     expect(detail.body.photos).toHaveLength(1);
     expect(detail.body.photos[0].caption).toBeNull();
+    const catalog = (await tallgrass.asOwner.get("/api/catalog").expect(200)).body.items;
+    expect(catalog.map((i: { id: string; sellPriceCents: number; isActive: boolean }) => [i.id, i.sellPriceCents, i.isActive])).toEqual([[ids.catalogItem, 900, true]]);
+    const options = (await tallgrass.asOwner.get(`/api/projects/${ids.project}/options`).expect(200)).body.options;
+    expect(options.map((o: { id: string; name: string; version: number }) => [o.id, o.name, o.version])).toEqual([[ids.option, "Qwerty option", 1]]);
   });
 
   it("when an id in the path is malformed or path-like, then every id-taking route answers 404 too", async () => {
@@ -103,6 +126,8 @@ describe("tenant isolation (generated from the declared routes)", () => {
     const users = (await bluestem.asOwner.get("/api/users")).body.map((u: { id: string }) => u.id);
     expect(users.sort()).toEqual([bluestem.owner.id, bluestem.estimator.id, bluestem.sales.id].sort());
     expect((await bluestem.asOwner.get(`/api/projects?estimatorId=${tallgrass.estimator.id}`)).body.total).toBe(0);
+    expect((await bluestem.asOwner.get("/api/catalog?q=qwerty&includeInactive=true")).body.items).toEqual([]);
+    expect((await bluestem.asOwner.get("/api/catalog/export.csv")).text).not.toContain("QW-RIDGE");
   });
 });
 

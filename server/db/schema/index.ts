@@ -8,3 +8,5 @@ export * from "./customers.ts";
 export * from "./projects.ts";
 export * from "./attic-spaces.ts";
 export * from "./photos.ts";
+export * from "./catalog-items.ts";
+export * from "./design-options.ts";

@@ -1,0 +1,75 @@
+import { asc, eq, sql } from "drizzle-orm";
+import type { Database } from "../../db/client.ts";
+import { companies, designOptions } from "../../db/schema/index.ts";
+import { scoped } from "../../lib/tenant.ts";
+import type { Actor } from "../../lib/request-context.ts";
+import type { DesignOptionInput } from "../../../shared/schemas/options.ts";
+
+export const optionColumns = {
+  id: designOptions.id, projectId: designOptions.projectId, name: designOptions.name, notes: designOptions.notes,
+  position: designOptions.position, spaces: designOptions.spaces, laborLines: designOptions.laborLines,
+  discount: designOptions.discount, isKept: designOptions.isKept, origin: designOptions.origin,
+  rationale: designOptions.rationale, version: designOptions.version,
+  createdAt: designOptions.createdAt, updatedAt: designOptions.updatedAt,
+};
+
+export interface DepositRule {
+  kind: "percent" | "amount";
+  /** Percent of the total (e.g. 10) or an amount in cents, as the company profile stores it. */
+  value: number;
+  capCents: number | null;
+}
+
+export interface CompanyTerms {
+  taxRateBasisPoints: number;
+  depositRule: DepositRule | null;
+}
+
+export function createOptionsRepository(db: Database) {
+  return {
+    listForProject: (actor: Actor, projectId: string) =>
+      db.select(optionColumns).from(designOptions)
+        .where(scoped(designOptions, actor, eq(designOptions.projectId, projectId)))
+        .orderBy(asc(designOptions.position), asc(designOptions.createdAt)),
+
+    async find(actor: Actor, id: string) {
+      const [row] = await db.select(optionColumns).from(designOptions).where(scoped(designOptions, actor, eq(designOptions.id, id))).limit(1);
+      return row ?? null;
+    },
+
+    /** Adds the option at the end of the project's list. */
+    insert: (actor: Actor, projectId: string, input: DesignOptionInput) =>
+      db.transaction(async (tx) => {
+        const [{ next } = { next: 0 }] = await tx
+          .select({ next: sql<number>`coalesce(max(${designOptions.position}) + 1, 0)::int` })
+          .from(designOptions).where(scoped(designOptions, actor, eq(designOptions.projectId, projectId)));
+        const [row] = await tx.insert(designOptions).values({ ...input, companyId: actor.companyId, projectId, position: next }).returning(optionColumns);
+        return row!;
+      }),
+
+    /** Applies the patch only if the stored version is still the one the editor saw (one statement). */
+    async updateIfVersion(actor: Actor, id: string, version: number, patch: Partial<DesignOptionInput>) {
+      const [row] = await db
+        .update(designOptions)
+        .set({ ...patch, version: sql`${designOptions.version} + 1`, updatedAt: new Date() })
+        .where(scoped(designOptions, actor, eq(designOptions.id, id), eq(designOptions.version, version)))
+        .returning(optionColumns);
+      return row ?? null;
+    },
+
+    async remove(actor: Actor, id: string) {
+      const rows = await db.delete(designOptions).where(scoped(designOptions, actor, eq(designOptions.id, id))).returning({ id: designOptions.id });
+      return rows.length > 0;
+    },
+
+    /** The company's own row (the tenant itself): its tax rate and deposit rule for pricing. */
+    async companyTerms(actor: Actor): Promise<CompanyTerms> {
+      const [row] = await db
+        .select({ taxRateBasisPoints: companies.taxRateBasisPoints, depositRule: companies.depositRule })
+        .from(companies).where(eq(companies.id, actor.companyId)).limit(1);
+      return { taxRateBasisPoints: row?.taxRateBasisPoints ?? 0, depositRule: row?.depositRule ?? null };
+    },
+  };
+}
+export type OptionsRepository = ReturnType<typeof createOptionsRepository>;
+export type OptionRow = NonNullable<Awaited<ReturnType<OptionsRepository["find"]>>>;
