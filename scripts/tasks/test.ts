@@ -20,6 +20,8 @@ const started = Date.now();
 const onlyIndex = process.argv.indexOf("--only");
 const onlyArg = process.argv.find((a) => a.startsWith("--only="))?.slice(7) ?? (onlyIndex >= 0 ? process.argv[onlyIndex + 1] : undefined);
 const only = onlyArg ? new Set(onlyArg.split(",")) : null;
+/** Anything else on the command line is handed to vitest as file filters, e.g. `npm test -- --only api catalog`. */
+const fileFilters = process.argv.slice(2).filter((a, i, all) => !a.startsWith("--only") && all[i - 1] !== "--only");
 const wants = (step: string) => !only || only.has(step);
 
 const results: { step: string; ok: boolean; summary: string }[] = [];
@@ -38,7 +40,7 @@ async function vitest(step: string, projects: string[], env: NodeJS.ProcessEnv) 
   const out = path.join(reportDir, `${step}.json`);
   const r = await run(step, [
     "node_modules/vitest/vitest.mjs", "run", ...projects.flatMap((p) => ["--project", p]),
-    "--reporter=default", "--reporter=json", `--outputFile.json=${out}`,
+    ...fileFilters, "--reporter=default", "--reporter=json", `--outputFile.json=${out}`,
   ], env);
   let summary = r.status === 0 ? "passed" : "FAILED";
   if (existsSync(out)) {

@@ -26,23 +26,34 @@ const cents = (what: string) =>
  * ("linear-ft"); a fan has its cfm. `soldInLengthFt` says how a linear product is bought
  * (e.g. ridge vent in 4 ft pieces) for the crew's materials list.
  */
+const catalogFields = {
+  sku: z.string().trim().min(1, "Give the item a short code.").max(40, "Use at most 40 characters.").regex(/^[A-Za-z0-9._-]+$/, "Use letters, digits, dot, dash or underscore."),
+  name: z.string().trim().min(1, "Name the item.").max(200, "Use at most 200 characters."),
+  kind: z.enum(CATALOG_KINDS, { error: "Choose what kind of item this is." }),
+  unit: z.enum(CATALOG_UNITS, { error: "Choose each, linear-ft or hour." }),
+  nfaSqInPerUnit: z.number().positive("NFA must be more than 0.").max(100_000).nullable(),
+  nfaSqInPerFt: z.number().positive("NFA per foot must be more than 0.").max(200).nullable(),
+  cfm: z.number().positive("Airflow must be more than 0.").max(50_000).nullable(),
+  soldInLengthFt: z.number().positive().max(100).nullable(),
+  materialCostCents: cents("Material cost"),
+  sellPriceCents: cents("Sell price"),
+  laborMinutesPerUnit: z.number().int("Labour minutes are whole minutes.").min(0).max(10_000),
+  isActive: z.boolean(),
+};
+
 export const CatalogItemInputSchema = z
   .object({
-    sku: z.string().trim().min(1, "Give the item a short code.").max(40, "Use at most 40 characters.").regex(/^[A-Za-z0-9._-]+$/, "Use letters, digits, dot, dash or underscore."),
-    name: z.string().trim().min(1, "Name the item.").max(200, "Use at most 200 characters."),
-    kind: z.enum(CATALOG_KINDS, { error: "Choose what kind of item this is." }),
-    unit: z.enum(CATALOG_UNITS, { error: "Choose each, linear-ft or hour." }),
-    nfaSqInPerUnit: z.number().positive("NFA must be more than 0.").max(100_000).nullable().default(null),
-    nfaSqInPerFt: z.number().positive("NFA per foot must be more than 0.").max(200).nullable().default(null),
-    cfm: z.number().positive("Airflow must be more than 0.").max(50_000).nullable().default(null),
-    soldInLengthFt: z.number().positive().max(100).nullable().default(null),
-    materialCostCents: cents("Material cost"),
-    sellPriceCents: cents("Sell price"),
-    laborMinutesPerUnit: z.number().int("Labour minutes are whole minutes.").min(0).max(10_000).default(0),
-    isActive: z.boolean().default(true),
+    ...catalogFields,
+    nfaSqInPerUnit: catalogFields.nfaSqInPerUnit.default(null),
+    nfaSqInPerFt: catalogFields.nfaSqInPerFt.default(null),
+    cfm: catalogFields.cfm.default(null),
+    soldInLengthFt: catalogFields.soldInLengthFt.default(null),
+    laborMinutesPerUnit: catalogFields.laborMinutesPerUnit.default(0),
+    isActive: catalogFields.isActive.default(true),
   })
   .strict();
-export const CatalogItemPatchSchema = CatalogItemInputSchema.partial().strict();
+/** A patch names only what changes: built from the fields without defaults, so nothing unsent is reset. */
+export const CatalogItemPatchSchema = z.object(catalogFields).partial().strict();
 
 export type CatalogItemInput = z.infer<typeof CatalogItemInputSchema>;
 export interface CatalogItem extends CatalogItemInput {

@@ -44,18 +44,36 @@ export const AdjustmentSchema = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("percent"), basisPoints: z.number().int().min(0).max(10_000) }),
 ]);
 
+const optionFields = {
+  name: z.string().trim().min(1, "Name the option.").max(120),
+  notes: z.string().max(5_000).nullable(),
+  spaces: z.array(OptionSpaceSchema).max(20),
+  laborLines: z.array(LaborLineSchema).max(100),
+  discount: AdjustmentSchema,
+  isKept: z.boolean(),
+  /** How it was made: by hand, or by the generator with its explanation. */
+  origin: z.enum(["manual", "generated"]),
+  rationale: z.array(z.string().max(1_000)).max(50),
+};
+
 export const DesignOptionInputSchema = z
   .object({
-    name: z.string().trim().min(1, "Name the option.").max(120),
-    notes: z.string().max(5_000).nullable().default(null),
-    spaces: z.array(OptionSpaceSchema).max(20).default([]),
-    laborLines: z.array(LaborLineSchema).max(100).default([]),
-    discount: AdjustmentSchema.default({ kind: "none" }),
-    isKept: z.boolean().default(true),
-    /** How it was made: by hand, or by the generator with its explanation. */
-    origin: z.enum(["manual", "generated"]).default("manual"),
-    rationale: z.array(z.string().max(1_000)).max(50).default([]),
+    ...optionFields,
+    notes: optionFields.notes.default(null),
+    spaces: optionFields.spaces.default([]),
+    laborLines: optionFields.laborLines.default([]),
+    discount: optionFields.discount.default({ kind: "none" }),
+    isKept: optionFields.isKept.default(true),
+    origin: optionFields.origin.default("manual"),
+    rationale: optionFields.rationale.default([]),
   })
+  .strict();
+
+/** A patch names only what changes, with the version it was based on (409 when stale). */
+export const DesignOptionPatchSchema = z
+  .object(optionFields)
+  .partial()
+  .extend({ version: z.number({ error: "The version of the option you edited is required." }).int().min(1) })
   .strict();
 
 export type AddedItem = z.infer<typeof AddedItemSchema>;

@@ -2,7 +2,6 @@ import express from "express";
 import { z } from "zod";
 import { parse } from "../../lib/validate.ts";
 import { AppError } from "../../lib/errors.ts";
-import { providedFields } from "../../lib/provided.ts";
 import { actorOf, metaOf } from "../../lib/request-context.ts";
 import { idParam, routesRouter } from "../../lib/routes.ts";
 import { CATALOG_KINDS, CatalogItemInputSchema, CatalogItemPatchSchema } from "../../../shared/schemas/catalog.ts";
@@ -62,7 +61,7 @@ export function catalogRouter(service: CatalogService) {
       method: "patch", path: "/catalog/:id", access: "catalog:edit", idParams: ["id"],
       handler: async (req, res) => {
         const id = idParam(req, "id", "That catalog item");
-        const patch = providedFields(parse(CatalogItemPatchSchema, req.body), req.body);
+        const patch = parse(CatalogItemPatchSchema, req.body);
         res.json({ item: await service.update(actorOf(req), id, patch, metaOf(req)) });
       },
     },

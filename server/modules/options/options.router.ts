@@ -1,16 +1,10 @@
 import type { Request } from "express";
 import { z } from "zod";
 import { parse } from "../../lib/validate.ts";
-import { providedFields } from "../../lib/provided.ts";
 import { actorOf } from "../../lib/request-context.ts";
 import { idParam, routesRouter } from "../../lib/routes.ts";
-import { DesignOptionInputSchema } from "../../../shared/schemas/options.ts";
+import { DesignOptionInputSchema, DesignOptionPatchSchema } from "../../../shared/schemas/options.ts";
 import type { OptionsService } from "./options.service.ts";
-
-/** A save names the version it was based on; only the fields sent change. */
-export const DesignOptionPatchSchema = DesignOptionInputSchema.partial().extend({
-  version: z.number({ error: "Send the version you edited." }).int().min(1),
-});
 
 /** Which spaces to generate for; all spaces of the project when left out. */
 export const GenerateOptionsSchema = z.object({
@@ -49,7 +43,7 @@ export function optionsRouter(service: OptionsService) {
       handler: async (req, res) => {
         const id = optionId(req);
         const { version, ...patch } = parse(DesignOptionPatchSchema, req.body);
-        res.json({ option: await service.update(actorOf(req), id, version, providedFields(patch, req.body)) });
+        res.json({ option: await service.update(actorOf(req), id, version, patch) });
       },
     },
     {
