@@ -13,6 +13,9 @@ const apiPort = Number(process.env.PORT ?? 3000);
 export default defineConfig({
   plugins: [react(), tailwindcss()],
   resolve: { alias },
+  // convert-units 2.3.4 (the core's unit conversions) loads lodash 2.x modules that read Node's
+  // `global`; browsers only have globalThis.
+  define: { global: "globalThis" },
   build: { outDir: "dist/client", sourcemap: true, chunkSizeWarningLimit: 900 },
   server: {
     host: "127.0.0.1",

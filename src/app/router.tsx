@@ -21,6 +21,16 @@ const appRoutes: RouteObject[] = [
     lazy: () => import("./routes/projects"),
   },
   {
+    path: paths.app.newProject.path,
+    loader: requireArea("projects"),
+    lazy: () => import("./routes/projects-new"),
+  },
+  {
+    path: paths.app.project.path,
+    loader: requireArea("projects"),
+    lazy: () => import("./routes/projects-detail"),
+  },
+  {
     path: paths.app.customers.path,
     loader: requireArea("customers"),
     lazy: () => import("./routes/customers"),

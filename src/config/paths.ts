@@ -35,6 +35,15 @@ export const paths = {
 
   app: {
     projects: { path: "/projects", getHref: () => "/projects" },
+    newProject: {
+      path: "/projects/new",
+      /** `customerId` starts the form with that customer chosen. */
+      getHref: (customerId?: string) => withQuery("/projects/new", { customerId }),
+    },
+    project: {
+      path: "/projects/:projectId",
+      getHref: (projectId: string) => `/projects/${encodeURIComponent(projectId)}`,
+    },
     customers: { path: "/customers", getHref: () => "/customers" },
     catalog: { path: "/catalog", getHref: () => "/catalog" },
     pipeline: { path: "/pipeline", getHref: () => "/pipeline" },

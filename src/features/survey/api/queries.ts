@@ -1,0 +1,20 @@
+import { queryOptions } from "@tanstack/react-query";
+import { getProject } from "./get-project";
+
+export const surveyKeys = {
+  all: ["projects"] as const,
+  detail: (projectId: string) => [...surveyKeys.all, "detail", projectId] as const,
+};
+
+export const surveyQueries = {
+  /**
+   * The workspace reads this once to start its drafts; later refetches refresh photos and the
+   * versions shown in a conflict, never the text being typed.
+   */
+  project: (projectId: string) =>
+    queryOptions({
+      queryKey: surveyKeys.detail(projectId),
+      queryFn: ({ signal }) => getProject(projectId, signal),
+      refetchOnWindowFocus: false,
+    }),
+};

@@ -1,0 +1,190 @@
+import type { UnitSystem } from "@shared/units/format";
+import { formatAirflowCfm, formatAreaSqFt, formatNfaSqIn } from "@shared/units/format";
+import { sortFindings, type AtticInput, type TryAnalyzeResult } from "@shared/ventilation/index";
+import { SeverityBadge } from "@/components/ui/badge";
+import { WarningIcon } from "@/components/ui/icons";
+import type { Problem } from "../lib/drafts";
+import { AirflowSection } from "./airflow-section";
+import { BalanceBar } from "./balance-bar";
+
+export interface AnalysisPanelProps {
+  spaceName: string;
+  input: AtticInput;
+  result: TryAnalyzeResult;
+  /** Entries not complete yet (left out of this result). */
+  problems: Problem[];
+  unitSystem: UnitSystem;
+  onJumpTo?: (partId: string) => void;
+}
+
+function Figure({ label, value, sub }: { label: string; value: string; sub?: string }) {
+  return (
+    <div className="rounded-md border border-ink-200 bg-white px-3 py-2.5">
+      <dt className="text-sm text-ink-600">{label}</dt>
+      <dd className="text-xl font-semibold tabular-nums text-ink-900">{value}</dd>
+      {sub ? <dd className="text-sm text-ink-700">{sub}</dd> : null}
+    </div>
+  );
+}
+
+/** Turns an issue path from the core ("sections") into words for the to-do list. */
+function issueText(issue: { path: string; message: string }): string {
+  return issue.message;
+}
+
+/** The live analysis of one space, from the same core the server and the PDF use. */
+export function AnalysisPanel({ spaceName, input, result, problems, unitSystem, onJumpTo }: AnalysisPanelProps) {
+  const todo = problems.length > 0 ? (
+    <section aria-labelledby="todo-title" className="space-y-2 rounded-lg border border-warning-200 bg-warning-50 p-4">
+      <h3 id="todo-title" className="flex items-center gap-2 text-base font-semibold text-warning-900">
+        <WarningIcon className="text-warning-600" /> Still to finish
+      </h3>
+      <p className="text-sm text-warning-900">These entries are kept on this device and left out until they are complete.</p>
+      <ul className="space-y-1 text-base text-warning-900">
+        {problems.map((p, i) => (
+          <li key={`${p.where}-${i}`}>
+            {p.partId && onJumpTo ? (
+              <button type="button" className="min-h-touch text-left underline underline-offset-4 md:min-h-0" onClick={() => onJumpTo(p.partId!)}>
+                <span className="font-semibold">{p.where}:</span> {p.message}
+              </button>
+            ) : (
+              <>
+                <span className="font-semibold">{p.where}:</span> {p.message}
+              </>
+            )}
+          </li>
+        ))}
+      </ul>
+    </section>
+  ) : null;
+
+  if (!result.ok) {
+    return (
+      <div className="space-y-4">
+        <h2 className="text-xl font-semibold text-ink-900">Analysis · {spaceName}</h2>
+        <section className="space-y-2 rounded-lg border border-ink-200 bg-ink-25 p-4">
+          <h3 className="text-base font-semibold text-ink-900">To see the analysis</h3>
+          <ul className="list-disc space-y-1 pl-5 text-base text-ink-800">
+            {[...new Set(result.issues.map(issueText))].map((text) => (
+              <li key={text}>{text}</li>
+            ))}
+          </ul>
+        </section>
+        {todo}
+      </div>
+    );
+  }
+
+  const a = result.analysis;
+  const findings = sortFindings(a.findings);
+  return (
+    <div className="space-y-6">
+      <div className="space-y-2">
+        <h2 className="text-xl font-semibold text-ink-900">Analysis · {spaceName}</h2>
+        <div className="flex flex-wrap items-center gap-2">
+          <SeverityBadge severity={a.compliant ? "ok" : "critical"}>{a.compliant ? "Meets the code minimum" : "Does not meet the code minimum"}</SeverityBadge>
+          <span className="text-sm text-ink-700">
+            Floor {formatAreaSqFt(a.floorAreaSqFt, unitSystem)} · 1/{a.requirement.ratio}
+          </span>
+        </div>
+        <p className="text-base text-ink-800">{a.summary}</p>
+      </div>
+      {todo}
+
+      <section aria-labelledby="required-title" className="space-y-3">
+        <h3 id="required-title" className="text-lg font-semibold text-ink-900">
+          Vent area
+        </h3>
+        <dl className="grid grid-cols-2 gap-2">
+          <Figure label={`Required at 1/${a.requirement.ratio}`} value={formatNfaSqIn(a.requirement.totalSqIn, unitSystem)} />
+          <Figure label="Provided (passive)" value={formatNfaSqIn(a.provided.totalSqIn, unitSystem)} />
+          <Figure label="Intake (low)" value={formatNfaSqIn(a.provided.intakeSqIn, unitSystem)} sub={`at least ${formatNfaSqIn(a.requirement.split.lowerMinSqIn, unitSystem)} wanted`} />
+          <Figure label="Exhaust (high)" value={formatNfaSqIn(a.provided.exhaustSqIn, unitSystem)} sub={`${formatNfaSqIn(a.requirement.split.upperMinSqIn, unitSystem)}–${formatNfaSqIn(a.requirement.split.upperMaxSqIn, unitSystem)} wanted`} />
+        </dl>
+        <details className="rounded-md border border-ink-200 bg-white px-3 py-2">
+          <summary className="min-h-touch cursor-pointer py-2 font-medium text-ink-900 md:min-h-0">
+            Why {formatNfaSqIn(a.requirement.totalSqIn, unitSystem)} is required
+          </summary>
+          <ul className="list-disc space-y-1.5 pt-1 pb-2 pl-5 text-base text-ink-800">
+            {a.requirement.reasons.map((reason) => (
+              <li key={reason}>{reason}</li>
+            ))}
+          </ul>
+        </details>
+        {a.provided.perVent.length > 0 ? (
+          <details className="rounded-md border border-ink-200 bg-white px-3 py-2">
+            <summary className="min-h-touch cursor-pointer py-2 font-medium text-ink-900 md:min-h-0">Each vent</summary>
+            <ul className="list-disc space-y-1 pt-1 pb-2 pl-5 text-base text-ink-800">
+              {a.provided.perVent.map((v) => (
+                <li key={v.ventId}>{v.explanation}</li>
+              ))}
+            </ul>
+          </details>
+        ) : null}
+      </section>
+
+      <section aria-labelledby="balance-title" className="space-y-2">
+        <h3 id="balance-title" className="text-lg font-semibold text-ink-900">
+          Balance
+        </h3>
+        <BalanceBar intakeSqIn={a.provided.intakeSqIn} exhaustSqIn={a.provided.exhaustSqIn} unitSystem={unitSystem} />
+      </section>
+
+      {a.fan ? (
+        <section aria-labelledby="fan-title" className="space-y-3">
+          <h3 id="fan-title" className="text-lg font-semibold text-ink-900">
+            Powered fan
+          </h3>
+          <dl className="grid grid-cols-2 gap-2">
+            <Figure label="Installed" value={formatAirflowCfm(a.fan.installedCfm, unitSystem)} />
+            <Figure label="Recommended" value={formatAirflowCfm(a.fan.recommendedCfm, unitSystem)} />
+            <Figure label="Intake the fan needs" value={formatNfaSqIn(a.fan.intakeNeededSqIn, unitSystem)} />
+            <Figure
+              label="Intake there is"
+              value={formatNfaSqIn(a.fan.intakeProvidedSqIn, unitSystem)}
+              sub={a.fan.intakeProvidedSqIn >= a.fan.intakeNeededSqIn ? "✓ enough for the fan" : "! short of what the fan needs"}
+            />
+          </dl>
+          <details className="rounded-md border border-ink-200 bg-white px-3 py-2">
+            <summary className="min-h-touch cursor-pointer py-2 font-medium text-ink-900 md:min-h-0">How the fan was sized</summary>
+            <ul className="list-disc space-y-1.5 pt-1 pb-2 pl-5 text-base text-ink-800">
+              {a.fan.reasons.map((reason) => (
+                <li key={reason}>{reason}</li>
+              ))}
+            </ul>
+          </details>
+        </section>
+      ) : null}
+
+      <section aria-labelledby="findings-title" className="space-y-3">
+        <h3 id="findings-title" className="text-lg font-semibold text-ink-900">
+          Findings <span className="font-normal text-ink-600">({findings.length})</span>
+        </h3>
+        {findings.length === 0 ? <p className="text-base text-ink-700">Nothing to flag in this space.</p> : null}
+        <ol className="space-y-3">
+          {findings.map((f, i) => {
+            // The core appends the caution to the detail; it is shown once, in its own box.
+            const detail = f.caution ? f.detail.replace(f.caution, "").replace(/\s{2,}/g, " ").trim() : f.detail;
+            return (
+              <li key={`${f.code}-${i}`} data-finding={f.code} className="space-y-2 rounded-lg border border-ink-200 bg-white p-4">
+                <div className="flex flex-wrap items-center gap-2">
+                  <SeverityBadge severity={f.severity} />
+                  <h4 className="text-base font-semibold text-ink-900">{f.title}</h4>
+                </div>
+                <p className="text-base text-ink-800">{detail}</p>
+                {f.caution ? (
+                  <p className="flex gap-2 rounded-md bg-warning-50 px-3 py-2 text-sm text-warning-900">
+                    <WarningIcon className="mt-0.5 size-4 shrink-0 text-warning-600" />
+                    <span>{f.caution}</span>
+                  </p>
+                ) : null}
+              </li>
+            );
+          })}
+        </ol>
+      </section>
+
+      <AirflowSection input={input} analysis={a} spaceName={spaceName} />
+    </div>
+  );
+}

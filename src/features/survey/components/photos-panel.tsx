@@ -1,0 +1,238 @@
+import { useQueryClient } from "@tanstack/react-query";
+import { useRef, useState } from "react";
+import { Alert } from "@/components/ui/alert";
+import { Button } from "@/components/ui/button";
+import { ConfirmDialog } from "@/components/ui/dialog";
+import { TextField } from "@/components/ui/field";
+import { CloseIcon, PlusIcon } from "@/components/ui/icons";
+import { Select } from "@/components/ui/select";
+import { Progress } from "@/components/ui/spinner";
+import { toast } from "@/components/ui/toaster";
+import { useDeletePhoto } from "../api/delete-photo";
+import { useUpdatePhotoCaption } from "../api/update-photo";
+import { surveyKeys } from "../api/queries";
+import type { PhotoRecord } from "../api/types";
+import { uploadPhoto } from "../api/upload-photo";
+
+export interface AttachOption {
+  value: string;
+  label: string;
+}
+
+export interface PhotosPanelProps {
+  projectId: string;
+  spaceId: string;
+  spaceName: string;
+  photos: PhotoRecord[];
+  /** Saved vents of this space (a photo can point only at a vent the server knows). */
+  vents: AttachOption[];
+  /** Finding and checklist codes to attach a photo to. */
+  findings: AttachOption[];
+  canEdit: boolean;
+  describeAttachment: (photo: PhotoRecord) => string;
+}
+
+const MAX_BYTES = 15 * 1024 * 1024;
+
+/** Photos of this space: take one with the phone camera or choose a file, attach it, caption it. */
+export function PhotosPanel({ projectId, spaceId, spaceName, photos, vents, findings, canEdit, describeAttachment }: PhotosPanelProps) {
+  const queryClient = useQueryClient();
+  const cameraRef = useRef<HTMLInputElement>(null);
+  const fileRef = useRef<HTMLInputElement>(null);
+  const [file, setFile] = useState<File | null>(null);
+  const [attachTo, setAttachTo] = useState("space");
+  const [caption, setCaption] = useState("");
+  const [progress, setProgress] = useState<number | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const [toDelete, setToDelete] = useState<PhotoRecord | null>(null);
+  const remove = useDeletePhoto(projectId);
+  const updateCaption = useUpdatePhotoCaption(projectId);
+  const [editing, setEditing] = useState<{ id: string; text: string } | null>(null);
+
+  function choose(list: FileList | null) {
+    const chosen = list?.[0] ?? null;
+    setError(null);
+    if (chosen && chosen.size > MAX_BYTES) {
+      setError(`That photo is ${(chosen.size / 1024 / 1024).toFixed(1)} MB; the limit is 15 MB. Choose a smaller one.`);
+      return;
+    }
+    setFile(chosen);
+  }
+
+  async function upload() {
+    if (!file) return;
+    setError(null);
+    setProgress(0);
+    const [kind, id] = attachTo.split(":");
+    try {
+      await uploadPhoto(
+        {
+          projectId,
+          file,
+          spaceId,
+          ventId: kind === "vent" ? id : undefined,
+          findingCode: kind === "finding" ? id : undefined,
+          caption: caption.trim() || undefined,
+        },
+        setProgress,
+      );
+      toast.success("Photo added");
+      setFile(null);
+      setCaption("");
+      if (cameraRef.current) cameraRef.current.value = "";
+      if (fileRef.current) fileRef.current.value = "";
+      await queryClient.invalidateQueries({ queryKey: surveyKeys.detail(projectId) });
+    } catch (e) {
+      setError(e instanceof Error ? e.message : "The photo could not be uploaded.");
+    } finally {
+      setProgress(null);
+    }
+  }
+
+  const shown = photos.filter((p) => p.spaceId === spaceId);
+  const attachOptions: AttachOption[] = [
+    { value: "space", label: `${spaceName} in general` },
+    ...vents.map((v) => ({ value: `vent:${v.value}`, label: `Vent: ${v.label}` })),
+    ...findings.map((f) => ({ value: `finding:${f.value}`, label: `Finding: ${f.label}` })),
+  ];
+
+  return (
+    <div className="space-y-4">
+      {canEdit ? (
+        <div className="space-y-3 rounded-lg border border-ink-200 bg-ink-25 p-4">
+          <div className="flex flex-wrap gap-2">
+            <Button variant="secondary" icon={<PlusIcon />} onClick={() => cameraRef.current?.click()}>
+              Take a photo
+            </Button>
+            <Button variant="ghost" onClick={() => fileRef.current?.click()}>
+              Choose a file
+            </Button>
+            <input
+              ref={cameraRef}
+              type="file"
+              accept="image/*"
+              capture="environment"
+              className="sr-only"
+              tabIndex={-1}
+              aria-label="Take a photo with the camera"
+              onChange={(event) => choose(event.target.files)}
+            />
+            <input
+              ref={fileRef}
+              type="file"
+              accept="image/*"
+              className="sr-only"
+              tabIndex={-1}
+              aria-label="Photo file"
+              onChange={(event) => choose(event.target.files)}
+            />
+          </div>
+          {file ? (
+            <div className="space-y-3">
+              <p className="text-sm text-ink-800">
+                Chosen: <span className="font-medium break-all">{file.name}</span> ({Math.max(1, Math.round(file.size / 1024))} KB)
+              </p>
+              <div className="grid gap-3 sm:grid-cols-2">
+                <Select label="Attach to" options={attachOptions} value={attachTo} onChange={(event) => setAttachTo(event.target.value)} />
+                <TextField label="Caption" isOptional value={caption} maxLength={500} onChange={(event) => setCaption(event.target.value)} />
+              </div>
+              {progress !== null ? (
+                <Progress label="Uploading" value={Math.round(progress * 100)} />
+              ) : (
+                <div className="flex flex-wrap gap-2">
+                  <Button onClick={upload}>Upload photo</Button>
+                  <Button variant="ghost" onClick={() => setFile(null)}>
+                    Cancel
+                  </Button>
+                </div>
+              )}
+            </div>
+          ) : (
+            <p className="text-sm text-ink-700">JPEG, PNG, WebP or HEIC up to 15 MB.</p>
+          )}
+          {error ? <Alert severity="critical">{error}</Alert> : null}
+        </div>
+      ) : null}
+      {shown.length === 0 ? (
+        <p className="text-base text-ink-700">No photos of this space yet.</p>
+      ) : (
+        <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3" aria-label={`Photos of ${spaceName}`}>
+          {shown.map((photo) => (
+            <li key={photo.id} className="overflow-hidden rounded-lg border border-ink-200 bg-white">
+              <a href={photo.url} target="_blank" rel="noreferrer" className="block bg-ink-100">
+                <img
+                  src={photo.thumbUrl}
+                  alt={photo.caption || `Photo: ${describeAttachment(photo)}`}
+                  loading="lazy"
+                  className="aspect-[4/3] w-full object-cover"
+                />
+              </a>
+              <div className="space-y-1 p-2.5">
+                {editing?.id === photo.id ? (
+                  <form
+                    className="space-y-2"
+                    onSubmit={(event) => {
+                      event.preventDefault();
+                      updateCaption.mutate(
+                        { photoId: photo.id, caption: editing.text.trim() || null },
+                        { onSuccess: () => setEditing(null), onError: (e) => toast.error("Caption not saved", { description: e.message }) },
+                      );
+                    }}
+                  >
+                    <TextField label="Caption" value={editing.text} maxLength={500} onChange={(event) => setEditing({ id: photo.id, text: event.target.value })} />
+                    <div className="flex gap-2">
+                      <Button type="submit" size="sm" isLoading={updateCaption.isPending}>
+                        Save
+                      </Button>
+                      <Button variant="ghost" size="sm" onClick={() => setEditing(null)}>
+                        Cancel
+                      </Button>
+                    </div>
+                  </form>
+                ) : (
+                  <p className="text-sm font-medium text-ink-900">{photo.caption || <span className="text-ink-500">No caption</span>}</p>
+                )}
+                <p className="text-xs text-ink-600">{describeAttachment(photo)}</p>
+                {canEdit && editing?.id !== photo.id ? (
+                  <Button variant="ghost" size="sm" className="-ml-2" onClick={() => setEditing({ id: photo.id, text: photo.caption ?? "" })}>
+                    Edit caption
+                  </Button>
+                ) : null}
+                {canEdit ? (
+                  <Button
+                    variant="ghost"
+                    size="sm"
+                    icon={<CloseIcon />}
+                    className="-ml-2 text-critical-700 hover:bg-critical-50"
+                    onClick={() => setToDelete(photo)}
+                  >
+                    Delete
+                  </Button>
+                ) : null}
+              </div>
+            </li>
+          ))}
+        </ul>
+      )}
+      <ConfirmDialog
+        open={toDelete !== null}
+        onOpenChange={(open) => (open ? undefined : setToDelete(null))}
+        title="Delete this photo?"
+        description={toDelete?.caption ? `"${toDelete.caption}" is removed from the project for everyone.` : "It is removed from the project for everyone."}
+        confirmLabel="Delete photo"
+        confirmVariant="danger"
+        isPending={remove.isPending}
+        onConfirm={() =>
+          toDelete &&
+          remove.mutate(toDelete.id, {
+            onSuccess: () => {
+              setToDelete(null);
+              toast.success("Photo deleted");
+            },
+            onError: (e) => toast.error("Photo not deleted", { description: e.message }),
+          })
+        }
+      />
+    </div>
+  );
+}

@@ -1,0 +1,219 @@
+import { useState } from "react";
+import type { UnitSystem } from "@shared/units/format";
+import { formatAreaSqFt } from "@shared/units/format";
+import { sectionAreaSqFt } from "@shared/ventilation/index";
+import { Button } from "@/components/ui/button";
+import { TextField } from "@/components/ui/field";
+import { CloseIcon, PlusIcon } from "@/components/ui/icons";
+import { Radio, RadioGroup } from "@/components/ui/checkbox";
+import { buildSection, emptySection, newId, sectionName, type SectionDraft, type SectionKind } from "../lib/drafts";
+import { areaEntry, lengthEntry, lengthText } from "../lib/measure";
+import { EntryField } from "./entry-field";
+import { PolygonGrid } from "./polygon-grid";
+
+export interface SectionsEditorProps {
+  sections: SectionDraft[];
+  onChange: (sections: SectionDraft[]) => void;
+  unitSystem: UnitSystem;
+  isReadOnly: boolean;
+}
+
+const KIND_LABELS: Record<SectionKind, { label: string; description: string }> = {
+  rect: { label: "Rectangle", description: "Length × width" },
+  polygon: { label: "Outline", description: "Corners in order" },
+  area: { label: "Area", description: "Already worked out" },
+};
+
+export function SectionsEditor({ sections, onChange, unitSystem, isReadOnly }: SectionsEditorProps) {
+  const update = (index: number, next: SectionDraft) => onChange(sections.map((s, i) => (i === index ? next : s)));
+  return (
+    <div className="space-y-4">
+      {sections.length === 0 ? (
+        <p className="text-base text-ink-700">
+          Measure the attic floor in sections: a rectangle for each block of the house, an outline for odd shapes, or an area you
+          already know.
+        </p>
+      ) : null}
+      {sections.map((section, index) => (
+        <SectionCard
+          key={section.id}
+          index={index}
+          section={section}
+          unitSystem={unitSystem}
+          isReadOnly={isReadOnly}
+          onChange={(next) => update(index, next)}
+          onRemove={() => onChange(sections.filter((_, i) => i !== index))}
+        />
+      ))}
+      {isReadOnly ? null : (
+        <div className="flex flex-wrap gap-2">
+          <Button variant="secondary" icon={<PlusIcon />} onClick={() => onChange([...sections, emptySection("rect")])}>
+            Add rectangle
+          </Button>
+          <Button variant="ghost" icon={<PlusIcon />} onClick={() => onChange([...sections, emptySection("polygon")])}>
+            Add outline
+          </Button>
+          <Button variant="ghost" icon={<PlusIcon />} onClick={() => onChange([...sections, emptySection("area")])}>
+            Add area
+          </Button>
+        </div>
+      )}
+    </div>
+  );
+}
+
+function SectionCard({
+  index,
+  section,
+  onChange,
+  onRemove,
+  unitSystem,
+  isReadOnly,
+}: {
+  index: number;
+  section: SectionDraft;
+  onChange: (next: SectionDraft) => void;
+  onRemove: () => void;
+  unitSystem: UnitSystem;
+  isReadOnly: boolean;
+}) {
+  const [isGridOpen, setIsGridOpen] = useState(false);
+  const built = buildSection(section);
+  // Messages already shown under their own field aren't repeated in the list below.
+  const fieldErrors = [section.length, section.width, section.area, ...section.points.flatMap((p) => [p.x, p.y])].flatMap((e) => (e.error ? [e.error] : []));
+  const area = built.section ? sectionAreaSqFt(built.section) : null;
+  const name = sectionName(section, index);
+  const setPoint = (i: number, axis: "x" | "y", text: string) =>
+    onChange({
+      ...section,
+      points: section.points.map((p, k) => (k === i ? { ...p, [axis]: lengthEntry(text, { allowZero: true, system: unitSystem }) } : p)),
+    });
+  const addPoint = (point?: [number, number]) =>
+    onChange({
+      ...section,
+      points: [
+        ...section.points,
+        {
+          key: newId(),
+          x: point ? lengthEntry(lengthText(point[0], unitSystem), { allowZero: true, system: unitSystem }) : lengthEntry(""),
+          y: point ? lengthEntry(lengthText(point[1], unitSystem), { allowZero: true, system: unitSystem }) : lengthEntry(""),
+        },
+      ],
+    });
+  // Grid taps are exact feet; keep the exact value even when shown in metres.
+  const addGridPoint = (point: [number, number]) => {
+    const mk = (v: number) => ({ ...lengthEntry(lengthText(v, unitSystem), { allowZero: true, system: unitSystem }), value: v });
+    onChange({ ...section, points: [...section.points, { key: newId(), x: mk(point[0]), y: mk(point[1]) }] });
+  };
+  const gridPoints = section.points.flatMap((p) => (p.x.value !== null && p.y.value !== null ? [[p.x.value, p.y.value] as [number, number]] : []));
+
+  return (
+    <fieldset
+      id={`part-${section.id}`}
+      className="space-y-4 rounded-lg border border-ink-200 bg-white p-4"
+      disabled={isReadOnly}
+    >
+      <div className="flex items-start justify-between gap-3">
+        <legend className="float-left text-base font-semibold text-ink-900">
+          {name}
+          {area !== null ? <span className="ml-2 font-normal text-ink-600">{formatAreaSqFt(area, unitSystem)}</span> : null}
+        </legend>
+        {isReadOnly ? null : (
+          <Button variant="ghost" size="icon" aria-label={`Remove ${name}`} onClick={onRemove} className="-mt-2 -mr-2 shrink-0">
+            <CloseIcon />
+          </Button>
+        )}
+      </div>
+      <div className="clear-both" />
+      <RadioGroup legend="Measured as" isInline>
+        {(Object.keys(KIND_LABELS) as SectionKind[]).map((kind) => (
+          <Radio
+            key={kind}
+            name={`kind-${section.id}`}
+            label={KIND_LABELS[kind].label}
+            description={KIND_LABELS[kind].description}
+            checked={section.kind === kind}
+            onChange={() => onChange({ ...section, kind })}
+          />
+        ))}
+      </RadioGroup>
+      <TextField
+        label="Name"
+        isOptional
+        placeholder="e.g. Main block, Garage wing"
+        value={section.label}
+        onChange={(event) => onChange({ ...section, label: event.target.value })}
+      />
+      {section.kind === "rect" ? (
+        <div className="grid gap-4 sm:grid-cols-2">
+          <EntryField
+            label="Length (along the ridge)"
+            placeholder={`40' or 12.2 m`}
+            entry={section.length}
+            onText={(text) => onChange({ ...section, length: lengthEntry(text, { system: unitSystem }) })}
+          />
+          <EntryField
+            label="Width (eave to eave)"
+            placeholder={`28' 6"`}
+            entry={section.width}
+            onText={(text) => onChange({ ...section, width: lengthEntry(text, { system: unitSystem }) })}
+          />
+        </div>
+      ) : section.kind === "area" ? (
+        <EntryField
+          label="Floor area"
+          hint="An area in sq ft or m², or sides to multiply, such as 12 x 20 or 30 x 40 + 12 x 20."
+          placeholder="12 x 20"
+          entry={section.area}
+          onText={(text) => onChange({ ...section, area: areaEntry(text, unitSystem) })}
+        />
+      ) : (
+        <div className="space-y-3">
+          <p className="text-sm text-ink-700">
+            Corners measured from one starting corner: how far across, and how far down the plan. Go around the outline in order.
+          </p>
+          <ol className="space-y-3">
+            {section.points.map((point, i) => (
+              <li key={point.key} className="grid grid-cols-[minmax(0,1fr)_minmax(0,1fr)_auto] items-start gap-2">
+                <EntryField
+                  label={`Corner ${i + 1} across`}
+                  entry={point.x}
+                  onText={(text) => setPoint(i, "x", text)}
+                  placeholder="0"
+                />
+                <EntryField label={`Corner ${i + 1} down`} entry={point.y} onText={(text) => setPoint(i, "y", text)} placeholder="0" />
+                <Button
+                  variant="ghost"
+                  size="icon"
+                  aria-label={`Remove corner ${i + 1}`}
+                  className="mt-7"
+                  onClick={() => onChange({ ...section, points: section.points.filter((_, k) => k !== i) })}
+                >
+                  <CloseIcon />
+                </Button>
+              </li>
+            ))}
+          </ol>
+          <div className="flex flex-wrap gap-2">
+            <Button variant="secondary" size="sm" icon={<PlusIcon />} onClick={() => addPoint()}>
+              Add corner
+            </Button>
+            <Button variant="ghost" size="sm" aria-expanded={isGridOpen} onClick={() => setIsGridOpen((v) => !v)}>
+              {isGridOpen ? "Hide the grid" : "Tap corners on a grid"}
+            </Button>
+          </div>
+          {isGridOpen ? <PolygonGrid points={gridPoints} onAdd={addGridPoint} unitSystem={unitSystem} /> : null}
+        </div>
+      )}
+      {built.problems.length > 0 && (section.length.text || section.width.text || section.area.text || section.points.length > 0) ? (
+        <ul className="space-y-1 text-sm text-warning-800">
+          {built.problems
+            .filter((p) => !fieldErrors.some((e) => p.endsWith(e)))
+            .map((p) => (
+              <li key={p}>• {p}</li>
+            ))}
+        </ul>
+      ) : null}
+    </fieldset>
+  );
+}
