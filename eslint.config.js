@@ -32,9 +32,16 @@ export default tseslint.config(
     },
   },
   {
-    files: ["server/**/*.ts"],
+    files: ["server/**/*.{ts,tsx}"],
     rules: {
       "no-restricted-imports": ["error", { patterns: [{ group: ["**/src/**", "@/*", "react", "react-dom"], message: "server/ never imports the client." }] }],
+    },
+  },
+  {
+    // The proposal PDF is written in react-pdf's JSX: React here is a document language, not the client.
+    files: ["server/modules/proposals/pdf/**/*.tsx"],
+    rules: {
+      "no-restricted-imports": ["error", { patterns: [{ group: ["**/src/**", "@/*", "react-dom"], message: "The PDF never imports the client." }] }],
     },
   },
   {

@@ -45,6 +45,13 @@ import { catalogRouter } from "./modules/catalog/catalog.router.ts";
 import { createOptionsRepository } from "./modules/options/options.repository.ts";
 import { createOptionsService } from "./modules/options/options.service.ts";
 import { optionsRouter } from "./modules/options/options.router.ts";
+import { createProposalsRepository } from "./modules/proposals/proposals.repository.ts";
+import { createProposalsService } from "./modules/proposals/proposals.service.ts";
+import { createCompanyService } from "./modules/proposals/company.service.ts";
+import { createProposalJobs } from "./modules/proposals/proposal-jobs.ts";
+import { proposalsRouter } from "./modules/proposals/proposals.router.ts";
+import { publicProposalsRouter, publicRateLimits } from "./modules/proposals/public.router.ts";
+import { signatureJson } from "./modules/proposals/uploads.ts";
 
 export interface AppDeps {
   env: Env;
@@ -116,7 +123,19 @@ export function createApp(deps: AppDeps): Express {
   const catalogService = createCatalogService({ repo: catalogRepo, audit });
   const optionsService = createOptionsService({ repo: createOptionsRepository(db), projects: projectsRepo, spaces: spacesRepo, catalog: catalogRepo });
 
+  const proposalsRepo = createProposalsRepository(db);
+  const proposalJobs = createProposalJobs({ jobs: deps.jobs, repo: proposalsRepo, storage, logger, now, appOrigin: () => appOrigin() });
+  const proposalsService = createProposalsService({
+    repo: proposalsRepo, projects: projectsRepo, spaces: spacesRepo, options: createOptionsRepository(db), catalog: catalogRepo,
+    storage, jobs: proposalJobs, now, appOrigin: () => appOrigin(),
+  });
+  const companyService = createCompanyService({ repo: proposalsRepo, storage });
+  app.locals.proposalJobs = proposalJobs;
+
   const api = express.Router();
+  api.use("/public", ...publicRateLimits());
+  // Routes carrying a drawn signature parse their own (larger) JSON first; the parser below then skips them.
+  api.use(["/public/proposals/:token/accept", "/auth/me/signature"], signatureJson());
   api.use(express.json({ limit: "1mb" }));
   api.use(originCheck({ allowedOrigins: env.APP_ORIGIN ? [env.APP_ORIGIN] : [], exemptPaths: [/^\/webhooks\//] }));
 
@@ -137,7 +156,7 @@ export function createApp(deps: AppDeps): Express {
   const declared = [
     authRouter(authService, lucia), teamRouter(teamService), outboxRouter(createOutboxRepository(db)),
     customersRouter(customersService), projectsRouter(projectsService), spacesRouter(spacesService), photosRouter(photosService), usersRouter(usersService),
-    catalogRouter(catalogService), optionsRouter(optionsService)];
+    catalogRouter(catalogService), optionsRouter(optionsService), proposalsRouter(proposalsService, companyService), publicProposalsRouter(proposalsService)];
   for (const router of declared) api.use(router);
   app.locals.routes = declared.flatMap((router) => router.routes.map((route): RouteInfo => ({ ...route, path: `/api${route.path}` })));
 

@@ -7,6 +7,8 @@ export const QUEUES = { email: "email-send" } as const;
 export interface Jobs {
   sendEmail(mail: OutgoingEmail, opts?: { singletonKey?: string }): Promise<void>;
   boss: PgBoss;
+  /** Whether this process runs workers; modules that add queues register theirs only then. */
+  runsWorkers: boolean;
   stop(): Promise<void>;
 }
 
@@ -31,6 +33,7 @@ export async function startJobs(opts: { databaseUrl: string; logger: Logger; mai
 
   return {
     boss,
+    runsWorkers: opts.runWorkers !== false,
     async sendEmail(mail, o = {}) {
       await boss.send(QUEUES.email, mail, {
         retryLimit: 5,

@@ -27,6 +27,16 @@ beforeAll(async () => {
     name: "Qwerty option",
     spaces: [{ spaceId: space.id, ventActions: { "fan-1": "remove" }, added: [{ id: "a1", catalogItemId: item.body.item.id, quantity: 12 }] }],
   });
+  // A rendered draft proposal (so its PDF reads 200) and a company logo, for the proposal routes.
+  await tallgrass.asOwner.post("/api/company/logo").set("origin", ORIGIN).attach("file", png, "logo.png");
+  const proposal = await tallgrass.asOwner.post(`/api/projects/${project.id}/proposals`).set("origin", ORIGIN).send({ optionIds: [option.body.option.id] });
+  await tallgrass.asOwner.post(`/api/proposals/${proposal.body.proposal.id}/render`).set("origin", ORIGIN).send({});
+  for (let i = 0; i < 100; i++) {
+    const status = (await tallgrass.asOwner.get(`/api/proposals/${proposal.body.proposal.id}/render-status`)).body.render?.status;
+    if (status === "ready" || status === "failed") break;
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  ids.proposal = proposal.body.proposal.id;
   Object.assign(ids, {
     customer: customer.id, project: project.id, space: space.id, secondSpace: second.id, photo: photo.body.photo.id, invite: invite.body.invite.id,
     catalogItem: item.body.item.id, option: option.body.option.id,
@@ -62,6 +72,15 @@ const BODIES: Record<string, () => Record<string, unknown> | "multipart" | undef
   "patch /api/options/:id": () => ({ version: 1, name: "Taken over" }),
   "delete /api/options/:id": () => undefined,
   "get /api/options/:id/materials": () => undefined,
+  "get /api/projects/:id/proposals": () => undefined,
+  "post /api/projects/:id/proposals": () => ({ optionIds: [ids.option] }),
+  "get /api/proposals/:id": () => undefined,
+  "patch /api/proposals/:id": () => ({ version: 1, coverNote: "Taken over" }),
+  "post /api/proposals/:id/render": () => undefined,
+  "get /api/proposals/:id/render-status": () => undefined,
+  "get /api/proposals/:id/pdf": () => undefined,
+  "post /api/proposals/:id/send": () => undefined,
+  "post /api/proposals/:id/revoke-link": () => undefined,
 };
 
 function urlFor(route: RouteInfo, id: (param: string, route: RouteInfo) => string) {
@@ -75,6 +94,7 @@ const realId = (param: string, route: RouteInfo) => {
   if (route.path.startsWith("/api/team/invites")) return ids.invite!;
   if (route.path.startsWith("/api/catalog")) return ids.catalogItem!;
   if (route.path.startsWith("/api/options")) return ids.option!;
+  if (route.path.startsWith("/api/proposals")) return ids.proposal!;
   return ids.project!;
 };
 
@@ -160,6 +180,6 @@ describe("roles (generated from the declared routes and shared/schemas/roles.ts)
     expect(keys).toEqual(expect.arrayContaining(["post /api/auth/sign-in", "get /api/team", "get /api/outbox", "get /api/projects"]));
     expect(new Set(keys).size).toBe(keys.length);
     const publicRoutes = declared.filter((r) => r.access === "public").map((r) => r.path);
-    expect(publicRoutes.every((p) => p.startsWith("/api/auth/"))).toBe(true);
+    expect(publicRoutes.every((p) => p.startsWith("/api/auth/") || p.startsWith("/api/public/"))).toBe(true);
   });
 });

@@ -10,3 +10,4 @@ export * from "./attic-spaces.ts";
 export * from "./photos.ts";
 export * from "./catalog-items.ts";
 export * from "./design-options.ts";
+export * from "./proposals.ts";

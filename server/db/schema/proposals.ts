@@ -1,0 +1,114 @@
+import { pgTable, uuid, text, timestamp, integer, jsonb, date, index, uniqueIndex, check, pgEnum, bigserial } from "drizzle-orm/pg-core";
+import { sql } from "drizzle-orm";
+import type { DepositRule, ProposalAcceptance, ProposalSnapshot, ScopeText } from "../../../shared/proposals/types.ts";
+import { PROPOSAL_STATUSES, RENDER_STATUSES } from "../../../shared/proposals/types.ts";
+import { companies } from "./companies.ts";
+import { projects } from "./projects.ts";
+import { users } from "./users.ts";
+
+export const proposalStatusEnum = pgEnum("proposal_status", PROPOSAL_STATUSES);
+export const renderStatusEnum = pgEnum("render_status", RENDER_STATUSES);
+
+/**
+ * One revision of a proposal. A draft is edited freely; sending freezes it (snapshot + hashes)
+ * and any later change makes a new revision of the same series, the old one pointing at it.
+ */
+export const proposals = pgTable(
+  "proposals",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid().notNull().references(() => companies.id),
+    projectId: uuid().notNull().references(() => projects.id, { onDelete: "cascade" }),
+    /** The first revision's id; every revision of one proposal shares it. */
+    seriesId: uuid().notNull(),
+    revision: integer().notNull().default(1),
+    status: proposalStatusEnum().notNull().default("draft"),
+    coverNote: text(),
+    terms: text(),
+    validUntil: date({ mode: "string" }).notNull(),
+    depositRule: jsonb().$type<DepositRule | null>(),
+    optionIds: jsonb().$type<string[]>().notNull().default([]),
+    photoIds: jsonb().$type<string[]>().notNull().default([]),
+    /** Finding codes to show; null means "all of them". */
+    findingCodes: jsonb().$type<string[] | null>(),
+    /** Scope of work per option id, generated then edited. */
+    scopes: jsonb().$type<Record<string, ScopeText>>().notNull().default({}),
+    createdBy: text().references(() => users.id, { onDelete: "set null" }),
+    /** Who signed and sent it; the signature itself is copied into the snapshot. */
+    sellerUserId: text().references(() => users.id, { onDelete: "set null" }),
+    snapshot: jsonb().$type<ProposalSnapshot>(),
+    snapshotSha256: text(),
+    pdfKey: text(),
+    pdfSha256: text(),
+    /** The snapshot hash the current PDF was drawn from. */
+    pdfSnapshotSha256: text(),
+    renderStatus: renderStatusEnum().notNull().default("none"),
+    renderAttempts: integer().notNull().default(0),
+    renderError: text(),
+    renderUpdatedAt: timestamp({ withTimezone: true, mode: "date" }),
+    signedPdfKey: text(),
+    signedPdfSha256: text(),
+    signedRenderStatus: renderStatusEnum().notNull().default("none"),
+    signedRenderError: text(),
+    acceptance: jsonb().$type<ProposalAcceptance>(),
+    declineReason: text(),
+    tokenHash: text(),
+    /** A public id of the current link (never the token), recorded in events. */
+    tokenId: uuid(),
+    tokenExpiresAt: timestamp({ withTimezone: true, mode: "date" }),
+    tokenRevokedAt: timestamp({ withTimezone: true, mode: "date" }),
+    supersededBy: uuid(),
+    sentAt: timestamp({ withTimezone: true, mode: "date" }),
+    viewedAt: timestamp({ withTimezone: true, mode: "date" }),
+    decidedAt: timestamp({ withTimezone: true, mode: "date" }),
+    reminderSentAt: timestamp({ withTimezone: true, mode: "date" }),
+    version: integer().notNull().default(1),
+    createdAt: timestamp({ withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [
+    index("proposals_project_idx").on(t.projectId, t.createdAt),
+    index("proposals_company_status_idx").on(t.companyId, t.status, t.updatedAt),
+    uniqueIndex("proposals_series_revision_idx").on(t.seriesId, t.revision),
+    uniqueIndex("proposals_token_hash_idx").on(t.tokenHash),
+    check("proposals_version_check", sql`${t.version} >= 1`),
+  ],
+);
+
+/**
+ * What happened to a proposal, in order: sent, viewed, accepted (with the signing evidence),
+ * declined, expired, reminded, link revoked. A trigger refuses UPDATE and DELETE.
+ */
+export const proposalEvents = pgTable(
+  "proposal_events",
+  {
+    id: bigserial({ mode: "number" }).primaryKey(),
+    companyId: uuid().notNull(),
+    proposalId: uuid().notNull(),
+    event: text().notNull(),
+    /** UTC. */
+    at: timestamp({ withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    userId: text(),
+    ip: text(),
+    userAgent: text(),
+    tokenId: uuid(),
+    snapshotSha256: text(),
+    pdfSha256: text(),
+    consentTextVersion: text(),
+    detail: jsonb().$type<Record<string, unknown>>().notNull().default({}),
+  },
+  (t) => [index("proposal_events_proposal_idx").on(t.proposalId, t.id)],
+);
+
+/**
+ * One row per e-mail a proposal should cause (e.g. "send:<proposal id>"), claimed before the
+ * mail is queued, so a retried job or a second click never mails twice.
+ */
+export const proposalMails = pgTable("proposal_mails", {
+  dedupeKey: text().primaryKey(),
+  companyId: uuid().notNull(),
+  proposalId: uuid().notNull(),
+  kind: text().notNull(),
+  toAddress: text().notNull(),
+  queuedAt: timestamp({ withTimezone: true, mode: "date" }).notNull().defaultNow(),
+});

@@ -1,0 +1,70 @@
+import { fileTypeFromBuffer } from "file-type";
+import { AppError, notFound } from "../../lib/errors.ts";
+import type { Actor } from "../../lib/request-context.ts";
+import type { Storage } from "../../lib/storage/index.ts";
+import type { CompanyProfilePatch } from "../../../shared/proposals/schemas.ts";
+import { sha256Hex } from "./proposal-snapshot.ts";
+import type { CompanySettings, ProposalsRepository } from "./proposals.repository.ts";
+
+export const MAX_LOGO_BYTES = 2 * 1024 * 1024;
+
+type CompanyRow = NonNullable<Awaited<ReturnType<ProposalsRepository["company"]>>>;
+
+/** The company profile as settings shows it and proposals print it. */
+export function presentCompany(c: CompanyRow) {
+  const settings = c.settings as CompanySettings;
+  return {
+    id: c.id, name: c.name, licenseNumber: c.licenseNumber, addressLine: c.addressLine, phone: c.phone, email: c.email,
+    defaultTerms: c.defaultTerms, taxRateBasisPoints: c.taxRateBasisPoints, depositRule: c.depositRule ?? null,
+    isCoolingOffNoticeEnabled: settings.isCoolingOffNoticeEnabled ?? false,
+    reminderDays: settings.reminderDays ?? null,
+    logo: settings.logoStorageKey ? { contentType: settings.logoContentType, sha256: settings.logoSha256, url: "/api/company/logo" } : null,
+  };
+}
+
+export function createCompanyService(deps: { repo: ProposalsRepository; storage: Storage }) {
+  const { repo } = deps;
+  async function current(actor: Actor) {
+    const c = await repo.company(actor);
+    if (!c) throw notFound("Your company");
+    return c;
+  }
+  return {
+    async get(actor: Actor) {
+      return presentCompany(await current(actor));
+    },
+
+    async update(actor: Actor, patch: CompanyProfilePatch) {
+      const c = await current(actor);
+      const { isCoolingOffNoticeEnabled, reminderDays, ...columns } = patch;
+      const settings: CompanySettings = { ...(c.settings as CompanySettings) };
+      if (isCoolingOffNoticeEnabled !== undefined) settings.isCoolingOffNoticeEnabled = isCoolingOffNoticeEnabled;
+      if (reminderDays !== undefined) settings.reminderDays = reminderDays;
+      const updated = await repo.updateCompany(actor, { ...columns, settings: settings as Record<string, unknown> });
+      return presentCompany(updated!);
+    },
+
+    /** PNG or JPEG only, checked by the bytes; stored under a key made from its hash. */
+    async setLogo(actor: Actor, file: { buffer: Buffer } | undefined) {
+      if (!file) throw new AppError("invalid-input", "Send the logo in the form field named file.", 400, { file: "Choose a PNG or JPEG logo." });
+      const type = await fileTypeFromBuffer(file.buffer);
+      if (!type || (type.mime !== "image/png" && type.mime !== "image/jpeg")) {
+        throw new AppError("unsupported-media-type", "The logo must be a PNG or JPEG image. Its contents were checked, not its name.", 415, { file: "Choose a PNG or JPEG logo." });
+      }
+      const c = await current(actor);
+      const sha256 = sha256Hex(file.buffer);
+      const key = `companies/${c.id}/logo-${sha256}.${type.ext}`;
+      await deps.storage.put(key, file.buffer, type.mime);
+      const settings: CompanySettings = { ...(c.settings as CompanySettings), logoStorageKey: key, logoContentType: type.mime, logoSha256: sha256 };
+      return presentCompany((await repo.updateCompany(actor, { settings: settings as Record<string, unknown> }))!);
+    },
+
+    async openLogo(actor: Actor) {
+      const settings = (await current(actor)).settings as CompanySettings;
+      const object = settings.logoStorageKey ? await deps.storage.get(settings.logoStorageKey) : null;
+      if (!object) throw notFound("The logo");
+      return { object, contentType: settings.logoContentType ?? "application/octet-stream" };
+    },
+  };
+}
+export type CompanyService = ReturnType<typeof createCompanyService>;

@@ -1,0 +1,365 @@
+import { Document, Image, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
+import type { ProposalAcceptance, ProposalSnapshot, SnapshotAnalysis, SnapshotOption, SnapshotSpace } from "../../../../shared/proposals/types.ts";
+import { formatCents, formatBasisPoints } from "../../../../shared/pricing/index.ts";
+import { formatNumber } from "../../../../shared/units/format.ts";
+import { AirflowSvg } from "./airflow-svg.tsx";
+import { PLEX_FAMILIES } from "./fonts.ts";
+
+const INK = "#22262b";
+const MUTED = "#5d646d";
+const RULE = "#d5d9de";
+const ACCENT = "#1f5c4a";
+const PAPER_TINT = "#f4f6f5";
+
+const s = StyleSheet.create({
+  page: { paddingTop: 48, paddingBottom: 56, paddingHorizontal: 50, fontFamily: PLEX_FAMILIES as unknown as string, fontSize: 10, color: INK },
+  body: { lineHeight: "14pt" },
+  footer: { position: "absolute", bottom: 24, left: 50, right: 50, flexDirection: "row", justifyContent: "space-between", fontSize: 8, color: MUTED, borderTopWidth: 0.5, borderTopColor: RULE, paddingTop: 6 },
+  coverBand: { flexDirection: "row", justifyContent: "space-between", alignItems: "flex-start", borderBottomWidth: 2, borderBottomColor: ACCENT, paddingBottom: 14, marginBottom: 18 },
+  company: { fontSize: 18, fontWeight: 700, color: ACCENT, lineHeight: "23pt", marginBottom: 2 },
+  small: { fontSize: 8.5, color: MUTED, lineHeight: "12pt" },
+  logo: { maxWidth: 140, maxHeight: 60, objectFit: "contain" },
+  title: { fontSize: 22, fontWeight: 700, lineHeight: "27pt", marginBottom: 4 },
+  h2: { fontSize: 14, fontWeight: 700, color: ACCENT, lineHeight: "18pt", marginTop: 14, marginBottom: 6 },
+  h3: { fontSize: 11, fontWeight: 600, lineHeight: "15pt", marginTop: 8, marginBottom: 3 },
+  para: { marginBottom: 5, lineHeight: "14pt" },
+  twoCol: { flexDirection: "row", gap: 18, marginBottom: 10 },
+  col: { flex: 1 },
+  label: { fontSize: 8, lineHeight: "11pt", color: MUTED, textTransform: "uppercase", letterSpacing: 0.6, marginBottom: 2 },
+  card: { backgroundColor: PAPER_TINT, borderRadius: 3, padding: 10, marginBottom: 8 },
+  finding: { borderLeftWidth: 3, paddingLeft: 8, marginBottom: 7 },
+  bullet: { flexDirection: "row", marginBottom: 3 },
+  bulletMark: { width: 12, lineHeight: "14pt" },
+  bulletText: { flex: 1, lineHeight: "14pt" },
+  figureRow: { flexDirection: "row", justifyContent: "space-between", borderBottomWidth: 0.5, borderBottomColor: RULE, paddingVertical: 3 },
+  figureStrong: { fontWeight: 700 },
+  priceBox: { borderWidth: 1, borderColor: ACCENT, borderRadius: 3, padding: 10, marginTop: 6, marginBottom: 6 },
+  caption: { fontSize: 8, color: MUTED, lineHeight: "11pt", marginTop: 3 },
+  caution: { borderWidth: 0.75, borderColor: "#b4411b", borderRadius: 3, padding: 8, marginBottom: 6, fontSize: 9, lineHeight: "12.5pt" },
+  sigRow: { flexDirection: "row", gap: 24, marginTop: 12 },
+  sigBox: { flex: 1 },
+  sigLine: { height: 52, borderBottomWidth: 1, borderBottomColor: INK, justifyContent: "flex-end", paddingBottom: 3, marginBottom: 4 },
+  sigImage: { height: 44, width: 160, objectFit: "contain" },
+  typedSig: { fontSize: 16, fontWeight: 600, lineHeight: "21pt", marginBottom: 4 },
+  table: { borderTopWidth: 0.5, borderTopColor: RULE, marginTop: 4 },
+  cell: { fontSize: 9, lineHeight: "12.5pt" },
+  mono: { fontSize: 8, color: INK, lineHeight: "11pt" },
+});
+
+const severityColour = { critical: "#b4411b", warning: "#b7791f", info: "#5d646d" } as const;
+const sqIn = (n: number) => `${formatNumber(n)} sq in`;
+const sqFt = (n: number) => `${formatNumber(n)} sq ft`;
+
+export function formatDate(iso: string): string {
+  const d = new Date(iso.length === 10 ? `${iso}T12:00:00Z` : iso);
+  return new Intl.DateTimeFormat("en-US", { year: "numeric", month: "long", day: "numeric", timeZone: "UTC" }).format(d);
+}
+
+function Bullets({ items }: { items: string[] }) {
+  return (
+    <View>
+      {items.map((item, i) => (
+        <View key={i} style={s.bullet} wrap={false}>
+          <Text style={s.bulletMark}>•</Text>
+          <Text style={s.bulletText}>{item}</Text>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+function Figure({ label, value, isStrong }: { label: string; value: string; isStrong?: boolean }) {
+  return (
+    <View style={s.figureRow}>
+      <Text style={isStrong ? [s.body, s.figureStrong] : s.body}>{label}</Text>
+      <Text style={isStrong ? [s.body, s.figureStrong] : s.body}>{value}</Text>
+    </View>
+  );
+}
+
+function Figures({ analysis }: { analysis: SnapshotAnalysis }) {
+  const r = analysis.requirement;
+  return (
+    <View wrap={false}>
+      <Figure label="Attic floor area" value={sqFt(analysis.floorAreaSqFt)} />
+      <Figure label={`Ventilation the code asks for (1 sq ft per ${r.ratio} sq ft of floor)`} value={sqIn(r.totalSqIn)} isStrong />
+      <Figure label="Intake the code split implies, at least (low, at the eaves)" value={sqIn(r.lowerMinSqIn)} />
+      <Figure label="Exhaust the split implies (high, near the ridge)" value={`${sqIn(r.upperMinSqIn)} – ${sqIn(r.upperMaxSqIn)}`} />
+      <Figure label="Intake provided" value={sqIn(analysis.provided.intakeSqIn)} />
+      <Figure label="Exhaust provided" value={sqIn(analysis.provided.exhaustSqIn)} />
+      <Figure label="Total provided" value={sqIn(analysis.provided.totalSqIn)} isStrong />
+      {analysis.fan ? <Figure label="Powered fan: installed / recommended" value={`${formatNumber(analysis.fan.installedCfm)} / ${formatNumber(analysis.fan.recommendedCfm)} cfm`} /> : null}
+      <Figure label="Meets the code minimum" value={analysis.compliant ? "Yes" : "No"} isStrong />
+    </View>
+  );
+}
+
+function Picture({ space, heading, widthPt = 495 }: { space: SnapshotSpace; heading: string; widthPt?: number }) {
+  if (!space.picture) return null;
+  return (
+    <View style={{ marginBottom: 8, width: widthPt }}>
+      <View wrap={false}>
+        <Text style={s.h3}>{heading}</Text>
+        <AirflowSvg picture={space.picture} widthPt={widthPt} />
+      </View>
+      {space.picture.captions.map((c) => (
+        <Text key={c.id} style={s.caption} wrap={false}>{c.text}</Text>
+      ))}
+      <Text style={s.caption}>{space.picture.legend.map((l) => l.words).join("  ·  ")}</Text>
+    </View>
+  );
+}
+
+/** Today and after the option, side by side, so the difference is seen at a glance. */
+function BeforeAfter({ before, after, index }: { before: SnapshotSpace | undefined; after: SnapshotSpace; index: number }) {
+  if (!after.picture) return null;
+  return (
+    <View style={{ flexDirection: "row", gap: 15 }}>
+      {before?.picture ? <Picture space={before} heading={`${before.name} today`} widthPt={240} /> : null}
+      <Picture space={after} heading={`After option ${index + 1}`} widthPt={240} />
+    </View>
+  );
+}
+
+function OptionSection({ option, index, snapshot }: { option: SnapshotOption; index: number; snapshot: ProposalSnapshot }) {
+  const price = option.price;
+  return (
+    <View break>
+      <Text style={s.h2}>Option {index + 1}: {option.name}</Text>
+      {option.notes ? <Text style={s.para}>{option.notes}</Text> : null}
+      <Text style={s.h3}>Scope of work</Text>
+      <Bullets items={option.scope} />
+      {price ? (
+        <View style={s.priceBox} wrap={false}>
+          <Text style={s.label}>Price of option {index + 1}</Text>
+          <Figure label="Subtotal" value={formatCents(price.subtotalCents)} />
+          {price.discountCents > 0 ? <Figure label="Discount" value={`− ${formatCents(price.discountCents)}`} /> : null}
+          <Figure label={`Sales tax (${formatBasisPoints(price.taxRateBasisPoints)})`} value={formatCents(price.taxCents)} />
+          <Figure label="Total" value={formatCents(price.totalCents)} isStrong />
+          {price.depositCents > 0 ? <Figure label="Deposit due at signing" value={formatCents(price.depositCents)} /> : null}
+        </View>
+      ) : (
+        <Text style={s.para}>This option could not be priced; ask us for the figure.</Text>
+      )}
+      {option.materials.length ? (
+        <View wrap={false}>
+          <Text style={s.h3}>Materials</Text>
+          <View style={s.table}>
+            {option.materials.map((m, i) => (
+              <View key={i} style={s.figureRow}>
+                <Text style={s.cell}>{m.description}</Text>
+                <Text style={s.cell}>{formatNumber(m.quantity)} {m.unit === "linear-ft" ? "ft" : m.unit === "hour" ? "h" : "×"}</Text>
+              </View>
+            ))}
+          </View>
+        </View>
+      ) : null}
+      {option.after.map((space) => (
+        <View key={space.spaceId}>
+          <BeforeAfter before={snapshot.before.find((b) => b.spaceId === space.spaceId)} after={space} index={index} />
+          {space.analysis ? (
+            <View wrap={false}>
+              <Text style={s.h3}>{space.name} after the work</Text>
+              <Figures analysis={space.analysis} />
+            </View>
+          ) : (
+            <Bullets items={space.issues} />
+          )}
+        </View>
+      ))}
+    </View>
+  );
+}
+
+export interface SignedPart {
+  acceptance: ProposalAcceptance;
+  /** The drawn signature's bytes as a data URL, read back from storage. */
+  signaturePngDataUrl: string | null;
+  originalPdfSha256: string | null;
+  snapshotSha256: string;
+  events: { event: string; at: string; ip: string | null; userAgent: string | null }[];
+}
+
+/** The whole proposal; with `signed`, the homeowner's signature and a signing certificate page. */
+export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed }: {
+  snapshot: ProposalSnapshot;
+  logoDataUrl: string | null;
+  photoDataUrls: Record<string, string>;
+  signed?: SignedPart;
+}) {
+  const c = snapshot.company;
+  const footerLeft = `${c.name} · Proposal ${snapshot.proposalId.slice(0, 8)} rev. ${snapshot.revision}`;
+  const accepted = signed ? snapshot.options.find((o) => o.id === signed.acceptance.optionId) : undefined;
+  const findings = snapshot.before.flatMap((space) => (space.analysis?.findings ?? []).map((f) => ({ ...f, space: space.name })));
+  return (
+    <Document title={`Proposal for ${snapshot.customer.name}`} author={c.name} subject="Attic ventilation proposal" creator="Eavesight" producer="Eavesight">
+      <Page size="LETTER" style={s.page}>
+        <View style={s.footer} fixed>
+          <Text style={s.body}>{footerLeft}</Text>
+          <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
+        </View>
+
+        <View style={s.coverBand}>
+          <View style={{ flex: 1 }}>
+            <Text style={s.company}>{c.name}</Text>
+            {c.licenseNumber ? <Text style={s.small}>Licence no. {c.licenseNumber}</Text> : null}
+            {c.addressLine ? <Text style={s.small}>{c.addressLine}</Text> : null}
+            <Text style={s.small}>{[c.phone, c.email].filter(Boolean).join(" · ")}</Text>
+          </View>
+          {logoDataUrl ? <Image src={logoDataUrl} style={s.logo} /> : null}
+        </View>
+
+        <Text style={s.title}>Attic ventilation proposal</Text>
+        <Text style={s.small}>Revision {snapshot.revision} · prepared {formatDate(snapshot.preparedAt)} · valid until {formatDate(snapshot.validUntil)}</Text>
+
+        <View style={[s.twoCol, { marginTop: 14 }]}>
+          <View style={[s.col, { flex: 1.4 }]}>
+            <Text style={s.label}>Prepared for</Text>
+            <Text style={[s.body, { fontWeight: 600 }]}>{snapshot.customer.name}</Text>
+            {snapshot.customer.email ? <Text style={s.small}>{snapshot.customer.email}</Text> : null}
+            {snapshot.customer.phone ? <Text style={s.small}>{snapshot.customer.phone}</Text> : null}
+          </View>
+          <View style={s.col}>
+            <Text style={s.label}>Site</Text>
+            <Text style={s.body}>{snapshot.site.address}</Text>
+            <Text style={s.small}>{snapshot.site.projectTitle}</Text>
+          </View>
+          <View style={s.col}>
+            <Text style={s.label}>Your contact</Text>
+            <Text style={s.body}>{snapshot.seller.name}</Text>
+            {snapshot.seller.email ? <Text style={s.small}>{snapshot.seller.email}</Text> : null}
+          </View>
+        </View>
+
+        {snapshot.coverNote ? (
+          <View style={s.card}>
+            {snapshot.coverNote.split(/\n+/).map((p, i) => <Text key={i} style={s.para}>{p}</Text>)}
+          </View>
+        ) : null}
+
+        <Text style={s.h2}>What we found</Text>
+        {snapshot.explanation.map((p, i) => <Text key={i} style={s.para}>{p}</Text>)}
+        {findings.map((f, i) => (
+          <View key={i} style={[s.finding, { borderLeftColor: severityColour[f.severity] }]} wrap={false}>
+            <Text style={[s.body, { fontWeight: 600 }]}>{f.title}{snapshot.before.length > 1 ? ` (${f.space})` : ""}</Text>
+            <Text style={s.small}>{f.detail}</Text>
+          </View>
+        ))}
+
+        <Text style={s.h2} break>What the building code asks for</Text>
+        {snapshot.before.map((space) => (
+          <View key={space.spaceId} style={{ marginBottom: 8 }}>
+            <Text style={s.h3}>{space.name}{space.analysis ? "" : " — not analysed"}</Text>
+            {space.analysis ? (
+              <>
+                <Bullets items={space.analysis.requirement.reasons} />
+                <Text style={s.h3}>Today</Text>
+                <Figures analysis={space.analysis} />
+              </>
+            ) : (
+              <Bullets items={space.issues} />
+            )}
+          </View>
+        ))}
+        {snapshot.before.map((space) => (
+          <Picture key={space.spaceId} space={space} heading={`How air moves in the ${space.name.toLowerCase()} today`} />
+        ))}
+
+        {snapshot.options.map((option, i) => <OptionSection key={option.id} option={option} index={i} snapshot={snapshot} />)}
+
+        {snapshot.photos.length ? (
+          <View break>
+            <Text style={s.h2}>Photos from the survey</Text>
+            <View style={{ flexDirection: "row", flexWrap: "wrap", gap: 10 }}>
+              {snapshot.photos.map((p) => photoDataUrls[p.id] ? (
+                <View key={p.id} style={{ width: 240 }} wrap={false}>
+                  <Image src={photoDataUrls[p.id]!} style={{ width: 240, height: 170, objectFit: "cover" }} />
+                  {p.caption ? <Text style={s.caption}>{p.caption}</Text> : null}
+                </View>
+              ) : null)}
+            </View>
+          </View>
+        ) : null}
+
+        <View break>
+          <Text style={s.h2}>Terms</Text>
+          {(snapshot.terms ?? "Payment terms and warranty are as agreed with your contact.").split(/\n+/).map((p, i) => <Text key={i} style={s.para}>{p}</Text>)}
+          <Text style={s.para}>This proposal is valid until {formatDate(snapshot.validUntil)}. Prices are in US dollars and include the sales tax shown.</Text>
+        </View>
+
+        <View>
+          <Text style={s.h2}>Safety and codes</Text>
+          {snapshot.cautions.map((text, i) => <Text key={i} style={s.caution} wrap={false}>{text}</Text>)}
+        </View>
+
+        {snapshot.coolingOff.isEnabled ? (
+          <View break>
+            <Text style={s.h2}>Your right to cancel</Text>
+            {snapshot.coolingOff.notice.map((p, i) => (
+              <Text key={i} style={p === "NOTICE OF CANCELLATION" ? [s.h3, { textAlign: "center", fontSize: 12 }] : s.para}>{p}</Text>
+            ))}
+          </View>
+        ) : null}
+
+        <View wrap={false} style={{ marginTop: 16 }}>
+          <Text style={s.h2}>Signatures</Text>
+          <Text style={s.para}>
+            {accepted ? `Accepted: option ${snapshot.options.indexOf(accepted) + 1}, ${accepted.name}${accepted.price ? `, total ${formatCents(accepted.price.totalCents)}` : ""}.` : "To accept, choose one option and sign. Option accepted: ______________________"}
+          </Text>
+          <View style={s.sigRow}>
+            <View style={s.sigBox}>
+              <View style={s.sigLine}>
+                {signed?.signaturePngDataUrl ? <Image src={signed.signaturePngDataUrl} style={s.sigImage} /> : null}
+                {signed?.acceptance.signature.typed ? <Text style={s.typedSig}>{signed.acceptance.signature.typed}</Text> : null}
+              </View>
+              <Text style={s.body}>{signed ? signed.acceptance.signerName : "Homeowner"}</Text>
+              <Text style={s.small}>{signed ? `Signed electronically ${signed.acceptance.acceptedAt.replace("T", " ").slice(0, 19)} UTC` : "Signature and date"}</Text>
+            </View>
+            <View style={s.sigBox}>
+              <View style={s.sigLine}>
+                {snapshot.seller.signature?.pngDataUrl ? <Image src={snapshot.seller.signature.pngDataUrl} style={s.sigImage} /> : null}
+                {snapshot.seller.signature?.typed ? <Text style={s.typedSig}>{snapshot.seller.signature.typed}</Text> : null}
+              </View>
+              <Text style={s.body}>{snapshot.seller.name}, for {c.name}</Text>
+              <Text style={s.small}>{snapshot.seller.signature ? "Signed electronically when sent" : "Not yet signed (draft)"}</Text>
+            </View>
+          </View>
+        </View>
+      </Page>
+
+      {signed ? (
+        <Page size="LETTER" style={s.page}>
+          <View style={s.footer} fixed>
+            <Text style={s.body}>{footerLeft} · signing certificate</Text>
+            <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
+          </View>
+          <Text style={s.title}>Signing certificate</Text>
+          <Text style={s.para}>This page records how the proposal was signed. The document fingerprints (SHA-256) let anyone check the files against our record.</Text>
+          <View style={s.table}>
+            <Figure label="Signer" value={signed.acceptance.signerName} />
+            <Figure label="Option accepted" value={accepted ? `${snapshot.options.indexOf(accepted) + 1}: ${accepted.name}` : signed.acceptance.optionId} />
+            <Figure label="Signed at (UTC)" value={signed.acceptance.acceptedAt} />
+            <Figure label="Signature" value={signed.acceptance.signature.typed ? "Typed name" : "Drawn on screen"} />
+            <Figure label="IP address" value={signed.acceptance.ip ?? "unknown"} />
+            <Figure label="Link id" value={signed.acceptance.tokenId ?? "—"} />
+            <Figure label="Consent to e-sign, text version" value={signed.acceptance.consentTextVersion} />
+          </View>
+          <Text style={s.h3}>Browser</Text>
+          <Text style={s.mono}>{signed.acceptance.userAgent ?? "unknown"}</Text>
+          <Text style={s.h3}>Fingerprints</Text>
+          <Text style={s.mono}>Proposal content (snapshot) SHA-256: {signed.snapshotSha256}</Text>
+          <Text style={s.mono}>Proposal PDF as sent, SHA-256: {signed.originalPdfSha256 ?? "—"}</Text>
+          {signed.acceptance.signature.pngSha256 ? <Text style={s.mono}>Drawn signature image SHA-256: {signed.acceptance.signature.pngSha256}</Text> : null}
+          <Text style={s.h3}>Trail</Text>
+          {signed.events.map((e, i) => (
+            <View key={i} style={s.figureRow} wrap={false}>
+              <Text style={s.cell}>{e.event}</Text>
+              <Text style={s.cell}>{e.at}{e.ip ? ` · ${e.ip}` : ""}</Text>
+            </View>
+          ))}
+          <Text style={[s.small, { marginTop: 10 }]}>The fingerprint of this signed PDF is recorded when it is made; verify a copy at the verification page of {c.name}'s proposal service.</Text>
+        </Page>
+      ) : null}
+    </Document>
+  );
+}

@@ -1,0 +1,19 @@
+import { renderToBuffer } from "@react-pdf/renderer";
+import type { ProposalSnapshot } from "../../../../shared/proposals/types.ts";
+import { registerFonts } from "./fonts.ts";
+import { ProposalDocument, type SignedPart } from "./proposal-document.tsx";
+
+export type { SignedPart } from "./proposal-document.tsx";
+
+export interface RenderInput {
+  snapshot: ProposalSnapshot;
+  logoDataUrl: string | null;
+  photoDataUrls: Record<string, string>;
+  signed?: SignedPart;
+}
+
+/** The proposal as PDF bytes. CPU work of a second or so: only ever called from a job worker. */
+export async function renderProposalPdf(input: RenderInput): Promise<Buffer> {
+  registerFonts();
+  return renderToBuffer(<ProposalDocument {...input} />);
+}

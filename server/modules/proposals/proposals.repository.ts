@@ -1,0 +1,157 @@
+import { and, asc, desc, eq, inArray, isNull, lte, sql } from "drizzle-orm";
+import type { Database } from "../../db/client.ts";
+import { companies, customers, photos, projects, proposalEvents, proposalMails, proposals, users } from "../../db/schema/index.ts";
+import { scoped } from "../../lib/tenant.ts";
+import type { ProposalStatus } from "../../../shared/proposals/types.ts";
+
+/** Only the company matters for scoping; jobs and the homeowner's link have no signed-in actor. */
+export interface Tenant {
+  companyId: string;
+}
+
+export type ProposalRow = typeof proposals.$inferSelect;
+export type ProposalWrite = Partial<Omit<typeof proposals.$inferInsert, "id" | "companyId" | "version" | "createdAt">>;
+export type ProposalEventRow = typeof proposalEvents.$inferSelect;
+export type NewProposalEvent = Omit<typeof proposalEvents.$inferInsert, "id" | "at" | "companyId" | "proposalId"> & { at?: Date };
+
+export interface CompanySettings {
+  isCoolingOffNoticeEnabled?: boolean;
+  reminderDays?: number | null;
+  logoStorageKey?: string | null;
+  logoContentType?: string | null;
+  logoSha256?: string | null;
+}
+
+export function createProposalsRepository(db: Database) {
+  return {
+    async company(tenant: Tenant) {
+      const [row] = await db.select().from(companies).where(eq(companies.id, tenant.companyId)).limit(1);
+      return row ? { ...row, settings: row.settings as CompanySettings } : null;
+    },
+
+    async updateCompany(tenant: Tenant, patch: Partial<typeof companies.$inferInsert>) {
+      const [row] = await db.update(companies).set(patch).where(eq(companies.id, tenant.companyId)).returning();
+      return row ? { ...row, settings: row.settings as CompanySettings } : null;
+    },
+
+    async user(tenant: Tenant, userId: string) {
+      const [row] = await db
+        .select({ id: users.id, name: users.name, email: users.email, signatureTyped: users.signatureTyped, signatureDataUrl: users.signatureDataUrl })
+        .from(users).where(scoped(users, tenant, eq(users.id, userId))).limit(1);
+      return row ?? null;
+    },
+
+    async setSignature(tenant: Tenant, userId: string, signature: { signatureTyped: string | null; signatureDataUrl: string | null }) {
+      await db.update(users).set({ ...signature, updatedAt: new Date() }).where(scoped(users, tenant, eq(users.id, userId)));
+    },
+
+    async customer(tenant: Tenant, id: string) {
+      const [row] = await db.select({ id: customers.id, name: customers.name, email: customers.email, phone: customers.phone })
+        .from(customers).where(scoped(customers, tenant, eq(customers.id, id))).limit(1);
+      return row ?? null;
+    },
+
+    photosFor: (tenant: Tenant, projectId: string, ids: string[]) =>
+      ids.length === 0
+        ? Promise.resolve([])
+        : db.select({ id: photos.id, caption: photos.caption, findingCode: photos.findingCode, storageKey: photos.storageKey, contentType: photos.contentType })
+            .from(photos).where(scoped(photos, tenant, eq(photos.projectId, projectId), inArray(photos.id, ids))),
+
+    async find(tenant: Tenant, id: string): Promise<ProposalRow | null> {
+      const [row] = await db.select().from(proposals).where(scoped(proposals, tenant, eq(proposals.id, id))).limit(1);
+      return row ?? null;
+    },
+
+    /** The homeowner's link: found by the SHA-256 of its token only. */
+    async findByTokenHash(tokenHash: string): Promise<ProposalRow | null> {
+      const [row] = await db.select().from(proposals).where(eq(proposals.tokenHash, tokenHash)).limit(1);
+      return row ?? null;
+    },
+
+    listForProject: (tenant: Tenant, projectId: string) =>
+      db.select().from(proposals).where(scoped(proposals, tenant, eq(proposals.projectId, projectId))).orderBy(desc(proposals.createdAt), desc(proposals.revision)),
+
+    async insert(tenant: Tenant, values: ProposalWrite & Pick<typeof proposals.$inferInsert, "projectId" | "seriesId" | "validUntil">): Promise<ProposalRow> {
+      const [row] = await db.insert(proposals).values({ ...values, companyId: tenant.companyId }).returning();
+      return row!;
+    },
+
+    /** Optimistic update; `onlyStatuses` keeps a frozen or decided revision from being changed under a race. */
+    async updateIfVersion(tenant: Tenant, id: string, version: number, patch: ProposalWrite, onlyStatuses?: ProposalStatus[]): Promise<ProposalRow | null> {
+      const [row] = await db.update(proposals)
+        .set({ ...patch, version: sql`${proposals.version} + 1`, updatedAt: new Date() })
+        .where(scoped(proposals, tenant, eq(proposals.id, id), eq(proposals.version, version), onlyStatuses ? inArray(proposals.status, onlyStatuses) : undefined))
+        .returning();
+      return row ?? null;
+    },
+
+    /** An unconditional system update (render results, status changes by jobs); `when` narrows it. */
+    async update(tenant: Tenant, id: string, patch: ProposalWrite, when?: ReturnType<typeof and>): Promise<ProposalRow | null> {
+      const [row] = await db.update(proposals).set({ ...patch, updatedAt: new Date() })
+        .where(scoped(proposals, tenant, eq(proposals.id, id), when)).returning();
+      return row ?? null;
+    },
+
+    /** Only the first open of the link counts: the status moves from sent to viewed once. */
+    async markViewed(tenant: Tenant, id: string, now: Date): Promise<ProposalRow | null> {
+      const [row] = await db.update(proposals).set({ status: "viewed", viewedAt: now, updatedAt: now })
+        .where(scoped(proposals, tenant, eq(proposals.id, id), eq(proposals.status, "sent"))).returning();
+      return row ?? null;
+    },
+
+    /** A new draft revision made from a sent one; the old one then points at it. One transaction. */
+    reviseFrom: (tenant: Tenant, old: ProposalRow, values: ProposalWrite) =>
+      db.transaction(async (tx) => {
+        const [next] = await tx.insert(proposals).values({
+          companyId: tenant.companyId, projectId: old.projectId, seriesId: old.seriesId, revision: old.revision + 1,
+          validUntil: old.validUntil, coverNote: old.coverNote, terms: old.terms, depositRule: old.depositRule,
+          optionIds: old.optionIds, photoIds: old.photoIds, findingCodes: old.findingCodes, scopes: old.scopes,
+          createdBy: old.createdBy, ...values, status: "draft",
+        }).returning();
+        const [marked] = await tx.update(proposals).set({ supersededBy: next!.id, updatedAt: new Date(), version: sql`${proposals.version} + 1` })
+          .where(scoped(proposals, tenant, eq(proposals.id, old.id), eq(proposals.version, old.version), isNull(proposals.supersededBy), sql`${proposals.status} <> 'accepted'`))
+          .returning({ id: proposals.id });
+        if (!marked) tx.rollback();
+        return next!;
+      }),
+
+    async addEvent(tenant: Tenant, proposalId: string, event: NewProposalEvent) {
+      await db.insert(proposalEvents).values({ ...event, companyId: tenant.companyId, proposalId });
+    },
+
+    events: (tenant: Tenant, proposalId: string) =>
+      db.select().from(proposalEvents).where(scoped(proposalEvents, tenant, eq(proposalEvents.proposalId, proposalId))).orderBy(asc(proposalEvents.id)),
+
+    /** Is this hash one of a recorded PDF (as sent, or signed)? */
+    async findByPdfHash(sha256: string) {
+      const [row] = await db
+        .select({ id: proposals.id, companyId: proposals.companyId, revision: proposals.revision, status: proposals.status, pdfSha256: proposals.pdfSha256, signedPdfSha256: proposals.signedPdfSha256, sentAt: proposals.sentAt, decidedAt: proposals.decidedAt })
+        .from(proposals)
+        .where(sql`${proposals.status} <> 'draft' and (${proposals.pdfSha256} = ${sha256} or ${proposals.signedPdfSha256} = ${sha256})`)
+        .limit(1);
+      return row ?? null;
+    },
+
+    /** Claims a once-only e-mail; false when it was claimed before. */
+    async claimMail(tenant: Tenant, proposalId: string, dedupeKey: string, kind: string, toAddress: string): Promise<boolean> {
+      const rows = await db.insert(proposalMails).values({ dedupeKey, companyId: tenant.companyId, proposalId, kind, toAddress })
+        .onConflictDoNothing().returning({ key: proposalMails.dedupeKey });
+      return rows.length > 0;
+    },
+    async releaseMail(dedupeKey: string) {
+      await db.delete(proposalMails).where(eq(proposalMails.dedupeKey, dedupeKey));
+    },
+
+    /** Sent or viewed revisions whose link is past its expiry, across companies (the sweep). */
+    dueToExpire: (now: Date) =>
+      db.select({ id: proposals.id, companyId: proposals.companyId, tokenId: proposals.tokenId })
+        .from(proposals)
+        .where(and(inArray(proposals.status, ["sent", "viewed"]), isNull(proposals.supersededBy), lte(proposals.tokenExpiresAt, now))),
+
+    async setProjectStatus(tenant: Tenant, projectId: string, status: "proposed" | "sold", onlyFrom?: string[]) {
+      await db.update(projects).set({ status, version: sql`${projects.version} + 1`, updatedAt: new Date() })
+        .where(scoped(projects, tenant, eq(projects.id, projectId), onlyFrom ? sql`${projects.status}::text in (${sql.join(onlyFrom.map((s) => sql`${s}`), sql`, `)})` : undefined));
+    },
+  };
+}
+export type ProposalsRepository = ReturnType<typeof createProposalsRepository>;

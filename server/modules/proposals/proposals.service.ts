@@ -1,0 +1,381 @@
+import { randomUUID } from "node:crypto";
+import { AppError, conflict, notFound } from "../../lib/errors.ts";
+import type { Actor, RequestMeta } from "../../lib/request-context.ts";
+import type { Storage } from "../../lib/storage/index.ts";
+import { hashToken, newToken } from "../../lib/tokens.ts";
+import { linkExpiresAt, linkState } from "../../../shared/proposals/lifecycle.ts";
+import { scopeOfWork } from "../../../shared/proposals/scope-of-work.ts";
+import type { AcceptInput, ProposalPatch } from "../../../shared/proposals/schemas.ts";
+import type { ProposalSnapshot, ScopeText, SignatureImage } from "../../../shared/proposals/types.ts";
+import type { CatalogItem } from "../../../shared/schemas/catalog.ts";
+import type { ProjectsRepository } from "../projects/projects.repository.ts";
+import type { SpacesRepository } from "../spaces/spaces.repository.ts";
+import type { OptionRow, OptionsRepository } from "../options/options.repository.ts";
+import { pricingSettings } from "../options/options.service.ts";
+import type { CatalogRepository } from "../catalog/catalog.repository.ts";
+import { buildSnapshot, sha256Hex, snapshotSha256 } from "./proposal-snapshot.ts";
+import type { ProposalJobs } from "./proposal-jobs.ts";
+import type { CompanySettings, ProposalRow, ProposalsRepository, Tenant } from "./proposals.repository.ts";
+import { checkedSignaturePng } from "./signature-image.ts";
+
+const DEFAULT_VALID_DAYS = 30;
+const EDITABLE = ["draft"] as const;
+
+const invalid = (field: string, message: string) => new AppError("invalid-input", `Please check ${field}: ${message}`, 400, { [field]: message });
+
+/** What staff see of a proposal: never the token hash or storage keys. */
+export function presentProposal(p: ProposalRow) {
+  return {
+    id: p.id, projectId: p.projectId, seriesId: p.seriesId, revision: p.revision, status: p.status,
+    coverNote: p.coverNote, terms: p.terms, validUntil: p.validUntil, depositRule: p.depositRule,
+    optionIds: p.optionIds, photoIds: p.photoIds, findingCodes: p.findingCodes, scopes: p.scopes,
+    version: p.version, createdBy: p.createdBy, sellerUserId: p.sellerUserId,
+    render: { status: p.renderStatus, attempts: p.renderAttempts, error: p.renderError, pdfSha256: p.pdfSha256, isCurrent: Boolean(p.pdfKey) && p.pdfSnapshotSha256 === p.snapshotSha256, updatedAt: p.renderUpdatedAt },
+    signedRender: { status: p.signedRenderStatus, error: p.signedRenderError, pdfSha256: p.signedPdfSha256 },
+    snapshotSha256: p.status === "draft" ? null : p.snapshotSha256,
+    link: { isActive: Boolean(p.tokenHash) && !p.tokenRevokedAt && !p.supersededBy, expiresAt: p.tokenExpiresAt, revokedAt: p.tokenRevokedAt, tokenId: p.tokenId },
+    supersededBy: p.supersededBy,
+    acceptance: p.acceptance ? { ...p.acceptance, signature: { typed: p.acceptance.signature.typed, isDrawn: Boolean(p.acceptance.signature.pngStorageKey), pngSha256: p.acceptance.signature.pngSha256 } } : null,
+    declineReason: p.declineReason,
+    sentAt: p.sentAt, viewedAt: p.viewedAt, decidedAt: p.decidedAt, reminderSentAt: p.reminderSentAt,
+    createdAt: p.createdAt, updatedAt: p.updatedAt,
+  };
+}
+export type PresentedProposal = ReturnType<typeof presentProposal>;
+
+/** The homeowner's view of the frozen snapshot: no storage keys, no seller signature image, the customer's first name. */
+export function publicView(p: ProposalRow, snapshot: ProposalSnapshot) {
+  return {
+    proposal: {
+      revision: p.revision, status: p.status, validUntil: p.validUntil, sentAt: p.sentAt,
+      acceptedOptionId: p.acceptance?.optionId ?? null, decidedAt: p.decidedAt,
+      isPdfReady: Boolean(p.pdfKey) && p.pdfSnapshotSha256 === p.snapshotSha256,
+      isSignedPdfReady: Boolean(p.signedPdfKey),
+      snapshotSha256: p.snapshotSha256,
+    },
+    company: { name: snapshot.company.name, licenseNumber: snapshot.company.licenseNumber, addressLine: snapshot.company.addressLine, phone: snapshot.company.phone, email: snapshot.company.email, hasLogo: Boolean(snapshot.company.logo) },
+    customer: { firstName: snapshot.customer.firstName },
+    site: { address: snapshot.site.address },
+    seller: { name: snapshot.seller.name, email: snapshot.seller.email },
+    coverNote: snapshot.coverNote,
+    explanation: snapshot.explanation,
+    before: snapshot.before,
+    photos: snapshot.photos.map(({ id, caption, findingCode }) => ({ id, caption, findingCode })),
+    options: snapshot.options,
+    terms: snapshot.terms,
+    cautions: snapshot.cautions,
+    coolingOff: snapshot.coolingOff,
+    esign: snapshot.esign,
+  };
+}
+
+export function createProposalsService(deps: {
+  repo: ProposalsRepository; projects: ProjectsRepository; spaces: SpacesRepository; options: OptionsRepository; catalog: CatalogRepository;
+  storage: Storage; jobs: ProposalJobs; now: () => Date; appOrigin: () => string;
+}) {
+  const { repo } = deps;
+  const today = () => deps.now().toISOString().slice(0, 10);
+
+  async function requireProposal(tenant: Tenant, id: string): Promise<ProposalRow> {
+    const p = await repo.find(tenant, id);
+    if (!p) throw notFound("That proposal");
+    return p;
+  }
+  async function requireProject(actor: Actor, id: string) {
+    const project = await deps.projects.find(actor, id);
+    if (!project) throw notFound("That project");
+    return project;
+  }
+
+  async function optionsOf(actor: Actor, projectId: string, ids: string[], field = "optionIds"): Promise<OptionRow[]> {
+    const all = await deps.options.listForProject(actor, projectId);
+    const byId = new Map(all.map((o) => [o.id, o]));
+    const chosen: OptionRow[] = [];
+    ids.forEach((id, i) => {
+      const o = byId.get(id);
+      if (!o) throw invalid(`${field}.${i}`, "That design option is not part of this project.");
+      if (!chosen.includes(o)) chosen.push(o);
+    });
+    return chosen;
+  }
+
+  async function generatedScopes(actor: Actor, projectId: string, options: OptionRow[], catalog?: CatalogItem[]): Promise<Record<string, ScopeText>> {
+    const [spaces, items] = await Promise.all([deps.spaces.listForProject(actor, projectId), catalog ? Promise.resolve(catalog) : deps.catalog.all(actor)]);
+    return Object.fromEntries(options.map((o) => [o.id, { lines: scopeOfWork(spaces, o.spaces, items, o.laborLines), isEdited: false }]));
+  }
+
+  /** The snapshot of what the proposal shows now, from the live project, options, catalog and profile. */
+  async function snapshotNow(actor: Actor, p: ProposalRow, seller: { userId: string | null; name: string; email: string | null; signature: SignatureImage | null }): Promise<ProposalSnapshot> {
+    const project = await requireProject(actor, p.projectId);
+    const [company, customer, spaces, options, catalog, photos] = await Promise.all([
+      repo.company(actor), repo.customer(actor, project.customerId), deps.spaces.listForProject(actor, p.projectId),
+      deps.options.listForProject(actor, p.projectId), deps.catalog.all(actor), repo.photosFor(actor, p.projectId, p.photoIds),
+    ]);
+    if (!company || !customer) throw notFound("That project");
+    const chosen = p.optionIds.map((id) => options.find((o) => o.id === id)).filter((o): o is OptionRow => Boolean(o));
+    if (chosen.length === 0) throw new AppError("no-options", "None of this proposal's design options exist any more; choose at least one.", 400, { optionIds: "Choose at least one design option." });
+    const settings = company.settings as CompanySettings;
+    return buildSnapshot({
+      proposal: { id: p.id, seriesId: p.seriesId, revision: p.revision, validUntil: p.validUntil, coverNote: p.coverNote, terms: p.terms, findingCodes: p.findingCodes, scopes: p.scopes },
+      company: {
+        name: company.name, licenseNumber: company.licenseNumber, addressLine: company.addressLine, phone: company.phone, email: company.email,
+        logo: settings.logoStorageKey && settings.logoContentType && settings.logoSha256 ? { storageKey: settings.logoStorageKey, contentType: settings.logoContentType, sha256: settings.logoSha256 } : null,
+        isCoolingOffNoticeEnabled: settings.isCoolingOffNoticeEnabled ?? false,
+      },
+      customer, project, spaces, options: chosen, catalog,
+      pricing: pricingSettings({ taxRateBasisPoints: company.taxRateBasisPoints, depositRule: p.depositRule ?? company.depositRule ?? null }),
+      photos: p.photoIds.map((id) => photos.find((ph) => ph.id === id)).filter((x): x is NonNullable<typeof x> => Boolean(x)),
+      seller, now: deps.now(),
+    });
+  }
+
+  async function checkPhotos(actor: Actor, projectId: string, ids: string[]) {
+    const found = await repo.photosFor(actor, projectId, ids);
+    ids.forEach((id, i) => {
+      if (!found.some((f) => f.id === id)) throw invalid(`photoIds.${i}`, "That photo is not part of this project.");
+    });
+  }
+
+  return {
+    requireProposal,
+
+    async listForProject(actor: Actor, projectId: string) {
+      await requireProject(actor, projectId);
+      return (await repo.listForProject(actor, projectId)).map(presentProposal);
+    },
+
+    async create(actor: Actor, projectId: string, input: { optionIds: string[]; validUntil?: string }, meta: RequestMeta) {
+      const project = await requireProject(actor, projectId);
+      const options = await optionsOf(actor, project.id, input.optionIds);
+      const company = await repo.company(actor);
+      const validUntil = input.validUntil ?? new Date(deps.now().getTime() + DEFAULT_VALID_DAYS * 86_400_000).toISOString().slice(0, 10);
+      if (validUntil < today()) throw invalid("validUntil", "The validity date can't be in the past.");
+      const id = randomUUID();
+      const row = await repo.insert(actor, {
+        id, projectId, seriesId: id, revision: 1, validUntil, optionIds: options.map((o) => o.id),
+        terms: company?.defaultTerms ?? null, scopes: await generatedScopes(actor, projectId, options), createdBy: actor.userId,
+      } as never);
+      await repo.addEvent(actor, row.id, { event: "created", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent });
+      return presentProposal(row);
+    },
+
+    async detail(actor: Actor, id: string) {
+      const p = await requireProposal(actor, id);
+      const events = await repo.events(actor, id);
+      return {
+        proposal: presentProposal(p),
+        snapshot: p.status === "draft" ? null : p.snapshot,
+        events: events.map((e) => ({ id: e.id, event: e.event, at: e.at, userId: e.userId, ip: e.ip, userAgent: e.userAgent, tokenId: e.tokenId, snapshotSha256: e.snapshotSha256, pdfSha256: e.pdfSha256, consentTextVersion: e.consentTextVersion, detail: e.detail })),
+      };
+    },
+
+    /** A draft changes in place; a sent one makes a new draft revision and is marked superseded. */
+    async update(actor: Actor, id: string, input: ProposalPatch, meta: RequestMeta) {
+      const p = await requireProposal(actor, id);
+      if (p.status === "accepted") throw conflict("This proposal was accepted and can no longer be changed.", "accepted-locked");
+      if (p.supersededBy) throw new AppError("superseded", "A newer revision of this proposal exists; edit that one.", 409, {}, { supersededBy: p.supersededBy });
+      const { version, ...patch } = input;
+      if (patch.validUntil !== undefined && patch.validUntil < today()) throw invalid("validUntil", "The validity date can't be in the past.");
+      const values: Record<string, unknown> = { ...patch };
+      if (patch.optionIds) {
+        const options = await optionsOf(actor, p.projectId, patch.optionIds);
+        values.optionIds = options.map((o) => o.id);
+        const fresh = await generatedScopes(actor, p.projectId, options.filter((o) => !p.scopes[o.id]));
+        values.scopes = { ...Object.fromEntries(Object.entries(p.scopes).filter(([k]) => values.optionIds && (values.optionIds as string[]).includes(k))), ...fresh };
+      }
+      if (patch.scopes) {
+        const optionIds = (values.optionIds as string[] | undefined) ?? p.optionIds;
+        for (const key of Object.keys(patch.scopes)) if (!optionIds.includes(key)) throw invalid(`scopes.${key}`, "That option is not in this proposal.");
+        values.scopes = { ...((values.scopes as Record<string, ScopeText> | undefined) ?? p.scopes), ...Object.fromEntries(Object.entries(patch.scopes).map(([k, lines]) => [k, { lines, isEdited: true }])) };
+      }
+      if (patch.photoIds) await checkPhotos(actor, p.projectId, patch.photoIds);
+
+      if (p.status === "draft") {
+        const updated = await repo.updateIfVersion(actor, id, version, { ...values, renderStatus: p.renderStatus === "ready" ? "none" : p.renderStatus } as never, [...EDITABLE]);
+        if (updated) return { proposal: presentProposal(updated), revisedFrom: null };
+        const current = await requireProposal(actor, id);
+        throw new AppError("stale-version", "Someone else saved this proposal since you opened it.", 409, {}, { current: presentProposal(current) });
+      }
+      if (p.version !== version) throw new AppError("stale-version", "Someone else saved this proposal since you opened it.", 409, {}, { current: presentProposal(p) });
+      const next = await repo.reviseFrom(actor, p, values as never).catch((err: unknown) => {
+        if ((err as { name?: string }).name === "TransactionRollbackError") throw conflict("This proposal changed meanwhile (accepted, or revised by someone else). Reload it.", "stale-version");
+        throw err;
+      });
+      await repo.addEvent(actor, p.id, { event: "superseded", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId, detail: { supersededBy: next.id, revision: next.revision } });
+      await repo.addEvent(actor, next.id, { event: "created", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, detail: { revisionOf: p.id } });
+      return { proposal: presentProposal(next), revisedFrom: p.id };
+    },
+
+    /** Queues a PDF of the draft as it stands now (or of the frozen snapshot of a sent one). */
+    async render(actor: Actor, id: string) {
+      const p = await requireProposal(actor, id);
+      if (p.status !== "draft") {
+        if (p.renderStatus !== "failed") throw conflict("A sent proposal's PDF is made once, when it is sent.", "already-rendered");
+        const updated = await repo.update(actor, id, { renderStatus: "queued", renderError: null, renderUpdatedAt: deps.now() });
+        await deps.jobs.enqueueRender(actor, id, p.snapshotSha256!);
+        return presentProposal(updated!);
+      }
+      const creator = p.createdBy ? await repo.user(actor, p.createdBy) : null;
+      const snapshot = await snapshotNow(actor, p, { userId: creator?.id ?? null, name: creator?.name ?? actor.name, email: creator?.email ?? null, signature: null });
+      const sha = snapshotSha256(snapshot);
+      const updated = await repo.update(actor, id, { snapshot, snapshotSha256: sha, renderStatus: "queued", renderError: null, renderAttempts: 0, renderUpdatedAt: deps.now() }, undefined);
+      await deps.jobs.enqueueRender(actor, id, sha);
+      return presentProposal(updated!);
+    },
+
+    async renderStatus(actor: Actor, id: string) {
+      return presentProposal(await requireProposal(actor, id)).render;
+    },
+
+    async pdf(tenant: Tenant, p: ProposalRow, kind: "original" | "signed" | "latest") {
+      const useSigned = kind === "signed" || (kind === "latest" && Boolean(p.signedPdfKey));
+      const key = useSigned ? p.signedPdfKey : p.pdfKey;
+      const sha = useSigned ? p.signedPdfSha256 : p.pdfSha256;
+      if (!key || !sha || (!useSigned && p.pdfSnapshotSha256 !== p.snapshotSha256)) {
+        throw new AppError("pdf-not-ready", useSigned ? "The signed PDF is still being prepared; try again in a moment." : "The PDF is not ready yet; render it first or try again in a moment.", 409);
+      }
+      const object = await deps.storage.get(key);
+      if (!object) throw new AppError("pdf-not-ready", "The PDF is not available; render it again.", 409);
+      return { object, sha256: sha, filename: `proposal-rev-${p.revision}${useSigned ? "-signed" : ""}.pdf` };
+    },
+
+    /** Signs with the seller's saved signature, freezes the snapshot, makes the link and mails it once. */
+    async send(actor: Actor, id: string, meta: RequestMeta) {
+      const p = await requireProposal(actor, id);
+      if (p.supersededBy) throw new AppError("superseded", "A newer revision of this proposal exists; send that one.", 409, {}, { supersededBy: p.supersededBy });
+      if (p.status !== "draft") throw conflict("This proposal was already sent. Change it to make a new revision, then send that.", "already-sent");
+      if (p.validUntil < today()) throw invalid("validUntil", "The validity date has passed; choose a later one before sending.");
+      const seller = await repo.user(actor, actor.userId);
+      if (!seller || (!seller.signatureTyped && !seller.signatureDataUrl)) {
+        throw new AppError("signature-required", "Add your signature to your profile before sending (typed or drawn).", 409);
+      }
+      const project = await requireProject(actor, p.projectId);
+      const customer = await repo.customer(actor, project.customerId);
+      if (!customer?.email) throw new AppError("customer-email-missing", "The customer has no e-mail address; add one to the customer first.", 400, { customerEmail: "Add the customer's e-mail address." });
+
+      const snapshot = await snapshotNow(actor, p, { userId: seller.id, name: seller.name, email: seller.email, signature: { typed: seller.signatureTyped, pngDataUrl: seller.signatureDataUrl } });
+      const sha = snapshotSha256(snapshot);
+      const { token, tokenHash } = newToken();
+      const tokenId = randomUUID();
+      const now = deps.now();
+      const sent = await repo.updateIfVersion(actor, id, p.version, {
+        status: "sent", snapshot, snapshotSha256: sha, sellerUserId: seller.id, sentAt: now,
+        tokenHash, tokenId, tokenExpiresAt: linkExpiresAt(p.validUntil), tokenRevokedAt: null,
+        renderStatus: "queued", renderError: null, renderAttempts: 0, renderUpdatedAt: now,
+      }, ["draft"]);
+      if (!sent) throw conflict("This proposal changed or was sent meanwhile. Reload it.", "already-sent");
+      await repo.addEvent(actor, id, { event: "sent", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, tokenId, snapshotSha256: sha, detail: { to: customer.email, revision: p.revision } });
+      await deps.jobs.enqueueRender(actor, id, sha);
+      const link = `${deps.appOrigin()}/p/${token}`;
+      const company = await repo.company(actor);
+      await deps.jobs.deliverOnce(actor, id, `send:${id}`, "proposal", {
+        companyId: actor.companyId, to: customer.email,
+        subject: `Your attic ventilation proposal from ${snapshot.company.name}`,
+        text: `Hello ${snapshot.customer.firstName},\n\n${seller.name} of ${snapshot.company.name} has sent you a proposal for the attic at ${snapshot.site.address}. It explains what we found, shows how air moves through the attic, and offers ${snapshot.options.length === 1 ? "one option" : `${snapshot.options.length} options`} with prices.\n\nOpen it here (valid until ${p.validUntil}): ${link}\n\nYou can download the PDF and accept or decline on that page.\n\n${snapshot.company.name}${snapshot.company.phone ? `\n${snapshot.company.phone}` : ""}`,
+      });
+      const reminderDays = (company?.settings as CompanySettings | undefined)?.reminderDays ?? null;
+      if (reminderDays) await deps.jobs.scheduleReminder(actor, id, customer.email, link, reminderDays);
+      await repo.setProjectStatus(actor, p.projectId, "proposed", ["lead", "surveyed"]);
+      return { proposal: presentProposal(sent), link };
+    },
+
+    async revokeLink(actor: Actor, id: string, meta: RequestMeta) {
+      const p = await requireProposal(actor, id);
+      if (!p.tokenHash) throw conflict("This proposal has no link yet.", "no-link");
+      if (p.tokenRevokedAt) return presentProposal(p);
+      const updated = await repo.update(actor, id, { tokenRevokedAt: deps.now() });
+      await repo.addEvent(actor, id, { event: "link-revoked", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId });
+      return presentProposal(updated!);
+    },
+
+    // ——— the homeowner's link ———
+
+    /** The proposal behind a token, or the right refusal: 404 unknown or revoked, 410 superseded or expired. */
+    async byToken(token: string): Promise<ProposalRow> {
+      const p = token.length >= 20 && token.length <= 100 ? await repo.findByTokenHash(hashToken(token)) : null;
+      if (!p || !p.snapshot) throw new AppError("not-found", "This proposal link is not valid. Please check the link or contact the company that sent it.", 404);
+      const state = linkState(p, deps.now());
+      if (state === "revoked") throw new AppError("not-found", "This proposal link is not valid. Please check the link or contact the company that sent it.", 404);
+      if (state === "superseded") throw new AppError("superseded", "This proposal has been replaced by a newer revision. Look for the newer e-mail, or contact the company that sent it.", 410, {}, { supersededByRevision: true });
+      if (state === "expired") throw new AppError("expired", "This proposal has expired. Contact the company that sent it for a new one.", 410);
+      return p;
+    },
+
+    async view(token: string, meta: RequestMeta) {
+      let p = await this.byToken(token);
+      if (p.status === "sent") {
+        const viewed = await repo.markViewed(p, p.id, deps.now());
+        if (viewed) {
+          await repo.addEvent(p, p.id, { event: "viewed", ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId, snapshotSha256: p.snapshotSha256, pdfSha256: p.pdfSha256 });
+          p = viewed;
+        }
+      }
+      return publicView(p, p.snapshot!);
+    },
+
+    async accept(token: string, input: AcceptInput, meta: RequestMeta) {
+      const p = await this.byToken(token);
+      if (p.status === "accepted") throw conflict("This proposal was already accepted.", "already-accepted");
+      if (p.status === "declined") throw conflict("This proposal was declined. Contact the company for a new one.", "already-declined");
+      const snapshot = p.snapshot!;
+      if (!snapshot.options.some((o) => o.id === input.optionId)) throw invalid("optionId", "Choose one of the options in this proposal.");
+      if (input.consent.consentTextVersion !== snapshot.esign.version) {
+        throw invalid("consent.consentTextVersion", "The consent text has changed; please reload the page and read it again.");
+      }
+      let png: Buffer | null = null;
+      if (input.signature.drawnPngDataUrl) png = await checkedSignaturePng(input.signature.drawnPngDataUrl, "signature.drawnPngDataUrl");
+      const now = deps.now();
+      const pngSha256 = png ? sha256Hex(png) : null;
+      const pngKey = png ? `proposals/${p.companyId}/${p.id}/signature-${pngSha256}.png` : null;
+      if (png && pngKey) await deps.storage.put(pngKey, png, "image/png");
+      const acceptance = {
+        optionId: input.optionId, signerName: input.signerName,
+        signature: { typed: input.signature.typed ?? null, pngStorageKey: pngKey, pngSha256 },
+        consentTextVersion: input.consent.consentTextVersion, acceptedAt: now.toISOString(), ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId,
+      };
+      const updated = await repo.updateIfVersion(p, p.id, p.version, { status: "accepted", acceptance, decidedAt: now, signedRenderStatus: "queued" }, ["sent", "viewed"]);
+      if (!updated) throw conflict("This proposal changed meanwhile; please reload the page.", "stale-version");
+      await repo.addEvent(p, p.id, {
+        event: "accepted", at: now, ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId,
+        snapshotSha256: p.snapshotSha256, pdfSha256: p.pdfSha256, consentTextVersion: input.consent.consentTextVersion,
+        detail: { optionId: input.optionId, signerName: input.signerName, signature: png ? "drawn" : "typed", signaturePngSha256: pngSha256, esignConsent: true },
+      });
+      await repo.setProjectStatus(p, p.projectId, "sold");
+      await deps.jobs.enqueueSignedRender(p, p.id);
+      return publicView(updated, snapshot);
+    },
+
+    async decline(token: string, reason: string | null | undefined, meta: RequestMeta) {
+      const p = await this.byToken(token);
+      if (p.status === "accepted") throw conflict("This proposal was already accepted.", "already-accepted");
+      if (p.status === "declined") throw conflict("This proposal was already declined.", "already-declined");
+      const now = deps.now();
+      const updated = await repo.updateIfVersion(p, p.id, p.version, { status: "declined", declineReason: reason ?? null, decidedAt: now }, ["sent", "viewed"]);
+      if (!updated) throw conflict("This proposal changed meanwhile; please reload the page.", "stale-version");
+      await repo.addEvent(p, p.id, { event: "declined", at: now, ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId, snapshotSha256: p.snapshotSha256, pdfSha256: p.pdfSha256, detail: { reason: reason ?? null } });
+      return publicView(updated, p.snapshot!);
+    },
+
+    /** Does this SHA-256 belong to a PDF we recorded (as sent, or signed)? Says nothing else about it. */
+    async verify(sha256: string) {
+      const hit = await repo.findByPdfHash(sha256);
+      if (!hit) return { sha256, matches: false as const };
+      return {
+        sha256, matches: true as const,
+        document: { kind: hit.signedPdfSha256 === sha256 ? "signed" : "sent", revision: hit.revision, status: hit.status, sentAt: hit.sentAt, decidedAt: hit.decidedAt },
+      };
+    },
+
+    async setSellerSignature(actor: Actor, input: { typed?: string; drawnPngDataUrl?: string }) {
+      if (input.drawnPngDataUrl) await checkedSignaturePng(input.drawnPngDataUrl, "drawnPngDataUrl");
+      await repo.setSignature(actor, actor.userId, { signatureTyped: input.typed ?? null, signatureDataUrl: input.drawnPngDataUrl ?? null });
+      return { signature: { typed: input.typed ?? null, drawnPngDataUrl: input.drawnPngDataUrl ?? null } };
+    },
+
+    async sellerSignature(actor: Actor) {
+      const u = await repo.user(actor, actor.userId);
+      return { signature: u && (u.signatureTyped || u.signatureDataUrl) ? { typed: u.signatureTyped, drawnPngDataUrl: u.signatureDataUrl } : null };
+    },
+  };
+}
+export type ProposalsService = ReturnType<typeof createProposalsService>;

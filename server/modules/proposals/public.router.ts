@@ -1,0 +1,80 @@
+import type { Request } from "express";
+import { pipeline } from "node:stream/promises";
+import { createHash } from "node:crypto";
+import rateLimit from "express-rate-limit";
+import { z } from "zod";
+import { parse } from "../../lib/validate.ts";
+import { AppError } from "../../lib/errors.ts";
+import { metaOf } from "../../lib/request-context.ts";
+import { routesRouter } from "../../lib/routes.ts";
+import { AcceptSchema, DeclineSchema, VerifyQuerySchema } from "../../../shared/proposals/schemas.ts";
+import type { ProposalsService } from "./proposals.service.ts";
+import { sendPdf } from "./proposals.router.ts";
+import { receiveFile } from "./uploads.ts";
+
+const TokenSchema = z.string().regex(/^[A-Za-z0-9_-]{20,100}$/);
+/** A malformed token can match nothing, so it answers exactly as an unknown one. */
+const tokenOf = (req: Request) => {
+  const parsed = TokenSchema.safeParse(req.params.token);
+  return parsed.success ? parsed.data : "";
+};
+
+/**
+ * The homeowner's side, no account: limited per address so a link cannot be guessed by
+ * trying (each process counts on its own; 256-bit tokens make guessing hopeless anyway).
+ * Failed look-ups count far more strictly than normal use.
+ */
+export function publicRateLimits() {
+  const body = (message: string) => ({ error: { code: "rate-limited", message, fields: {} } });
+  return [
+    rateLimit({ windowMs: 60_000, limit: 120, standardHeaders: "draft-8", legacyHeaders: false, message: body("Too many requests. Please wait a minute and try again.") }),
+    rateLimit({
+      windowMs: 15 * 60_000, limit: 20, standardHeaders: "draft-8", legacyHeaders: false,
+      // Only answers that say "no such link" count toward this one.
+      requestWasSuccessful: (_req, res) => res.statusCode !== 404 && res.statusCode !== 410,
+      skipSuccessfulRequests: true,
+      message: body("Too many attempts with links that do not work. Please wait 15 minutes, or contact the company that sent you the proposal."),
+    }),
+  ];
+}
+
+export function publicProposalsRouter(service: ProposalsService) {
+  return routesRouter([
+    {
+      method: "get", path: "/public/proposals/:token", access: "public",
+      handler: async (req, res) => {
+        res.set("Cache-Control", "no-store");
+        res.json(await service.view(tokenOf(req), metaOf(req)));
+      },
+    },
+    {
+      method: "get", path: "/public/proposals/:token/pdf", access: "public",
+      handler: async (req, res) => {
+        const p = await service.byToken(tokenOf(req));
+        const file = await service.pdf(p, p, "latest");
+        sendPdf(req, res, file);
+        await pipeline(file.object.body, res);
+      },
+    },
+    {
+      method: "post", path: "/public/proposals/:token/accept", access: "public",
+      handler: async (req, res) => { res.json(await service.accept(tokenOf(req), parse(AcceptSchema, req.body), metaOf(req))); },
+    },
+    {
+      method: "post", path: "/public/proposals/:token/decline", access: "public",
+      handler: async (req, res) => { res.json(await service.decline(tokenOf(req), parse(DeclineSchema, req.body ?? {}).reason, metaOf(req))); },
+    },
+    {
+      method: "get", path: "/public/verify", access: "public",
+      handler: async (req, res) => { res.json(await service.verify(parse(VerifyQuerySchema, req.query).sha256)); },
+    },
+    {
+      method: "post", path: "/public/verify", access: "public",
+      handler: async (req, res) => {
+        await receiveFile(req, res, 25 * 1024 * 1024, "PDF");
+        if (!req.file) throw new AppError("invalid-input", "Send the PDF in the form field named file.", 400, { file: "Choose the PDF to check." });
+        res.json(await service.verify(createHash("sha256").update(req.file.buffer).digest("hex")));
+      },
+    },
+  ]);
+}

@@ -1,0 +1,39 @@
+import { describe, expect, it } from "vitest";
+import { isDueToExpire, linkExpiresAt, linkState, reminderDecision, type ReminderFacts } from "./lifecycle";
+import { thirdBusinessDayAfter } from "./disclosures";
+
+const sent: ReminderFacts = {
+  status: "sent", sentAt: new Date("2026-12-01T10:00:00Z"), viewedAt: null, reminderSentAt: null,
+  supersededBy: null, tokenRevokedAt: null, tokenExpiresAt: linkExpiresAt("2026-12-31"),
+};
+
+describe("proposal lifecycle", () => {
+  it("when the validity date is given, then the link lasts through that day in every US time zone", () => {
+    expect(linkExpiresAt("2026-12-31").toISOString()).toBe("2027-01-01T12:00:00.000Z");
+  });
+
+  it("when time passes, then the link goes from open to expired, and a decided proposal stays readable", () => {
+    expect(linkState(sent, new Date("2026-12-31T23:00:00Z"))).toBe("open");
+    expect(linkState(sent, new Date("2027-01-01T12:00:00Z"))).toBe("expired");
+    expect(linkState({ ...sent, status: "accepted" }, new Date("2027-02-01T00:00:00Z"))).toBe("open");
+    expect(linkState({ ...sent, supersededBy: "x" }, new Date("2026-12-02T00:00:00Z"))).toBe("superseded");
+    expect(linkState({ ...sent, tokenRevokedAt: new Date("2026-12-02T00:00:00Z") }, new Date("2026-12-03T00:00:00Z"))).toBe("revoked");
+    expect(isDueToExpire(sent, new Date("2027-01-01T12:00:00Z"))).toBe(true);
+    expect(isDueToExpire({ ...sent, status: "declined" }, new Date("2027-01-02T00:00:00Z"))).toBe(false);
+  });
+
+  it("when the proposal is unopened after N days, then one reminder is due, and any view or decision stops it", () => {
+    expect(reminderDecision(sent, new Date("2026-12-03T10:00:00Z"), 3)).toEqual({ shouldSend: false, reason: "too early" });
+    expect(reminderDecision(sent, new Date("2026-12-04T10:00:00Z"), 3)).toEqual({ shouldSend: true, reason: "unopened after 3 days" });
+    expect(reminderDecision({ ...sent, status: "viewed", viewedAt: new Date("2026-12-02T00:00:00Z") }, new Date("2026-12-05T00:00:00Z"), 3).shouldSend).toBe(false);
+    expect(reminderDecision({ ...sent, status: "declined" }, new Date("2026-12-05T00:00:00Z"), 3).shouldSend).toBe(false);
+    expect(reminderDecision({ ...sent, reminderSentAt: new Date("2026-12-04T11:00:00Z") }, new Date("2026-12-06T00:00:00Z"), 3).shouldSend).toBe(false);
+    expect(reminderDecision(sent, new Date("2027-01-02T00:00:00Z"), 3)).toEqual({ shouldSend: false, reason: "the link is expired" });
+    expect(reminderDecision(sent, new Date("2026-12-20T00:00:00Z"), null).shouldSend).toBe(false);
+  });
+
+  it("when the three business days are counted, then Sundays are skipped and Saturdays count", () => {
+    expect(thirdBusinessDayAfter("2026-12-04")).toBe("2026-12-08");
+    expect(thirdBusinessDayAfter("2026-12-01")).toBe("2026-12-04");
+  });
+});
