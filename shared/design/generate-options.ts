@@ -44,6 +44,8 @@ import {
   sectionRiseFt,
   tryAnalyzeAttic,
   VENT_KIND_LABELS,
+  ventDisplayName,
+  ventListPhrase,
   type AtticAnalysis,
   type Ratio,
   type Vent,
@@ -319,9 +321,9 @@ function removeFanPlans(ctx: Context): PlanResult[] {
   const room = intakeRoom(ctx, intakeItem);
   if ("skip" in room) return [{ skip: room.skip }];
 
-  const fanWords = ctx.fans.map((v) => `${kindLabel(v.kind)} ${v.id}`).join(", ");
+  const fanWords = ventListPhrase(ctx.fans).replace(/^the /, "");
   const intro = [
-    `The ${fanWords} ${ctx.fans.length === 1 ? "is" : "are"} removed: a powered fan can pull conditioned air out of the house and backdraft natural-draft gas appliances, and agencies advise passive ventilation instead (TRADE-REFERENCES §5.1–5.2).`,
+    `The ${fanWords} ${ctx.fans.length === 1 ? "is" : "are"} removed: a powered fan can pull conditioned air out of the house and backdraft natural-draft gas appliances, and the EPA (ENERGY STAR) and the DOE weatherization specification advise passive ventilation instead.`,
     keptKind !== null
       ? `The passive exhaust already there is kept as the one exhaust type: ${kindLabel(exhaustKind)} (${kept.map((v) => v.id).join(", ")}, ${fmt(bestSqIn)} sq in).`
       : reusedFanOpenings.length > 0
@@ -456,7 +458,7 @@ function designAt(ctx: Context, plan: Plan, ratio: Ratio): Design | { failure: s
   // Added vents.
   for (const fan of plan.reusedFanOpenings) {
     const item = plan.exhaustItem!;
-    added.push({ id: ids.next(), catalogItemId: item.id, quantity: unitsOf(fan), location: "upper", replacesVentId: fan.id, note: `In the opening of ${kindLabel(fan.kind)} ${fan.id}.` });
+    added.push({ id: ids.next(), catalogItemId: item.id, quantity: unitsOf(fan), location: "upper", replacesVentId: fan.id, note: `In the opening of ${ventDisplayName(fan)}.` });
   }
   if (newExhaustQty > 0 && plan.exhaustItem) {
     const isStatic = plan.exhaustItem.unit === "each" && plan.exhaustKind !== "ridge";
@@ -488,10 +490,10 @@ function designAt(ctx: Context, plan: Plan, ratio: Ratio): Design | { failure: s
     rationale.push(`${what}: ${fmt(quantity)} × ${item.name}.`);
   };
   if (removed.length > 0) {
-    const words = removed.map((v) => `${kindLabel(v.kind)} ${v.id}${unitsOf(v) > 1 ? ` (${fmt(unitsOf(v))})` : ""}`).join(", ");
+    const words = removed.map((v) => `${ventDisplayName(v).replace(/^the /, "")}${unitsOf(v) > 1 ? ` (${fmt(unitsOf(v))})` : ""}`).join(", ");
     rationale.push(
       clip(
-        `Removed so that ${kindLabel(plan.exhaustKind)} is the only exhaust: ${words}. Different exhaust vents feed each other and a fan or gable louver beside other high vents short-circuits them (common practice; TRADE-REFERENCES §5.4).`,
+        `Removed so that ${kindLabel(plan.exhaustKind)} is the only exhaust: ${words}. Different exhaust vents feed each other and a fan or gable louver beside other high vents short-circuits them (common practice among roofers and home inspectors).`,
       ),
     );
   }

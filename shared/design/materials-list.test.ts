@@ -47,9 +47,9 @@ describe("materialsList", () => {
     const option = generateOptions({ project: zone4Project, spaceId: SPACE_ID, space: fanAndRidge(), catalog }).options[0]!.option;
     const list = materialsList(option, catalog, { [SPACE_ID]: fanAndRidge() });
     const work = list.work.map((w) => w.description);
-    expect(work).toContain("Remove powered gable fan (fan1): have a licensed electrician disconnect and make safe the circuit, seal the opening from inside.");
-    expect(work).toContain("Remove gable louver (g1): seal the opening from inside.");
-    expect(list.work.find((w) => w.description.includes("fan1"))?.caution).toContain("confirm it is dead with a voltage tester");
+    expect(work).toContain("Remove powered gable fan: have a licensed electrician disconnect and make safe the circuit, seal the opening from inside.");
+    expect(work).toContain("Remove gable louver: seal the opening from inside.");
+    expect(list.work.find((w) => w.description.includes("powered gable fan"))?.caution).toContain("confirm it is dead with a voltage tester");
     expect(work.at(-1)).toBe("Installation labour (from the catalog's minutes per unit): 1.5 h.");
     expect(list.items.map((i) => [i.sku, i.buyCount])).toEqual([["SEAL-G", 2], ["DISC", 1]]);
   });
@@ -58,7 +58,7 @@ describe("materialsList", () => {
     const option = generateOptions({ project: zone4Project, spaceId: SPACE_ID, space: roofFanOnly(), catalog }).options.find((o) => o.type === "remove-fan-passive")!.option;
     const withLabourItem = { ...option, spaces: [{ ...option.spaces[0]!, added: [...option.spaces[0]!.added, { id: "h", catalogItemId: DEMO_IDS.labor, quantity: 2 }] }] };
     const list = materialsList(withLabourItem, catalog, { [SPACE_ID]: roofFanOnly() });
-    expect(list.work.map((w) => w.description)).toContain("Replace powered roof fan (fan1) with Static roof vent in the same opening (a licensed electrician disconnects the circuit first).");
+    expect(list.work.map((w) => w.description)).toContain("Replace powered roof fan with Static roof vent in the same opening (a licensed electrician disconnects the circuit first).");
     expect(list.work.map((w) => w.description)).toContain("Installation labour: 2 h.");
     expect(list.items.some((i) => i.kind === "labor")).toBe(false);
     // 1 static vent in the fan opening + 6 more = 7 bought

@@ -46,9 +46,10 @@ const isLaborItem = (item: CatalogItem) => item.kind === "labor" || item.unit ==
 const fmt = (n: number) => formatNumber(n, { maxFractionDigits: 3 });
 
 function ventWords(vent: Vent | undefined, ventId: string): string {
+  // Without the survey only the id is known; with it, the crew reads the kind and label, not an id.
   if (!vent) return `vent ${ventId}`;
   const qty = vent.quantity !== undefined && vent.quantity > 1 ? `${vent.quantity} × ` : "";
-  return `${qty}${vent.label ?? VENT_KIND_LABELS[vent.kind]} (${ventId})`;
+  return `${qty}${vent.label ? `${VENT_KIND_LABELS[vent.kind]} "${vent.label}"` : VENT_KIND_LABELS[vent.kind]}`;
 }
 
 function removalCaution(vent: Vent | undefined): string {

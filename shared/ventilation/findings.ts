@@ -8,7 +8,7 @@ import type { ProvidedNfa } from "./balance";
 import { FAN_OVERSIZED_ABOVE, FAN_UNDERSIZED_BELOW } from "./fan-sizing";
 import type { Requirement } from "./requirement";
 import type { Site, Vent } from "./schema";
-import { EAVE_KINDS, VENT_KIND_LABELS, type VentKind } from "./vent-kinds";
+import { EAVE_KINDS, VENT_KIND_LABELS, ventListPhrase, type VentKind } from "./vent-kinds";
 import type { VentNfa } from "./vent-nfa";
 
 export const FINDING_CODES = [
@@ -163,7 +163,7 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
       severity: "critical",
       title: "Powered fan short-circuits through other high vents",
       detail:
-        `A fan pulls air from the nearest, easiest opening. With ${highOpenings.map((v) => `${kindLabel(v.kind)} ${v.ventId}`).join(", ")} in the same attic, ` +
+        `A fan pulls air from the nearest, easiest opening. With ${ventListPhrase(highOpenings)} in the same attic, ` +
         "it draws outside air in through them instead of through the soffits, so the attic floor and roof deck are not swept. " +
         "Either remove the fan and rely on passive vents, or close off the other high vents so the fan draws from the eaves.",
       ventIds: [...ids(powered), ...ids(highOpenings)],

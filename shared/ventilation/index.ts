@@ -20,7 +20,7 @@ export {
   LIMITS,
 } from "./schema";
 export type { AtticInput, CodeBasis, RoofColor, Section, Site, VaporRetarder, Vent, VentLocation } from "./schema";
-export { VENT_KINDS, VENT_KIND_LABELS, POWERED_KINDS, EAVE_KINDS, AT_RIDGE_KINDS, isPoweredKind } from "./vent-kinds";
+export { VENT_KINDS, VENT_KIND_LABELS, POWERED_KINDS, EAVE_KINDS, AT_RIDGE_KINDS, isPoweredKind, ventDisplayName, ventListPhrase } from "./vent-kinds";
 export type { VentKind } from "./vent-kinds";
 export { FINDING_CODES, sortFindings } from "./findings";
 export type { Finding, FindingCode, Severity } from "./findings";

@@ -24,7 +24,7 @@
  */
 import { ceilWhole, floorWhole, formatNumber, formatPercent, SQ_IN_PER_SQ_FT } from "../units/format";
 import type { CodeBasis, VaporRetarder } from "./schema";
-import { VENT_KIND_LABELS } from "./vent-kinds";
+import { ventDisplayName } from "./vent-kinds";
 import type { VentNfa } from "./vent-nfa";
 import type { VentPosition } from "./vent-position";
 
@@ -124,7 +124,7 @@ const PRACTICE_SPLIT_BASIS =
 
 function listVents(items: ReadonlyArray<{ nfa: VentNfa; label?: string | undefined }>): string {
   return items
-    .map((v) => `${v.label ?? VENT_KIND_LABELS[v.nfa.kind]} ${v.nfa.ventId} (${formatNumber(v.nfa.nfaSqIn)} sq in)`)
+    .map((v) => `${ventDisplayName({ kind: v.nfa.kind, label: v.label })} (${formatNumber(v.nfa.nfaSqIn)} sq in)`)
     .join(", ");
 }
 

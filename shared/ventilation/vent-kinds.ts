@@ -54,3 +54,23 @@ export const VENT_KIND_LABELS: Readonly<Record<VentKind, string>> = {
   "powered-gable": "powered gable fan",
   "solar-powered": "solar-powered fan",
 };
+
+/**
+ * How a sentence names a vent: its kind, with the estimator's label when there is one. Ids are
+ * never shown (they are often generated), so a homeowner reads "the ridge vent", not a code.
+ *
+ * @example
+ * ventDisplayName({ kind: "gable-louver", label: "north gable" }) // 'the gable louver "north gable"'
+ * ventDisplayName({ kind: "ridge" })                              // "the ridge vent"
+ */
+export function ventDisplayName(vent: { kind: VentKind; label?: string | undefined }): string {
+  const label = vent.label?.trim();
+  return label ? `the ${VENT_KIND_LABELS[vent.kind]} "${label}"` : `the ${VENT_KIND_LABELS[vent.kind]}`;
+}
+
+/** Several vents in one phrase, each name once: "the ridge vent and the box (static) vent". */
+export function ventListPhrase(vents: ReadonlyArray<{ kind: VentKind; label?: string | undefined }>): string {
+  const names = [...new Set(vents.map(ventDisplayName))];
+  if (names.length <= 1) return names[0] ?? "";
+  return `${names.slice(0, -1).join(", ")} and ${names[names.length - 1]}`;
+}

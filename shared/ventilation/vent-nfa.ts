@@ -10,6 +10,8 @@ import { isPoweredKind, type VentKind } from "./vent-kinds";
 
 export interface VentNfa {
   ventId: string;
+  /** The estimator's name for the vent, if any ("north gable"); used in sentences instead of the id. */
+  label?: string;
   kind: VentKind;
   location: VentLocation;
   isPowered: boolean;
@@ -28,7 +30,7 @@ export interface VentNfa {
  */
 export function ventNfa(vent: Vent): VentNfa {
   const quantity = vent.quantity ?? 1;
-  const base = { ventId: vent.id, kind: vent.kind, location: vent.location };
+  const base = { ventId: vent.id, kind: vent.kind, location: vent.location, ...(vent.label ? { label: vent.label } : {}) };
   const qtyText = (each: string) => (quantity > 1 ? `${formatNumber(quantity)} × ${each}` : each);
 
   if (isPoweredKind(vent.kind)) {
