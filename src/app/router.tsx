@@ -31,6 +31,26 @@ const appRoutes: RouteObject[] = [
     lazy: () => import("./routes/projects-detail"),
   },
   {
+    path: paths.app.projectOptions.path,
+    loader: requireArea("projects"),
+    lazy: () => import("./routes/project-options"),
+  },
+  {
+    path: paths.app.projectOptionsCompare.path,
+    loader: requireArea("projects"),
+    lazy: () => import("./routes/project-options-compare"),
+  },
+  {
+    path: paths.app.projectOption.path,
+    loader: requireArea("projects"),
+    lazy: () => import("./routes/project-options-edit"),
+  },
+  {
+    path: paths.app.projectOptionMaterials.path,
+    loader: requireArea("projects"),
+    lazy: () => import("./routes/project-options-materials"),
+  },
+  {
     path: paths.app.customers.path,
     loader: requireArea("customers"),
     lazy: () => import("./routes/customers"),

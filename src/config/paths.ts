@@ -44,6 +44,24 @@ export const paths = {
       path: "/projects/:projectId",
       getHref: (projectId: string) => `/projects/${encodeURIComponent(projectId)}`,
     },
+    projectOptions: {
+      path: "/projects/:projectId/options",
+      getHref: (projectId: string) => `/projects/${encodeURIComponent(projectId)}/options`,
+    },
+    projectOptionsCompare: {
+      path: "/projects/:projectId/options/compare",
+      getHref: (projectId: string) => `/projects/${encodeURIComponent(projectId)}/options/compare`,
+    },
+    projectOption: {
+      path: "/projects/:projectId/options/:optionId",
+      getHref: (projectId: string, optionId: string) =>
+        `/projects/${encodeURIComponent(projectId)}/options/${encodeURIComponent(optionId)}`,
+    },
+    projectOptionMaterials: {
+      path: "/projects/:projectId/options/:optionId/materials",
+      getHref: (projectId: string, optionId: string) =>
+        `/projects/${encodeURIComponent(projectId)}/options/${encodeURIComponent(optionId)}/materials`,
+    },
     customers: { path: "/customers", getHref: () => "/customers" },
     catalog: { path: "/catalog", getHref: () => "/catalog" },
     pipeline: { path: "/pipeline", getHref: () => "/pipeline" },

@@ -1,0 +1,88 @@
+import type { MaterialsList, OptionType } from "@shared/design/index";
+import type { OptionPrice } from "@shared/pricing/index";
+import type { CatalogItem } from "@shared/schemas/catalog";
+import type { DesignOptionInput } from "@shared/schemas/options";
+import type { SpaceRoof, SiteChecklist } from "@shared/schemas/survey";
+import type { AtticAnalysis, CodeBasis, RoofColor, Section, VaporRetarder, Vent } from "@shared/ventilation/index";
+
+/** One attic space's analysis as the server computes it (GET /projects/:id/analysis shape). */
+export interface SpaceAnalysisRecord {
+  spaceId: string;
+  name: string;
+  analysis: AtticAnalysis | null;
+  issues: { path: string; message: string }[];
+}
+
+/** A saved design option with the server's analysis per space and price (integer cents). */
+export interface OptionRecord extends DesignOptionInput {
+  id: string;
+  projectId: string;
+  position: number;
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+  analysis: { spaces: SpaceAnalysisRecord[] };
+  price: OptionPrice | null;
+  priceIssue: string | null;
+}
+
+/** What the generator proposes (not saved): POST `option` back to keep it. */
+export interface ProposalRecord {
+  spaceId: string;
+  spaceName: string;
+  type: OptionType;
+  option: DesignOptionInput;
+  analysis: { spaces: SpaceAnalysisRecord[] };
+  price: OptionPrice | null;
+  priceIssue: string | null;
+}
+
+export interface SkippedProposal {
+  spaceId: string;
+  spaceName: string;
+  type: OptionType;
+  reason: string;
+}
+
+export interface GenerateResult {
+  proposals: ProposalRecord[];
+  skipped: SkippedProposal[];
+}
+
+export interface OptionMaterials {
+  option: { id: string; name: string; version: number; projectId: string };
+  project: { id: string; title: string; siteAddress: string };
+  spaces: { id: string; name: string }[];
+  materials: MaterialsList;
+}
+
+/** The project fields the options workspace needs, from GET /api/projects/:id. */
+export interface ProjectRecord {
+  id: string;
+  title: string;
+  siteAddress: string;
+  climateZone: number;
+  codeBasis: CodeBasis;
+  ceilingVaporRetarder: VaporRetarder;
+  roofColor: RoofColor;
+}
+
+export interface SpaceRecord {
+  id: string;
+  name: string;
+  position: number;
+  version: number;
+  roof: SpaceRoof;
+  sections: Section[];
+  vents: Vent[];
+  site: SiteChecklist;
+  notes: string | null;
+}
+
+export interface ProjectDetail {
+  project: ProjectRecord;
+  customer: { id: string; name: string } | null;
+  spaces: SpaceRecord[];
+}
+
+export type CatalogRecord = CatalogItem;
