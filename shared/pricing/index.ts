@@ -12,3 +12,5 @@ export type { DepositPolicy, DepositRequest, DepositResult } from "./deposit";
 export { formatCents, formatThousandthCents, formatBasisPoints } from "./format-money";
 export { priceOption, explainLine, DEFAULT_PRICING_SETTINGS, PricingError } from "./price-option";
 export type { OptionPrice, PriceLine, PriceCategory, PricingSettings, PricedOption } from "./price-option";
+export { parseDollarsToCents, centsToDollarsText } from "./parse-dollars";
+export type { ParsedCents } from "./parse-dollars";

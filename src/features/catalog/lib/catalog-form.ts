@@ -2,7 +2,7 @@ import { z } from "zod";
 import { CATALOG_KINDS, CATALOG_UNITS, CatalogItemInputSchema, type CatalogItemInput, type CatalogKind, type CatalogUnit } from "@shared/schemas/catalog";
 import type { CatalogRecord } from "../api/types";
 import { isFanKind, isVentKind } from "./labels";
-import { centsToDollarsText, parseDollarsToCents } from "./money";
+import { centsToDollarsText, parseDollarsToCents } from "@shared/pricing/index";
 
 /**
  * The add/edit form keeps what was typed as text (so a bad entry is shown, not lost) and is

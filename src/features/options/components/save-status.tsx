@@ -2,7 +2,7 @@ import { Button } from "@/components/ui/button";
 import { CriticalIcon, OkIcon, WarningIcon } from "@/components/ui/icons";
 import { Spinner } from "@/components/ui/spinner";
 import { cn } from "@/lib/cn";
-import type { SaveState } from "../hooks/use-autosave";
+import type { SaveState } from "@/lib/use-autosave";
 
 /** "Saved · Saving… · Not saved: <reason>", in words and icon, announced politely. */
 export function SaveStatus({ state, onRetry, onResolve }: { state: SaveState; onRetry: () => void; onResolve: () => void }) {

@@ -25,7 +25,7 @@ import { PriceSummary } from "../components/price-summary";
 import { SaveStatus } from "../components/save-status";
 import { SpacePlanEditor } from "../components/space-plan-editor";
 import { TermsEditor } from "../components/terms-editor";
-import { fingerprint, useAutosave } from "../hooks/use-autosave";
+import { fingerprint, useAutosave } from "@/lib/use-autosave";
 import { buildOption, draftFromOption, type OptionDraft, type OptionPayload } from "../lib/draft";
 import { analyzeOptionLive, priceOptionLive, pricingFrom } from "../lib/live";
 import { centsToText } from "../lib/money";

@@ -3,7 +3,7 @@ import { useEffect, useState } from "react";
 import { surveyQueries } from "../api/queries";
 import { saveProject } from "../api/save-project";
 import type { ProjectRecord } from "../api/types";
-import { useAutosave, type SaveState } from "../hooks/use-autosave";
+import { useAutosave, type SaveState } from "@/lib/use-autosave";
 import { fingerprint } from "../lib/drafts";
 import { clearDraft, projectDraftKey, writeDraft } from "../lib/local-drafts";
 import { checkFields, fieldsFromRecord, type ProjectFields } from "../lib/project-fields";

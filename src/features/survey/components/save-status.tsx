@@ -3,7 +3,7 @@ import { Button } from "@/components/ui/button";
 import { CriticalIcon, OkIcon, WarningIcon } from "@/components/ui/icons";
 import { Spinner } from "@/components/ui/spinner";
 import { cn } from "@/lib/cn";
-import type { SaveState } from "../hooks/use-autosave";
+import type { SaveState } from "@/lib/use-autosave";
 
 const RANK: Record<SaveState["kind"], number> = { conflict: 6, error: 5, blocked: 4, offline: 3, saving: 2, saved: 1 };
 

@@ -6,7 +6,7 @@ import type { Section, Vent } from "@shared/ventilation/index";
 import { surveyQueries } from "../api/queries";
 import { saveSpace } from "../api/save-space";
 import type { SpaceRecord } from "../api/types";
-import { useAutosave, type SaveState } from "../hooks/use-autosave";
+import { useAutosave, type SaveState } from "@/lib/use-autosave";
 import { buildSpace, fingerprint, spaceFromServer, type Problem, type SpaceDraft } from "../lib/drafts";
 import { clearDraft, spaceDraftKey, writeDraft } from "../lib/local-drafts";
 import { ConflictDialog } from "./conflict-dialog";

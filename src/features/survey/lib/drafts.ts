@@ -455,7 +455,4 @@ export function copyVents(vents: VentDraft[]): VentDraft[] {
   return vents.map((v) => ({ ...structuredClone(v), id: newId(), diagnostics: emptyDiagnostics() }));
 }
 
-/** A stable text form for comparing what was sent with what is there now. */
-export function fingerprint(value: unknown): string {
-  return JSON.stringify(value);
-}
+export { fingerprint } from "@/lib/use-autosave";

@@ -11,6 +11,7 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { TextField } from "@/components/ui/field";
 import { ChevronDownIcon, ChevronLeftIcon, ClipboardIcon, HouseIcon, PlusIcon } from "@/components/ui/icons";
 import { PageHeader } from "@/components/ui/page-header";
+import { buttonStyles } from "@/components/ui/button";
 import { LoadingBlock } from "@/components/ui/spinner";
 import { Tabs, tabId, tabPanelId } from "@/components/ui/tabs";
 import { toast } from "@/components/ui/toaster";
@@ -27,7 +28,7 @@ import { ProjectSaver } from "../components/project-saver";
 import { combineStates, SaveStatus } from "../components/save-status";
 import { SpaceEditor } from "../components/space-editor";
 import { SpaceSaver, type SpaceSaverInit } from "../components/space-saver";
-import type { SaveState } from "../hooks/use-autosave";
+import type { SaveState } from "@/lib/use-autosave";
 import { useIsOnline } from "../hooks/use-is-online";
 import {
   buildSpace,
@@ -242,6 +243,11 @@ function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: Pr
         }
         title={fields.title || "Untitled project"}
         description={[detail.customer?.name, fields.siteAddress].filter(Boolean).join(" · ")}
+        actions={
+          <Link to={paths.app.projectOptions.getHref(projectId)} className={buttonStyles({ variant: "secondary" })}>
+            Design options
+          </Link>
+        }
       />
 
       <ProjectSaver

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { centsToDollarsText, parseDollarsToCents } from "./money";
+import { centsToDollarsText, parseDollarsToCents } from "./parse-dollars";
 
 describe("parseDollarsToCents", () => {
   it("when dollars are typed, then cents come out exact", () => {

@@ -1,7 +1,10 @@
+/** Autosave with optimistic versions, shared by every editor (survey, options, proposals). */
 import { onlineManager, useMutation } from "@tanstack/react-query";
 import { useCallback, useEffect, useLayoutEffect, useRef, useState } from "react";
 import { isApiError } from "@/lib/api-client";
-import { fingerprint } from "../lib/drafts";
+
+/** A stable text form for comparing what was sent with what is there now. */
+export const fingerprint = (value: unknown): string => JSON.stringify(value);
 
 export type SaveState =
   | { kind: "saved" }
