@@ -317,7 +317,7 @@ describe("the generator and the materials list", () => {
     expect(res.body.spaces).toEqual([{ id: space.id, name: "Main attic" }]);
     const lines = res.body.materials.items.map((i: { sku: string; quantity: number; buyCount: number; buyUnit: string }) => [i.sku, i.quantity, i.buyCount, i.buyUnit]);
     expect(lines).toEqual([["RV", 38, 10, "pieces of 4 ft"], ["STRIP", 40, 5, "pieces of 8 ft"]]);
-    const removal = res.body.materials.work.find((w: { description: string }) => /fan-1/.test(w.description));
+    const removal = res.body.materials.work.find((w: { description: string }) => /^Remove powered gable fan/.test(w.description));
     expect(removal.caution).toEqual(expect.any(String));
     expect(removal.description).toMatch(/licensed electrician/);
   });

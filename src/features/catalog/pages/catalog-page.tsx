@@ -17,7 +17,7 @@ import { useUpdateCatalogItem } from "../api/update-catalog-item";
 import { CatalogCsvPanel } from "../components/catalog-import";
 import { CatalogItemDialog } from "../components/catalog-item-dialog";
 import { CatalogTable } from "../components/catalog-table";
-import { useDebouncedValue } from "../hooks/use-debounced-value";
+import { useDebouncedValue } from "@/lib/use-debounced-value";
 import { kindLabel } from "../lib/labels";
 
 const KIND_FILTER = [{ value: "", label: "All kinds" }, ...CATALOG_KINDS.map((kind) => ({ value: kind, label: kindLabel(kind) }))];

@@ -6,7 +6,7 @@ import {
   type SortingState,
 } from "@tanstack/react-table";
 import { useEffect, useMemo, useState } from "react";
-import { Link, useSearchParams } from "react-router";
+import { Link, useNavigation, useSearchParams } from "react-router";
 import { Alert } from "@/components/ui/alert";
 import { Button, buttonStyles } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/empty-state";
@@ -20,7 +20,7 @@ import { formatDate } from "@/lib/format-date";
 import { customerQueries } from "../api/queries";
 import type { Customer, CustomerListParams, CustomerSort } from "../api/types";
 import { CustomerFormDialog } from "../components/customer-form-dialog";
-import { useDebouncedValue } from "../hooks/use-debounced-value";
+import { useDebouncedValue } from "@/lib/use-debounced-value";
 
 const PAGE_SIZE = 25;
 const SORTS: readonly CustomerSort[] = ["name", "createdAt", "updatedAt"];
@@ -48,6 +48,7 @@ export function CustomersPage({ canEdit, newProjectHref }: CustomersPageProps) {
   const params = readParams(search);
   const [typed, setTyped] = useState(params.q);
   const debounced = useDebouncedValue(typed, 300);
+  const navigation = useNavigation();
   const [editing, setEditing] = useState<Customer | null>(null);
   const [isAdding, setIsAdding] = useState(false);
 
@@ -65,6 +66,9 @@ export function CustomersPage({ canEdit, newProjectHref }: CustomersPageProps) {
   }
 
   useEffect(() => {
+    // A search that settles while the user is already leaving (a row was tapped and the next page
+    // is loading) must not pull them back to the list.
+    if (navigation.state !== "idle") return;
     if (debounced.trim() !== params.q.trim()) update({ q: debounced.trim(), page: 1 });
     // Only the debounced text drives this; `update` reads the latest params.
     // eslint-disable-next-line react-hooks/exhaustive-deps

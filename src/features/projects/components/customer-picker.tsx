@@ -7,7 +7,7 @@ import { Spinner } from "@/components/ui/spinner";
 import { cn } from "@/lib/cn";
 import { projectQueries } from "../api/queries";
 import type { CustomerSummary } from "../api/types";
-import { useDebouncedValue } from "../hooks/use-debounced-value";
+import { useDebouncedValue } from "@/lib/use-debounced-value";
 
 export interface NewCustomerDraft {
   name: string;

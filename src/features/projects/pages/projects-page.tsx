@@ -1,7 +1,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { getCoreRowModel, useReactTable, type ColumnDef } from "@tanstack/react-table";
 import { useEffect, useMemo, useState } from "react";
-import { Link, useSearchParams } from "react-router";
+import { Link, useNavigation, useSearchParams } from "react-router";
 import { PROJECT_STATUSES, type ProjectStatus } from "@shared/schemas/projects";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
@@ -18,7 +18,7 @@ import { paths } from "@/config/paths";
 import { formatDate } from "@/lib/format-date";
 import { projectQueries } from "../api/queries";
 import type { ProjectListItem, ProjectListParams, ProjectSort } from "../api/types";
-import { useDebouncedValue } from "../hooks/use-debounced-value";
+import { useDebouncedValue } from "@/lib/use-debounced-value";
 import { STATUS_LABELS, STATUS_OPTIONS } from "../lib/project-options";
 
 const PAGE_SIZE = 25;
@@ -67,6 +67,7 @@ export function ProjectsPage({ canCreate, greeting, companyName }: ProjectsPageP
   const params = readParams(search);
   const [typed, setTyped] = useState(params.q);
   const debounced = useDebouncedValue(typed, 300);
+  const navigation = useNavigation();
   const estimators = useQuery(projectQueries.estimators());
   const list = useQuery(projectQueries.list(params));
 
@@ -78,6 +79,9 @@ export function ProjectsPage({ canCreate, greeting, companyName }: ProjectsPageP
 
   useEffect(() => {
     // Typing replaces the history entry, so Back goes to the last finished search, not every keystroke.
+    // A search that settles while the user is already leaving (a row was tapped and the next page
+    // is loading) must not pull them back to the list.
+    if (navigation.state !== "idle") return;
     if (debounced.trim() !== params.q.trim()) update({ q: debounced.trim(), page: 1 }, { replace: params.q !== "" });
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [debounced]);
