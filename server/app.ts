@@ -52,6 +52,13 @@ import { createProposalJobs } from "./modules/proposals/proposal-jobs.ts";
 import { proposalsRouter } from "./modules/proposals/proposals.router.ts";
 import { publicProposalsRouter, publicRateLimits } from "./modules/proposals/public.router.ts";
 import { signatureJson } from "./modules/proposals/uploads.ts";
+import { createPipelineRepository } from "./modules/pipeline/pipeline.repository.ts";
+import { createPipelineService } from "./modules/pipeline/pipeline.service.ts";
+import { pipelineRouter } from "./modules/pipeline/pipeline.router.ts";
+import { createPaymentProvider, type PaymentProvider } from "./modules/payments/payment-provider.ts";
+import { createPaymentsRepository } from "./modules/payments/payments.repository.ts";
+import { createPaymentsService } from "./modules/payments/payments.service.ts";
+import { PAYMENTS_WEBHOOK_PATH, paymentsRouter, paymentsWebhookBody } from "./modules/payments/payments.router.ts";
 
 export interface AppDeps {
   env: Env;
@@ -64,6 +71,8 @@ export interface AppDeps {
   now?: () => Date;
   /** File storage; by default the driver STORAGE_DRIVER names. */
   storage?: Storage;
+  /** The payment provider; by default the `stripe` SDK as PAYMENTS_API_BASE and the keys configure it. */
+  paymentProvider?: PaymentProvider | null;
 }
 
 export function createApp(deps: AppDeps): Express {
@@ -131,11 +140,21 @@ export function createApp(deps: AppDeps): Express {
   });
   const companyService = createCompanyService({ repo: proposalsRepo, storage });
   app.locals.proposalJobs = proposalJobs;
+  const paymentsService = createPaymentsService({
+    repo: createPaymentsRepository(db), proposals: proposalsService, provider: deps.paymentProvider === undefined ? createPaymentProvider(env) : deps.paymentProvider,
+    jobs: deps.jobs, logger, now, appOrigin: () => appOrigin(),
+  });
 
+  const pipelineService = createPipelineService({
+    repo: createPipelineRepository(db), now,
+    liveOptionTotals: async (actor, projectId) => (await optionsService.list(actor, projectId)).map((o) => ({ id: o.id, totalCents: o.price?.totalCents ?? null })),
+  });
   const api = express.Router();
   api.use("/public", ...publicRateLimits());
   // Routes carrying a drawn signature parse their own (larger) JSON first; the parser below then skips them.
   api.use(["/public/proposals/:token/accept", "/auth/me/signature"], signatureJson());
+  // The payment webhook's signature covers the raw bytes: read them before the JSON parser.
+  api.use(PAYMENTS_WEBHOOK_PATH, paymentsWebhookBody());
   api.use(express.json({ limit: "1mb" }));
   api.use(originCheck({ allowedOrigins: env.APP_ORIGIN ? [env.APP_ORIGIN] : [], exemptPaths: [/^\/webhooks\//] }));
 
@@ -156,7 +175,8 @@ export function createApp(deps: AppDeps): Express {
   const declared = [
     authRouter(authService, lucia), teamRouter(teamService), outboxRouter(createOutboxRepository(db)),
     customersRouter(customersService), projectsRouter(projectsService), spacesRouter(spacesService), photosRouter(photosService), usersRouter(usersService),
-    catalogRouter(catalogService), optionsRouter(optionsService), proposalsRouter(proposalsService, companyService), publicProposalsRouter(proposalsService)];
+    catalogRouter(catalogService), optionsRouter(optionsService), proposalsRouter(proposalsService, companyService), publicProposalsRouter(proposalsService),
+    paymentsRouter(paymentsService), pipelineRouter(pipelineService)];
   for (const router of declared) api.use(router);
   app.locals.routes = declared.flatMap((router) => router.routes.map((route): RouteInfo => ({ ...route, path: `/api${route.path}` })));
 

@@ -20,12 +20,40 @@ const EnvSchema = z.object({
   S3_ACCESS_KEY_ID: z.string().optional(),
   S3_SECRET_ACCESS_KEY: z.string().optional(),
   SERVE_CLIENT: z.enum(["true", "false"]).default("true"),
+  /**
+   * Where the payment provider's API is, e.g. http://127.0.0.1:4243 for the local fake
+   * (scripts/lib/fake-payments.ts); unset means the provider's real API.
+   */
+  PAYMENTS_API_BASE: z.string().url().optional(),
+  /** The provider's secret API key. Development and tests get a placeholder that only the local fake takes. */
+  STRIPE_SECRET_KEY: z.string().min(1).optional(),
+  /** The signing secret of the webhook endpoint (whsec_…); webhooks signed otherwise are refused. */
+  STRIPE_WEBHOOK_SECRET: z.string().min(1).optional(),
 });
 
-export type Env = z.infer<typeof EnvSchema>;
+/**
+ * Placeholders for development and tests only: the local fake payment service accepts them;
+ * the real service would refuse them. Production must configure its own (or have no online deposits).
+ */
+export const LOCAL_PAYMENT_KEYS = {
+  STRIPE_SECRET_KEY: "sk_test_eavesight_local_fake",
+  STRIPE_WEBHOOK_SECRET: "whsec_eavesight_local_fake",
+} as const;
+
+const EnvWithPaymentsSchema = EnvSchema.transform((env) =>
+  env.NODE_ENV === "production"
+    ? env
+    : { ...env, STRIPE_SECRET_KEY: env.STRIPE_SECRET_KEY ?? LOCAL_PAYMENT_KEYS.STRIPE_SECRET_KEY, STRIPE_WEBHOOK_SECRET: env.STRIPE_WEBHOOK_SECRET ?? LOCAL_PAYMENT_KEYS.STRIPE_WEBHOOK_SECRET },
+).superRefine((env, ctx) => {
+  if (Boolean(env.STRIPE_SECRET_KEY) !== Boolean(env.STRIPE_WEBHOOK_SECRET)) {
+    ctx.addIssue({ code: "custom", path: ["STRIPE_WEBHOOK_SECRET"], message: "set STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET together (or neither, for no online deposits)" });
+  }
+});
+
+export type Env = z.infer<typeof EnvWithPaymentsSchema>;
 
 export function parseEnv(source: NodeJS.ProcessEnv = process.env): Env {
-  const result = EnvSchema.safeParse(source);
+  const result = EnvWithPaymentsSchema.safeParse(source);
   if (!result.success) {
     const lines = result.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`);
     throw new Error(`Invalid configuration:\n${lines.join("\n")}`);

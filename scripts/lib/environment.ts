@@ -2,6 +2,8 @@ import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { ensureCluster, ensureDatabase, devCluster, testCluster, type ClusterConfig } from "./postgres.ts";
 import { runMigrations } from "./migrate.ts";
 import { projectRoot, log } from "./paths.ts";
+import { startFakePayments } from "./fake-payments.ts";
+import { LOCAL_PAYMENT_KEYS } from "../../server/env.ts";
 
 export interface Environment {
   cluster: ClusterConfig;
@@ -61,4 +63,24 @@ export function stopChild(child: ChildProcess | undefined, signal: NodeJS.Signal
     child.once("exit", () => resolve());
     child.kill(signal);
   });
+}
+
+/**
+ * The local fake payment service (scripts/lib/fake-payments.ts) for a server on `appPort`, and the
+ * env that points the server's payment SDK at it. When STRIPE_SECRET_KEY is set without
+ * PAYMENTS_API_BASE, the real service is configured and no fake is started (never for tests).
+ */
+export async function startLocalPayments(opts: { appPort: number; port?: number; quiet?: boolean; isTest?: boolean }) {
+  if (!opts.isTest && process.env.STRIPE_SECRET_KEY && !process.env.PAYMENTS_API_BASE) {
+    log("payments: using the service STRIPE_SECRET_KEY configures (no local fake)");
+    return { env: {} as NodeJS.ProcessEnv, close: async () => {} };
+  }
+  const fake = await startFakePayments({
+    port: opts.port ?? Number(process.env.FAKE_PAYMENTS_PORT ?? 0),
+    apiKey: LOCAL_PAYMENT_KEYS.STRIPE_SECRET_KEY, webhookSecret: LOCAL_PAYMENT_KEYS.STRIPE_WEBHOOK_SECRET,
+    webhookUrl: `http://127.0.0.1:${opts.appPort}/api/webhooks/payments`, quiet: opts.quiet,
+  });
+  if (!opts.quiet) log(`fake payment service on ${fake.url} (test payments only; no money moves)`);
+  const env: NodeJS.ProcessEnv = { PAYMENTS_API_BASE: fake.url, ...LOCAL_PAYMENT_KEYS };
+  return { env, close: () => fake.close() };
 }

@@ -1,5 +1,5 @@
 /** `npm start`: the product with demo data on http://127.0.0.1:3000 (PORT overrides). */
-import { prepareDatabase, buildClient, startServer, stopChild } from "../lib/environment.ts";
+import { prepareDatabase, buildClient, startServer, stopChild, startLocalPayments } from "../lib/environment.ts";
 import { startFakeSmtp } from "../lib/fake-smtp.ts";
 import { seedDemo, DEMO_USERS, DEMO_PASSWORD } from "../lib/seed.ts";
 import { log } from "../lib/paths.ts";
@@ -12,7 +12,8 @@ await seedDemo(databaseUrl);
 buildClient();
 const smtp = await startFakeSmtp({ port: smtpPort, databaseUrl });
 log(`fake SMTP server on 127.0.0.1:${smtpPort} (messages appear in Settings → Outbox)`);
-const server = await startServer({ ...env, PORT: String(port), SMTP_PORT: String(smtpPort), NODE_ENV: "production" });
+const payments = await startLocalPayments({ appPort: port });
+const server = await startServer({ ...env, ...payments.env, PORT: String(port), SMTP_PORT: String(smtpPort), NODE_ENV: "production" });
 
 console.log(`
   Eavesight is running:  http://127.0.0.1:${port}
@@ -29,6 +30,7 @@ async function stop() {
   stopping = true;
   await stopChild(server);
   await smtp.close();
+  await payments.close();
   log("stopped");
   process.exit(0);
 }
@@ -37,6 +39,6 @@ process.on("SIGTERM", () => void stop());
 server.on("exit", (code) => {
   if (!stopping) {
     log(`the server exited (code ${code})`);
-    void smtp.close().then(() => process.exit(code ?? 1));
+    void Promise.all([smtp.close(), payments.close()]).then(() => process.exit(code ?? 1));
   }
 });

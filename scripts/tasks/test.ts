@@ -8,7 +8,7 @@
 import { spawn } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync, rmSync } from "node:fs";
 import path from "node:path";
-import { prepareDatabase, buildClient, startServer, stopChild, freePort } from "../lib/environment.ts";
+import { prepareDatabase, buildClient, startServer, stopChild, freePort, startLocalPayments } from "../lib/environment.ts";
 import { dropDatabase, listDatabases, testCluster } from "../lib/postgres.ts";
 import { startFakeSmtp } from "../lib/fake-smtp.ts";
 import { seedDemo } from "../lib/seed.ts";
@@ -90,11 +90,13 @@ try {
   if (wants("e2e")) {
     ensureChromium();
     buildClient();
-    const server = await startServer({ ...env, PORT: String(testPort), LOG_LEVEL: "error" });
+    const payments = await startLocalPayments({ appPort: testPort, quiet: true, isTest: true });
+    const server = await startServer({ ...env, ...payments.env, PORT: String(testPort), LOG_LEVEL: "error" });
     try {
-      await vitest("e2e", ["e2e"], { ...env, E2E_BASE_URL: `http://127.0.0.1:${testPort}` });
+      await vitest("e2e", ["e2e"], { ...env, ...payments.env, E2E_BASE_URL: `http://127.0.0.1:${testPort}` });
     } finally {
       await stopChild(server);
+      await payments.close();
     }
   }
 } finally {

@@ -51,6 +51,16 @@ const appRoutes: RouteObject[] = [
     lazy: () => import("./routes/project-options-materials"),
   },
   {
+    path: paths.app.projectProposals.path,
+    loader: requireArea("projects"),
+    lazy: () => import("./routes/project-proposals"),
+  },
+  {
+    path: paths.app.projectProposal.path,
+    loader: requireArea("projects"),
+    lazy: () => import("./routes/project-proposal"),
+  },
+  {
     path: paths.app.customers.path,
     loader: requireArea("customers"),
     lazy: () => import("./routes/customers"),
@@ -101,6 +111,8 @@ export const routes: RouteObject[] = [
     errorElement: <RootErrorPage />,
     HydrateFallback: FullPageLoading,
     children: [
+      // The homeowner's proposal page: no account and no app shell (it has its own plain header).
+      { path: paths.publicProposal.path, errorElement: <RootErrorPage />, lazy: () => import("./routes/public-proposal") },
       {
         element: <AuthLayout />,
         errorElement: <RootErrorPage />,

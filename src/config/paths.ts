@@ -62,6 +62,15 @@ export const paths = {
       getHref: (projectId: string, optionId: string) =>
         `/projects/${encodeURIComponent(projectId)}/options/${encodeURIComponent(optionId)}/materials`,
     },
+    projectProposals: {
+      path: "/projects/:projectId/proposals",
+      getHref: (projectId: string) => `/projects/${encodeURIComponent(projectId)}/proposals`,
+    },
+    projectProposal: {
+      path: "/projects/:projectId/proposals/:proposalId",
+      getHref: (projectId: string, proposalId: string) =>
+        `/projects/${encodeURIComponent(projectId)}/proposals/${encodeURIComponent(proposalId)}`,
+    },
     customers: { path: "/customers", getHref: () => "/customers" },
     catalog: { path: "/catalog", getHref: () => "/catalog" },
     pipeline: { path: "/pipeline", getHref: () => "/pipeline" },

@@ -11,3 +11,4 @@ export * from "./photos.ts";
 export * from "./catalog-items.ts";
 export * from "./design-options.ts";
 export * from "./proposals.ts";
+export * from "./payments.ts";

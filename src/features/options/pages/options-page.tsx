@@ -126,6 +126,9 @@ export function OptionsPage({ projectId, unitSystem, canEdit }: OptionsPageProps
                 New option
               </Button>
             ) : null}
+            <Link to={paths.app.projectProposals.getHref(projectId)} className={buttonStyles({ variant: "secondary" })}>
+              Proposals
+            </Link>
             {options.length > 0 ? (
               <Link to={paths.app.projectOptionsCompare.getHref(projectId)} className={buttonStyles({ variant: "secondary" })}>
                 <ChartIcon /> Compare options

@@ -1,0 +1,287 @@
+import { AppError, conflict, notFound } from "../../lib/errors.ts";
+import type { Jobs } from "../../lib/jobs.ts";
+import type { Logger } from "../../lib/logger.ts";
+import type { Actor, RequestMeta } from "../../lib/request-context.ts";
+import { formatCents } from "../../../shared/pricing/index.ts";
+import type { ProposalRow } from "../proposals/proposals.repository.ts";
+import type { ProposalsService } from "../proposals/proposals.service.ts";
+import { depositDue } from "./deposit-amount.ts";
+import type { CheckoutSessionFacts, PaymentProvider, ProviderEvent } from "./payment-provider.ts";
+import type { PaymentRow, PaymentsRepository, PaymentWrite } from "./payments.repository.ts";
+
+/** Deposits are charged in US dollars: the product serves US contractors. */
+export const DEPOSIT_CURRENCY = "usd";
+/** A pending row without a session this old was left by a request that died midway. */
+const STALE_START_MS = 2 * 60_000;
+
+export type DepositState = "not-accepted" | "declined" | "none" | "due" | "paid" | "refunded";
+
+/** What the homeowner's page and the proposal page show about the deposit. */
+export interface DepositView {
+  state: DepositState;
+  /** The deposit due, or what was paid; null when there is none. Integer cents. */
+  amountCents: number | null;
+  currency: string;
+  /** Why there is nothing to pay, in plain words, when state is "none". */
+  message: string | null;
+  isOnlinePaymentAvailable: boolean;
+  /** A checkout was opened and not finished (the homeowner may come back to it). */
+  isCheckoutStarted: boolean;
+  paidAt: Date | null;
+  isRefundRequested: boolean;
+  refundedCents: number;
+  refundedAt: Date | null;
+}
+
+/** What staff see of one payment attempt, provider ids included. */
+export function presentPayment(p: PaymentRow) {
+  return {
+    id: p.id, proposalId: p.proposalId, optionId: p.optionId, amountCents: p.amountCents, currency: p.currency, status: p.status,
+    paidCents: p.paidCents, paidAt: p.paidAt, checkoutSessionId: p.checkoutSessionId, paymentIntentId: p.paymentIntentId,
+    refundId: p.refundId, refundRequestedAt: p.refundRequestedAt, refundRequestedBy: p.refundRequestedBy, refundedCents: p.refundedCents, refundedAt: p.refundedAt,
+    failedAt: p.failedAt, failureReason: p.failureReason, createdAt: p.createdAt, updatedAt: p.updatedAt,
+  };
+}
+
+const utc = (d: Date) => `${d.toISOString().slice(0, 16).replace("T", " ")} UTC`;
+
+export function createPaymentsService(deps: {
+  repo: PaymentsRepository;
+  proposals: Pick<ProposalsService, "byToken">;
+  provider: PaymentProvider | null;
+  jobs: Pick<Jobs, "sendEmail">;
+  logger: Logger;
+  now: () => Date;
+  appOrigin: () => string;
+}) {
+  const { repo } = deps;
+
+  function requireProvider(): PaymentProvider {
+    if (!deps.provider) throw new AppError("payments-not-configured", "Online deposit payment is not set up. Please contact the company to arrange the deposit.", 503);
+    return deps.provider;
+  }
+
+  async function ruleFor(p: ProposalRow) {
+    return p.depositRule ?? (await repo.companyDepositRule(p));
+  }
+
+  async function depositView(p: ProposalRow, rows: PaymentRow[]): Promise<DepositView> {
+    const base = {
+      currency: DEPOSIT_CURRENCY, message: null, isOnlinePaymentAvailable: deps.provider !== null, isCheckoutStarted: false,
+      paidAt: null, isRefundRequested: false, refundedCents: 0, refundedAt: null,
+    };
+    // A payment the provider confirmed counts whatever happened to the proposal since.
+    const settled = rows.find((r) => r.status === "paid" || r.status === "refunded");
+    if (settled) {
+      return {
+        ...base, state: settled.status === "refunded" ? "refunded" : "paid", amountCents: settled.paidCents ?? settled.amountCents, currency: settled.currency,
+        paidAt: settled.paidAt, isRefundRequested: Boolean(settled.refundRequestedAt), refundedCents: settled.refundedCents, refundedAt: settled.refundedAt,
+      };
+    }
+    if (p.status === "declined") return { ...base, state: "declined", amountCents: null, message: "This proposal was declined, so no deposit is due." };
+    if (p.status !== "accepted" || !p.snapshot) return { ...base, state: "not-accepted", amountCents: null, message: "The deposit is paid after an option is accepted." };
+    const due = depositDue(p.snapshot, p.acceptance?.optionId ?? null, await ruleFor(p));
+    if (!due.isDue) return { ...base, state: "none", amountCents: null, message: due.reason };
+    return { ...base, state: "due", amountCents: due.amountCents, isCheckoutStarted: rows.some((r) => r.status === "pending") };
+  }
+
+  /** Retires an open checkout that can no longer be used (expired, or for an amount no longer right). */
+  async function retire(p: ProposalRow, row: PaymentRow, session: CheckoutSessionFacts | null, reason: string) {
+    if (session?.status === "open") await requireProvider().expireCheckout(session.id);
+    await repo.update(p, row.id, { status: "failed", failedAt: deps.now(), failureReason: reason }, ["pending"]);
+  }
+
+  async function notifySeller(payment: PaymentRow, subjectStart: string, lines: string[]) {
+    const p = await repo.proposal(payment, payment.proposalId);
+    if (!p?.snapshot) return;
+    const sellerId = p.sellerUserId ?? p.createdBy;
+    const seller = sellerId ? await repo.user(payment, sellerId) : null;
+    const to = seller?.isActive ? seller.email : p.snapshot.company.email;
+    if (!to) {
+      deps.logger.warn({ paymentId: payment.id }, "no one to tell about the deposit: the seller is gone and the company has no e-mail");
+      return;
+    }
+    const s = p.snapshot;
+    await deps.jobs.sendEmail({
+      companyId: payment.companyId, to,
+      subject: `${subjectStart} — ${s.customer.name}, ${s.site.address}`,
+      text: [`Hello ${seller?.isActive ? seller.name : s.company.name},`, "", ...lines, "",
+        `Open the project: ${deps.appOrigin()}/projects/${p.projectId}`, "",
+        "Eavesight sent this when the payment service confirmed it. No card details ever reach Eavesight."].join("\n"),
+    }, { singletonKey: `${subjectStart.split(":")[0]}:${payment.id}` });
+  }
+
+  async function onSessionPaid(event: Extract<ProviderEvent, { session: CheckoutSessionFacts }>, meta: RequestMeta) {
+    const { session } = event;
+    if (session.paymentStatus !== "paid") return { isApplied: false, note: "The checkout is complete but the money has not arrived yet." };
+    const payment = await repo.findByCheckoutSession(session.id);
+    if (!payment) return { isApplied: false, note: "Not a checkout of this app." };
+    const now = deps.now();
+    const paidCents = session.amountTotalCents ?? payment.amountCents;
+    const currency = session.currency ?? payment.currency;
+    // Already settled by another event of the same payment (e.g. completed, then async succeeded): only the id is claimed.
+    const isSettled = payment.status === "paid" || payment.status === "refunded";
+    const detail = {
+      paymentId: payment.id, amountCents: paidCents, currency, checkoutSessionId: session.id, paymentIntentId: session.paymentIntentId,
+      providerEventId: event.id, paidAt: now.toISOString(),
+      ...(paidCents !== payment.amountCents || currency !== payment.currency ? { expectedCents: payment.amountCents, expectedCurrency: payment.currency, isMismatch: true } : {}),
+    };
+    const patch: PaymentWrite = isSettled ? {} : { status: "paid", paidCents, currency, paymentIntentId: session.paymentIntentId, paidAt: now, failedAt: null, failureReason: null };
+    const updated = await repo.applyEventOnce(payment, event.id, event.type, patch, isSettled ? null : { event: "deposit-paid", detail, meta });
+    if (!updated) return { isApplied: false, isDuplicate: true, note: "This event was already processed." };
+    if (isSettled) return { isApplied: false, note: "The payment was already recorded." };
+    if (detail.isMismatch) deps.logger.warn({ paymentId: payment.id, paidCents, expectedCents: payment.amountCents }, "the provider collected a different amount than asked");
+    const option = (await repo.proposal(payment, payment.proposalId))?.snapshot?.options.find((o) => o.id === payment.optionId);
+    await notifySeller(updated, `Deposit received: ${formatCents(paidCents)}`, [
+      `The homeowner paid the deposit of ${formatCents(paidCents)}${option ? ` for "${option.name}"` : ""}.`,
+      `Paid: ${utc(now)}`,
+      `Payment service reference: ${session.paymentIntentId ?? session.id}`,
+    ]);
+    return { isApplied: true, note: "Deposit recorded as paid." };
+  }
+
+  async function onSessionClosed(event: Extract<ProviderEvent, { session: CheckoutSessionFacts }>, meta: RequestMeta) {
+    const payment = await repo.findByCheckoutSession(event.session.id);
+    if (!payment) return { isApplied: false, note: "Not a checkout of this app." };
+    if (payment.status !== "pending") {
+      await repo.applyEventOnce(payment, event.id, event.type, {}, null);
+      return { isApplied: false, note: "Nothing to change." };
+    }
+    const isFailed = event.type === "checkout.session.async_payment_failed";
+    const updated = await repo.applyEventOnce(payment, event.id, event.type, { status: "failed", failedAt: deps.now(), failureReason: isFailed ? "the payment failed" : "the checkout expired" },
+      isFailed ? { event: "deposit-failed", detail: { paymentId: payment.id, checkoutSessionId: event.session.id, providerEventId: event.id }, meta } : null);
+    return updated ? { isApplied: true, note: "Checkout closed." } : { isApplied: false, isDuplicate: true, note: "This event was already processed." };
+  }
+
+  async function onRefunded(event: Extract<ProviderEvent, { type: "charge.refunded" }>, meta: RequestMeta) {
+    const { charge } = event;
+    const payment = charge.paymentIntentId ? await repo.findByPaymentIntent(charge.paymentIntentId) : null;
+    if (!payment) return { isApplied: false, note: "Not a payment of this app." };
+    const now = deps.now();
+    const isFull = charge.isFullyRefunded;
+    const updated = await repo.applyEventOnce(payment, event.id, event.type, {
+      refundedCents: charge.amountRefundedCents, ...(isFull ? { status: "refunded", refundedAt: now } : {}),
+    }, {
+      event: "deposit-refunded",
+      detail: { paymentId: payment.id, refundedCents: charge.amountRefundedCents, currency: charge.currency, isFullRefund: isFull, paymentIntentId: charge.paymentIntentId, refundId: payment.refundId, providerEventId: event.id, refundedAt: now.toISOString() },
+      meta,
+    });
+    if (!updated) return { isApplied: false, isDuplicate: true, note: "This event was already processed." };
+    await notifySeller(updated, `Deposit refunded: ${formatCents(charge.amountRefundedCents)}`, [
+      `The deposit was refunded${isFull ? " in full" : " in part"}: ${formatCents(charge.amountRefundedCents)} of ${formatCents(charge.amountCents)}.`,
+      `Confirmed: ${utc(now)}`,
+    ]);
+    return { isApplied: true, note: "Refund recorded." };
+  }
+
+  return {
+    /** GET /public/proposals/:token/deposit */
+    async publicDeposit(token: string): Promise<DepositView> {
+      const p = await deps.proposals.byToken(token);
+      return depositView(p, await repo.listForProposal(p, p.id));
+    },
+
+    /**
+     * Opens (or reopens) the provider's hosted checkout for the deposit. The amount is the
+     * server's own (depositDue); nothing the client sends is read.
+     */
+    async startCheckout(token: string, meta: RequestMeta): Promise<{ url: string; amountCents: number; currency: string }> {
+      const p = await deps.proposals.byToken(token);
+      if (p.status === "declined") throw conflict("This proposal was declined, so there is no deposit to pay.", "declined");
+      if (p.status !== "accepted" || !p.snapshot || !p.acceptance) throw conflict("Accept an option first: the deposit is paid after signing.", "not-accepted");
+      const rows = await repo.listForProposal(p, p.id);
+      if (rows.some((r) => r.status === "paid")) throw conflict("The deposit for this proposal has already been paid.", "already-paid");
+      if (rows.some((r) => r.status === "refunded")) throw conflict("The deposit for this proposal was refunded. Please contact the company.", "refunded");
+      const due = depositDue(p.snapshot, p.acceptance.optionId, await ruleFor(p));
+      if (!due.isDue) throw new AppError("no-deposit", due.reason, 409);
+      const provider = requireProvider();
+      const now = deps.now();
+
+      const open = rows.find((r) => r.status === "pending");
+      if (open) {
+        if (!open.checkoutSessionId) {
+          if (now.getTime() - open.createdAt.getTime() < STALE_START_MS) throw conflict("The payment page is being prepared; try again in a moment.", "checkout-starting");
+          await retire(p, open, null, "the checkout was never opened");
+        } else {
+          const session = await provider.retrieveCheckout(open.checkoutSessionId);
+          if (session.status === "complete") throw conflict("This deposit was just paid and is being confirmed. Refresh the page in a moment.", "payment-confirming");
+          if (session.status === "open" && session.url && session.amountTotalCents === due.amountCents && open.amountCents === due.amountCents) {
+            return { url: session.url, amountCents: due.amountCents, currency: open.currency };
+          }
+          await retire(p, open, session, session.status === "expired" ? "the checkout expired" : "the deposit amount changed");
+        }
+      }
+
+      const row = await repo.insertPending(p, { proposalId: p.id, optionId: due.optionId, amountCents: due.amountCents, currency: DEPOSIT_CURRENCY });
+      if (!row) throw conflict("The payment page is being prepared; try again in a moment.", "checkout-starting");
+      const back = `${deps.appOrigin()}/p/${encodeURIComponent(token)}`;
+      let session: CheckoutSessionFacts;
+      try {
+        session = await provider.createCheckout({
+          amountCents: due.amountCents, currency: DEPOSIT_CURRENCY,
+          description: `Deposit: ${due.optionName} — ${p.snapshot.company.name}, ${p.snapshot.site.address}`.slice(0, 250),
+          customerEmail: p.snapshot.customer.email, successUrl: `${back}?deposit=success`, cancelUrl: `${back}?deposit=cancel`,
+          paymentId: row.id, metadata: { paymentId: row.id, proposalId: p.id, companyId: p.companyId },
+        });
+        if (!session.url) throw new AppError("payments-unavailable", "The payment service did not return a payment page. Please try again in a few minutes.", 502);
+      } catch (err) {
+        await repo.update(p, row.id, { status: "failed", failedAt: deps.now(), failureReason: "the checkout could not be opened" }, ["pending"]);
+        throw err;
+      }
+      await repo.update(p, row.id, { checkoutSessionId: session.id });
+      await repo.audit(p.companyId, "deposit-checkout-opened", { proposalId: p.id, paymentId: row.id, amountCents: due.amountCents, currency: DEPOSIT_CURRENCY, checkoutSessionId: session.id }, meta);
+      return { url: session.url, amountCents: due.amountCents, currency: DEPOSIT_CURRENCY };
+    },
+
+    /** POST /webhooks/payments: verified, then applied at most once per event id. */
+    async handleWebhook(rawBody: unknown, signature: string | undefined, meta: RequestMeta) {
+      const provider = requireProvider();
+      if (!Buffer.isBuffer(rawBody) || rawBody.length === 0) throw new AppError("bad-request", "The webhook body must be the raw JSON the payment service sent.", 400);
+      const event = provider.verifyEvent(rawBody, signature);
+      const outcome = await (async () => {
+        switch (event.type) {
+          case "checkout.session.completed":
+          case "checkout.session.async_payment_succeeded":
+            return onSessionPaid(event, meta);
+          case "checkout.session.expired":
+          case "checkout.session.async_payment_failed":
+            return onSessionClosed(event, meta);
+          case "charge.refunded":
+            return onRefunded(event, meta);
+          default:
+            return { isApplied: false, note: `Events of type ${event.providerType} are not used.` };
+        }
+      })();
+      return { received: true, eventId: event.id, isDuplicate: false, ...outcome };
+    },
+
+    /** GET /proposals/:id/payments */
+    async forProposal(actor: Actor, proposalId: string) {
+      const p = await repo.proposal(actor, proposalId);
+      if (!p) throw notFound("That proposal");
+      const rows = await repo.listForProposal(actor, p.id);
+      return { deposit: await depositView(p, rows), payments: rows.map(presentPayment) };
+    },
+
+    /** POST /payments/:id/refund: asks the provider; the refund webhook then records it as refunded. */
+    async refund(actor: Actor, paymentId: string, meta: RequestMeta) {
+      const payment = await repo.find(actor, paymentId);
+      if (!payment) throw notFound("That payment");
+      if (payment.status === "refunded") throw conflict("This deposit was already refunded.", "already-refunded");
+      if (payment.status !== "paid" || !payment.paymentIntentId) throw conflict("Only a paid deposit can be refunded.", "not-paid");
+      if (payment.refundRequestedAt) throw conflict("A refund was already requested; it shows as refunded when the payment service confirms it.", "refund-requested");
+      const amountCents = (payment.paidCents ?? payment.amountCents) - payment.refundedCents;
+      const refund = await requireProvider().refund({
+        paymentIntentId: payment.paymentIntentId, amountCents, paymentId: payment.id,
+        metadata: { paymentId: payment.id, proposalId: payment.proposalId, companyId: payment.companyId },
+      });
+      // The refund webhook may already have marked it refunded; only the request facts are added.
+      const updated = await repo.updateWithRecord(actor, payment, { refundId: refund.id, refundRequestedAt: deps.now(), refundRequestedBy: actor.userId }, ["paid", "refunded"], {
+        event: "deposit-refund-requested", userId: actor.userId, meta,
+        detail: { paymentId: payment.id, amountCents, currency: payment.currency, refundId: refund.id, refundStatus: refund.status },
+      });
+      return { payment: presentPayment(updated ?? (await repo.find(actor, paymentId))!) };
+    },
+  };
+}
+export type PaymentsService = ReturnType<typeof createPaymentsService>;

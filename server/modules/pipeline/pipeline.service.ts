@@ -1,0 +1,102 @@
+import { PROPOSAL_STATUSES, type ProposalStatus } from "../../../shared/proposals/types.ts";
+import type { Actor } from "../../lib/request-context.ts";
+import type { PipelineRepository, PipelineRow } from "./pipeline.repository.ts";
+
+const DAY_MS = 86_400_000;
+export const PIPELINE_PERIODS_DAYS = [30, 90, 365] as const;
+export type PipelinePeriodDays = (typeof PIPELINE_PERIODS_DAYS)[number];
+
+export interface PipelineProposal {
+  id: string;
+  projectId: string;
+  projectTitle: string;
+  customerName: string | null;
+  revision: number;
+  status: ProposalStatus;
+  /** The accepted option's total, else the largest option total; null when nothing is priced yet. */
+  valueCents: number | null;
+  valueBasis: "accepted" | "largest" | null;
+  /** Whole days from sending (drafts: from creation) to the decision, or to now while open. */
+  ageDays: number;
+  createdAt: string;
+  sentAt: string | null;
+  viewedAt: string | null;
+  decidedAt: string | null;
+  validUntil: string;
+}
+
+export interface PipelineOverview {
+  periodDays: PipelinePeriodDays;
+  generatedAt: string;
+  stages: { status: ProposalStatus; count: number; valueCents: number }[];
+  proposals: PipelineProposal[];
+  /** Accepted ÷ decided (accepted + declined) among decisions in the period; null with no decisions. */
+  winRate: { accepted: number; declined: number; decided: number; expired: number; rate: number | null };
+}
+
+/** When a proposal left the open pipeline, for the period filter: its decision, or its link's lapse. */
+function closedAt(row: PipelineRow): Date | null {
+  if (row.status === "accepted" || row.status === "declined") return row.decidedAt;
+  if (row.status === "expired") return row.tokenExpiresAt;
+  return null;
+}
+
+export function createPipelineService(deps: {
+  repo: PipelineRepository;
+  /** Live option totals of a project, for drafts that have no frozen snapshot to read. */
+  liveOptionTotals: (actor: Actor, projectId: string) => Promise<{ id: string; totalCents: number | null }[]>;
+  now: () => Date;
+}) {
+  return {
+    /**
+     * The proposals in play by status, with value and age, and the win rate for the period. Open
+     * proposals (draft, sent, viewed) always show; closed ones only when they closed in the period.
+     */
+    async overview(actor: Actor, periodDays: PipelinePeriodDays): Promise<PipelineOverview> {
+      const now = deps.now();
+      const since = new Date(now.getTime() - periodDays * DAY_MS);
+      const rows = (await deps.repo.currentRevisions(actor)).filter((r) => {
+        const closed = closedAt(r);
+        return closed === null ? r.status !== "expired" : closed >= since;
+      });
+
+      const liveByProject = new Map<string, Promise<{ id: string; totalCents: number | null }[]>>();
+      const live = (projectId: string) => {
+        if (!liveByProject.has(projectId)) liveByProject.set(projectId, deps.liveOptionTotals(actor, projectId));
+        return liveByProject.get(projectId)!;
+      };
+
+      const proposals = await Promise.all(
+        rows.map(async (r): Promise<PipelineProposal> => {
+          let totals = r.status === "draft" ? null : (r.snapshotTotalsCents ?? []).filter((n): n is number => typeof n === "number");
+          if (totals === null) totals = (await live(r.projectId)).filter((o) => r.optionIds.includes(o.id)).map((o) => o.totalCents).filter((n): n is number => n !== null);
+          const accepted = r.status === "accepted" ? r.acceptedTotalCents : null;
+          const valueCents = accepted ?? (totals.length > 0 ? Math.max(...totals) : null);
+          const start = r.sentAt ?? r.createdAt;
+          const end = closedAt(r) ?? now;
+          return {
+            id: r.id, projectId: r.projectId, projectTitle: r.projectTitle, customerName: r.customerName, revision: r.revision, status: r.status,
+            valueCents, valueBasis: accepted !== null ? "accepted" : valueCents !== null ? "largest" : null,
+            ageDays: Math.max(0, Math.floor((end.getTime() - start.getTime()) / DAY_MS)),
+            createdAt: r.createdAt.toISOString(), sentAt: r.sentAt?.toISOString() ?? null, viewedAt: r.viewedAt?.toISOString() ?? null,
+            decidedAt: r.decidedAt?.toISOString() ?? null, validUntil: r.validUntil,
+          };
+        }),
+      );
+
+      const stages = PROPOSAL_STATUSES.map((status) => {
+        const inStage = proposals.filter((p) => p.status === status);
+        return { status, count: inStage.length, valueCents: inStage.reduce((sum, p) => sum + (p.valueCents ?? 0), 0) };
+      });
+      const count = (s: ProposalStatus) => proposals.filter((p) => p.status === s).length;
+      const accepted = count("accepted");
+      const declined = count("declined");
+      const decided = accepted + declined;
+      return {
+        periodDays, generatedAt: now.toISOString(), stages, proposals,
+        winRate: { accepted, declined, decided, expired: count("expired"), rate: decided === 0 ? null : accepted / decided },
+      };
+    },
+  };
+}
+export type PipelineService = ReturnType<typeof createPipelineService>;

@@ -1,0 +1,17 @@
+import type { DepositRule } from "@shared/proposals/types";
+
+/** The company profile as GET|PATCH /api/company answer it (server/modules/proposals/company.service.ts). */
+export interface CompanyProfile {
+  id: string;
+  name: string;
+  licenseNumber: string | null;
+  addressLine: string | null;
+  phone: string | null;
+  email: string | null;
+  defaultTerms: string | null;
+  taxRateBasisPoints: number;
+  depositRule: DepositRule | null;
+  isCoolingOffNoticeEnabled: boolean;
+  reminderDays: number | null;
+  logo: { contentType: string | null; sha256: string | null; url: string } | null;
+}
