@@ -52,4 +52,14 @@ export default tseslint.config(
       "no-restricted-imports": ["error", { patterns: [{ group: ["**/server/**", "@server/*", "express", "drizzle-orm", "postgres"], message: "src/ never imports the server." }] }],
     },
   },
+  {
+    // Features don't import each other: shared pieces go to components/ or lib/, and routes compose features.
+    files: ["src/features/**/*.{ts,tsx}"],
+    rules: {
+      "no-restricted-imports": ["error", { patterns: [
+        { group: ["**/server/**", "@server/*", "express", "drizzle-orm", "postgres"], message: "src/ never imports the server." },
+        { group: ["@/features/*", "@/app/*"], message: "A feature never imports another feature or the app; compose them in src/app/routes." },
+      ] }],
+    },
+  },
 );
