@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ESIGN_CONSENT_VERSION } from "../../shared/proposals/disclosures.ts";
+import { payments } from "../../server/db/schema/index.ts";
 import { ORIGIN, startTestApp, type TestApp } from "../setup/test-app.ts";
 import { createCustomer, createProject, createSpace, makeTeam, send, type Agent, type Team } from "../setup/survey-fixtures.ts";
 
@@ -107,6 +108,19 @@ describe("GET /api/pipeline", () => {
     } finally {
       t.clock.offsetMs = 0;
     }
+  });
+
+  it("when a deposit is confirmed (and another refunded), then the pipeline shows only the received one, on its card and in the total", async () => {
+    const acceptedOptionId = (await team.asSales.get(`/api/proposals/${ids.acceptedId}`)).body.proposal.acceptance.optionId as string;
+    const base = { companyId: team.company.id, proposalId: ids.acceptedId, optionId: acceptedOptionId };
+    await t.db.insert(payments).values([
+      { ...base, amountCents: 25_000, status: "refunded", paymentIntentId: "pi_test_pipeline_refunded" },
+      { ...base, amountCents: 11_926, status: "paid", paymentIntentId: "pi_test_pipeline_paid" },
+    ]);
+    const o = (await team.asSales.get("/api/pipeline?days=90").expect(200)).body;
+    expect(o.deposits).toEqual({ receivedCents: 11_926, count: 1 });
+    expect(o.proposals.find((p: { id: string }) => p.id === ids.acceptedId).depositPaidCents).toBe(11_926);
+    expect(o.proposals.find((p: { id: string }) => p.id === ids.declinedId).depositPaidCents).toBe(0);
   });
 
   it("when an estimator, a stranger or another company asks, then they get 403, 401 or nothing of ours", async () => {

@@ -1,6 +1,6 @@
 import { and, desc, eq, isNull, sql } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
-import { customers, projects, proposals } from "../../db/schema/index.ts";
+import { customers, payments, projects, proposals } from "../../db/schema/index.ts";
 import { scoped } from "../../lib/tenant.ts";
 import type { Actor } from "../../lib/request-context.ts";
 
@@ -28,6 +28,8 @@ export function createPipelineRepository(db: Database) {
           projectTitle: projects.title,
           customerName: customers.name,
           snapshotTotalsCents: sql<number[] | null>`jsonb_path_query_array(${proposals.snapshot}, '$.options[*].price.totalCents')`,
+          /** Deposits confirmed by the payment webhook and not refunded. */
+          depositPaidCents: sql<number>`(select coalesce(sum(${payments.amountCents}), 0)::int from ${payments} where ${payments.proposalId} = ${proposals.id} and ${payments.companyId} = ${proposals.companyId} and ${payments.status} = 'paid')`,
           acceptedTotalCents: sql<number | null>`(select (o->'price'->>'totalCents')::int from jsonb_array_elements(${proposals.snapshot}->'options') o where o->>'id' = ${proposals.acceptance}->>'optionId' limit 1)`,
         })
         .from(proposals)

@@ -23,6 +23,8 @@ export interface PipelineProposal {
   viewedAt: string | null;
   decidedAt: string | null;
   validUntil: string;
+  /** Deposits received (confirmed by the payment webhook, not refunded), cents. */
+  depositPaidCents: number;
 }
 
 export interface PipelineOverview {
@@ -32,6 +34,7 @@ export interface PipelineOverview {
   proposals: PipelineProposal[];
   /** Accepted ÷ decided (accepted + declined) among decisions in the period; null with no decisions. */
   winRate: { accepted: number; declined: number; decided: number; expired: number; rate: number | null };
+  deposits: { receivedCents: number; count: number };
 }
 
 /** When a proposal left the open pipeline, for the period filter: its decision, or its link's lapse. */
@@ -80,6 +83,7 @@ export function createPipelineService(deps: {
             ageDays: Math.max(0, Math.floor((end.getTime() - start.getTime()) / DAY_MS)),
             createdAt: r.createdAt.toISOString(), sentAt: r.sentAt?.toISOString() ?? null, viewedAt: r.viewedAt?.toISOString() ?? null,
             decidedAt: r.decidedAt?.toISOString() ?? null, validUntil: r.validUntil,
+            depositPaidCents: r.depositPaidCents,
           };
         }),
       );
@@ -95,6 +99,10 @@ export function createPipelineService(deps: {
       return {
         periodDays, generatedAt: now.toISOString(), stages, proposals,
         winRate: { accepted, declined, decided, expired: count("expired"), rate: decided === 0 ? null : accepted / decided },
+        deposits: {
+          receivedCents: proposals.reduce((sum, p) => sum + p.depositPaidCents, 0),
+          count: proposals.filter((p) => p.depositPaidCents > 0).length,
+        },
       };
     },
   };

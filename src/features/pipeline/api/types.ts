@@ -19,6 +19,8 @@ export interface PipelineProposal {
   viewedAt: string | null;
   decidedAt: string | null;
   validUntil: string;
+  /** Deposits received (confirmed by the payment webhook, not refunded), cents. */
+  depositPaidCents: number;
 }
 
 export interface PipelineOverview {
@@ -27,4 +29,5 @@ export interface PipelineOverview {
   stages: { status: ProposalStatus; count: number; valueCents: number }[];
   proposals: PipelineProposal[];
   winRate: { accepted: number; declined: number; decided: number; expired: number; rate: number | null };
+  deposits: { receivedCents: number; count: number };
 }

@@ -50,6 +50,7 @@ function ProposalItem({ p }: { p: PipelineProposal }) {
           {p.ageDays} day{p.ageDays === 1 ? "" : "s"}
         </span>
       </p>
+      {p.depositPaidCents > 0 ? <p className="text-sm font-medium text-ok-800">Deposit received: {formatCents(p.depositPaidCents)}</p> : null}
       {p.decidedAt ? <p className="text-sm text-ink-600">Decided {formatDate(p.decidedAt)}</p> : p.sentAt ? <p className="text-sm text-ink-600">Sent {formatDate(p.sentAt)}</p> : null}
     </li>
   );
@@ -88,7 +89,7 @@ export function PipelinePage() {
         />
       ) : (
         <div className={cn("space-y-8", query.isPlaceholderData && "opacity-60")}>
-          <section aria-labelledby="summary-title" className="grid gap-4 sm:grid-cols-3">
+          <section aria-labelledby="summary-title" className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
             <h2 id="summary-title" className="sr-only">
               Summary
             </h2>
@@ -113,6 +114,13 @@ export function PipelinePage() {
               <p className="text-sm font-medium text-ink-600">Won in the period</p>
               <p className="text-3xl font-semibold text-ink-900 tabular-nums">{formatCents(query.data.stages.find((s) => s.status === "accepted")?.valueCents ?? 0)}</p>
               <p className="text-sm text-ink-700">Accepted option totals</p>
+            </div>
+            <div className="rounded-lg border border-ink-200 bg-white p-4 shadow-card">
+              <p className="text-sm font-medium text-ink-600">Deposits received</p>
+              <p className="text-3xl font-semibold text-ink-900 tabular-nums">{formatCents(query.data.deposits.receivedCents)}</p>
+              <p className="text-sm text-ink-700">
+                {query.data.deposits.count} proposal{query.data.deposits.count === 1 ? "" : "s"}, confirmed by the payment service
+              </p>
             </div>
           </section>
 
