@@ -341,6 +341,16 @@ describe("proposals: draft, render, send, the homeowner's link, acceptance", () 
     expect(await t.mailCount(team.sales.email)).toBe(1);
   });
 
+  it("when option 2 is accepted, then its materials list says released with the revision and option 1's does not", async () => {
+    const accepted = (await team.asSales.get(`/api/proposals/${proposalId}`).expect(200)).body.proposal;
+    const released = (await team.asEstimator.get(`/api/options/${optionIds[1]}/materials`).expect(200)).body;
+    expect(released.release).toMatchObject({ proposalId, revision: accepted.revision });
+    expect(new Date(released.release.releasedAt).toISOString()).toBe(new Date(accepted.decidedAt).toISOString());
+    expect(released.materials.items.length).toBeGreaterThan(0);
+    const other = (await team.asEstimator.get(`/api/options/${optionIds[0]}/materials`).expect(200)).body;
+    expect(other.release).toBeNull();
+  });
+
   it("when someone edits an accepted proposal, then it answers 409 and the record of events cannot be changed", async () => {
     const current = (await team.asSales.get(`/api/proposals/${proposalId}`)).body.proposal;
     const res = await send(team.asSales, "patch", `/api/proposals/${proposalId}`, { version: current.version, coverNote: "Changed after signing" });

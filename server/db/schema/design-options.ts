@@ -3,6 +3,7 @@ import { sql } from "drizzle-orm";
 import type { Adjustment, LaborLine, OptionSpace } from "../../../shared/schemas/options.ts";
 import { companies } from "./companies.ts";
 import { projects } from "./projects.ts";
+import { proposals } from "./proposals.ts";
 
 /**
  * One design option of a project: per attic space what to do with each surveyed vent and
@@ -27,6 +28,10 @@ export const designOptions = pgTable(
     origin: text().$type<"manual" | "generated">().notNull().default("manual"),
     /** The generator's explanation of its quantities, sentence by sentence. */
     rationale: jsonb().$type<string[]>().notNull().default([]),
+    /** When an accepted proposal released this option's materials list to the crew (null: not released). */
+    releasedAt: timestamp({ withTimezone: true, mode: "date" }),
+    /** The accepted proposal revision that released it. */
+    releasedByProposalId: uuid().references(() => proposals.id, { onDelete: "set null" }),
     /** Optimistic concurrency, as for projects: a save names the version it was based on. */
     version: integer().notNull().default(1),
     createdAt: timestamp({ withTimezone: true, mode: "date" }).notNull().defaultNow(),

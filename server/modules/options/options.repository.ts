@@ -1,6 +1,6 @@
-import { asc, eq, sql } from "drizzle-orm";
+import { and, asc, eq, sql } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
-import { companies, designOptions } from "../../db/schema/index.ts";
+import { companies, designOptions, proposals } from "../../db/schema/index.ts";
 import { scoped } from "../../lib/tenant.ts";
 import type { Actor } from "../../lib/request-context.ts";
 import type { DesignOptionInput } from "../../../shared/schemas/options.ts";
@@ -35,6 +35,16 @@ export function createOptionsRepository(db: Database) {
     async find(actor: Actor, id: string) {
       const [row] = await db.select(optionColumns).from(designOptions).where(scoped(designOptions, actor, eq(designOptions.id, id))).limit(1);
       return row ?? null;
+    },
+
+    /** Whether an accepted proposal released this option's materials to the crew, and which revision. */
+    async release(actor: Actor, id: string) {
+      const [row] = await db
+        .select({ releasedAt: designOptions.releasedAt, proposalId: designOptions.releasedByProposalId, revision: proposals.revision })
+        .from(designOptions)
+        .leftJoin(proposals, and(eq(proposals.id, designOptions.releasedByProposalId), eq(proposals.companyId, designOptions.companyId)))
+        .where(scoped(designOptions, actor, eq(designOptions.id, id))).limit(1);
+      return row?.releasedAt && row.proposalId && row.revision !== null ? { releasedAt: row.releasedAt, proposalId: row.proposalId, revision: row.revision } : null;
     },
 
     /** Adds the option at the end of the project's list. */

@@ -80,6 +80,8 @@ export interface OptionMaterials {
   /** The spaces the option works in, to label the work lines' spaceId. */
   spaces: { id: string; name: string }[];
   materials: MaterialsList;
+  /** Set when an accepted proposal released this list to the crew. */
+  release: { releasedAt: Date; proposalId: string; revision: number } | null;
 }
 export interface SkippedProposal {
   spaceId: string;
@@ -193,13 +195,14 @@ export function createOptionsService(deps: { repo: OptionsRepository; projects: 
     async materials(actor: Actor, id: string): Promise<OptionMaterials> {
       const option = await requireOption(actor, id);
       const project = await requireProject(actor, option.projectId);
-      const [spaces, catalog] = await Promise.all([deps.spaces.listForProject(actor, project.id), deps.catalog.all(actor)]);
+      const [spaces, catalog, release] = await Promise.all([deps.spaces.listForProject(actor, project.id), deps.catalog.all(actor), repo.release(actor, option.id)]);
       const surveyed = Object.fromEntries(spaces.map((space) => [space.id, surveyOf(space)]));
       return {
         option: { id: option.id, name: option.name, version: option.version, projectId: project.id },
         project: { id: project.id, title: project.title, siteAddress: project.siteAddress },
         spaces: spaces.filter((space) => option.spaces.some((s) => s.spaceId === space.id)).map((space) => ({ id: space.id, name: space.name })),
         materials: materialsList(option, catalog, surveyed),
+        release,
       };
     },
   };

@@ -8,7 +8,7 @@ import type { SpacesRepository } from "../spaces/spaces.repository.ts";
 import { processPhoto } from "./photo-processing.ts";
 import type { PhotoRow, PhotosRepository } from "./photos.repository.ts";
 
-const THUMB_CONTENT_TYPE = "image/webp";
+export const THUMB_CONTENT_TYPE = "image/webp";
 
 /** What clients see of a photo: never its storage keys. */
 export function photoView(row: PhotoRow) {

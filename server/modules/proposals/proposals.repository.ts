@@ -1,6 +1,6 @@
 import { and, asc, desc, eq, inArray, isNull, lte, sql } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
-import { companies, customers, photos, projects, proposalEvents, proposalMails, proposals, users } from "../../db/schema/index.ts";
+import { companies, customers, designOptions, photos, projects, proposalEvents, proposalMails, proposals, users } from "../../db/schema/index.ts";
 import { scoped } from "../../lib/tenant.ts";
 import type { ProposalStatus } from "../../../shared/proposals/types.ts";
 
@@ -57,6 +57,13 @@ export function createProposalsRepository(db: Database) {
         : db.select({ id: photos.id, caption: photos.caption, findingCode: photos.findingCode, storageKey: photos.storageKey, contentType: photos.contentType })
             .from(photos).where(scoped(photos, tenant, eq(photos.projectId, projectId), inArray(photos.id, ids))),
 
+    /** One photo's stored files, for the company only (the homeowner's link checks the snapshot first). */
+    async photoFiles(tenant: Tenant, id: string) {
+      const [row] = await db.select({ id: photos.id, storageKey: photos.storageKey, thumbKey: photos.thumbKey, contentType: photos.contentType })
+        .from(photos).where(scoped(photos, tenant, eq(photos.id, id))).limit(1);
+      return row ?? null;
+    },
+
     async find(tenant: Tenant, id: string): Promise<ProposalRow | null> {
       const [row] = await db.select().from(proposals).where(scoped(proposals, tenant, eq(proposals.id, id))).limit(1);
       return row ?? null;
@@ -91,6 +98,22 @@ export function createProposalsRepository(db: Database) {
         .where(scoped(proposals, tenant, eq(proposals.id, id), when)).returning();
       return row ?? null;
     },
+
+    /**
+     * The homeowner's acceptance, in one transaction: the proposal moves to accepted (only from sent or
+     * viewed, at the version read) and the accepted option's materials list is released to the crew.
+     */
+    acceptAndRelease: (tenant: Tenant, id: string, version: number, optionId: string, patch: ProposalWrite, now: Date) =>
+      db.transaction(async (tx) => {
+        const [row] = await tx.update(proposals)
+          .set({ ...patch, version: sql`${proposals.version} + 1`, updatedAt: now })
+          .where(scoped(proposals, tenant, eq(proposals.id, id), eq(proposals.version, version), inArray(proposals.status, ["sent", "viewed"])))
+          .returning();
+        if (!row) return null;
+        await tx.update(designOptions).set({ releasedAt: now, releasedByProposalId: id })
+          .where(scoped(designOptions, tenant, eq(designOptions.id, optionId)));
+        return row;
+      }),
 
     /** Only the first open of the link counts: the status moves from sent to viewed once. */
     async markViewed(tenant: Tenant, id: string, now: Date): Promise<ProposalRow | null> {

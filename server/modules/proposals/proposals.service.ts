@@ -17,6 +17,7 @@ import { buildSnapshot, sha256Hex, snapshotSha256 } from "./proposal-snapshot.ts
 import type { ProposalJobs } from "./proposal-jobs.ts";
 import type { CompanySettings, ProposalRow, ProposalsRepository, Tenant } from "./proposals.repository.ts";
 import { checkedSignaturePng } from "./signature-image.ts";
+import { THUMB_CONTENT_TYPE } from "../photos/photos.service.ts";
 
 const DEFAULT_VALID_DAYS = 30;
 const EDITABLE = ["draft"] as const;
@@ -313,6 +314,27 @@ export function createProposalsService(deps: {
       return publicView(p, p.snapshot!);
     },
 
+    /** The logo the link's snapshot references (the one frozen at sending); 404 when it has none. */
+    async publicLogo(token: string) {
+      const p = await this.byToken(token);
+      const logo = p.snapshot!.company.logo;
+      const object = logo ? await deps.storage.get(logo.storageKey) : null;
+      if (!logo || !object) throw notFound("The logo");
+      return { ...object, contentType: logo.contentType };
+    },
+
+    /** A photo the link's snapshot includes (or its thumbnail); any other id answers 404 as if unknown. */
+    async publicPhoto(token: string, photoId: string, isThumb: boolean) {
+      const p = await this.byToken(token);
+      const included = p.snapshot!.photos.find((ph) => ph.id === photoId);
+      if (!included) throw notFound("That photo");
+      const files = isThumb ? await repo.photoFiles(p, photoId) : null;
+      if (isThumb && !files) throw notFound("That photo");
+      const object = await deps.storage.get(files ? files.thumbKey : included.storageKey);
+      if (!object) throw notFound("That photo");
+      return { ...object, contentType: files ? THUMB_CONTENT_TYPE : included.contentType };
+    },
+
     async accept(token: string, input: AcceptInput, meta: RequestMeta) {
       const p = await this.byToken(token);
       if (p.status === "accepted") throw conflict("This proposal was already accepted.", "already-accepted");
@@ -333,7 +355,7 @@ export function createProposalsService(deps: {
         signature: { typed: input.signature.typed ?? null, pngStorageKey: pngKey, pngSha256 },
         consentTextVersion: input.consent.consentTextVersion, acceptedAt: now.toISOString(), ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId,
       };
-      const updated = await repo.updateIfVersion(p, p.id, p.version, { status: "accepted", acceptance, decidedAt: now, signedRenderStatus: "queued" }, ["sent", "viewed"]);
+      const updated = await repo.acceptAndRelease(p, p.id, p.version, input.optionId, { status: "accepted", acceptance, decidedAt: now, signedRenderStatus: "queued" }, now);
       if (!updated) throw conflict("This proposal changed meanwhile; please reload the page.", "stale-version");
       await repo.addEvent(p, p.id, {
         event: "accepted", at: now, ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId,

@@ -1,9 +1,10 @@
 import type { Request } from "express";
 import { pipeline } from "node:stream/promises";
 import { createHash } from "node:crypto";
+import type { Readable } from "node:stream";
 import rateLimit from "express-rate-limit";
 import { z } from "zod";
-import { parse } from "../../lib/validate.ts";
+import { IdParam, parse } from "../../lib/validate.ts";
 import { AppError } from "../../lib/errors.ts";
 import { metaOf } from "../../lib/request-context.ts";
 import { routesRouter } from "../../lib/routes.ts";
@@ -11,6 +12,21 @@ import { AcceptSchema, DeclineSchema, VerifyQuerySchema } from "../../../shared/
 import type { ProposalsService } from "./proposals.service.ts";
 import { sendPdf } from "./proposals.router.ts";
 import { receiveFile } from "./uploads.ts";
+
+const PhotoIdSchema = IdParam;
+const ImageQuerySchema = z.object({ thumb: z.enum(["1", "0", "true", "false"], { error: "thumb is 1 or 0." }).optional() });
+
+/** The homeowner's images: inline, kept by this browser only, never by shared caches. */
+async function sendImage(res: import("express").Response, file: { body: Readable; contentType: string; sizeBytes: number | null }) {
+  res.set({
+    "Content-Type": file.contentType,
+    "Cache-Control": "private, max-age=3600",
+    "Content-Disposition": "inline",
+    "X-Content-Type-Options": "nosniff",
+    ...(file.sizeBytes !== null ? { "Content-Length": String(file.sizeBytes) } : {}),
+  });
+  await pipeline(file.body, res);
+}
 
 const TokenSchema = z.string().regex(/^[A-Za-z0-9_-]{20,100}$/);
 /** A malformed token can match nothing, so it answers exactly as an unknown one. */
@@ -54,6 +70,21 @@ export function publicProposalsRouter(service: ProposalsService) {
         const file = await service.pdf(p, p, "latest");
         sendPdf(req, res, file);
         await pipeline(file.object.body, res);
+      },
+    },
+    {
+      method: "get", path: "/public/proposals/:token/logo", access: "public",
+      handler: async (req, res) => { await sendImage(res, await service.publicLogo(tokenOf(req))); },
+    },
+    {
+      method: "get", path: "/public/proposals/:token/photos/:photoId", access: "public",
+      handler: async (req, res) => {
+        const token = tokenOf(req);
+        const { thumb } = parse(ImageQuerySchema, req.query);
+        const id = PhotoIdSchema.safeParse(req.params.photoId);
+        // A malformed id can be in no snapshot; the token is still checked first (404/410 as usual).
+        const file = await service.publicPhoto(token, id.success ? id.data : "", thumb === "1" || thumb === "true");
+        await sendImage(res, file);
       },
     },
     {

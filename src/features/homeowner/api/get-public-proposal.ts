@@ -6,4 +6,7 @@ export function getPublicProposal(token: string, signal?: AbortSignal): Promise<
   return apiClient.get<PublicProposal>(`/public/proposals/${encodeURIComponent(token)}`, { signal });
 }
 
+export const publicLogoSrc = (token: string) => `/api/public/proposals/${encodeURIComponent(token)}/logo`;
+export const publicPhotoHref = (token: string, photoId: string, isThumb = false) =>
+  `/api/public/proposals/${encodeURIComponent(token)}/photos/${encodeURIComponent(photoId)}${isThumb ? "?thumb=1" : ""}`;
 export const publicPdfHref = (token: string) => `/api/public/proposals/${encodeURIComponent(token)}/pdf`;

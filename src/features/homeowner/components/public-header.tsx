@@ -1,5 +1,5 @@
 /** The homeowner page's own plain header: the company, not Eavesight. */
-export function PublicHeader({ companyName, phone }: { companyName: string | null; phone?: string | null }) {
+export function PublicHeader({ companyName, phone, logoSrc }: { companyName: string | null; phone?: string | null; logoSrc?: string | null }) {
   const initials = (companyName ?? "")
     .split(/\s+/)
     .filter(Boolean)
@@ -10,7 +10,10 @@ export function PublicHeader({ companyName, phone }: { companyName: string | nul
     <header className="border-b border-ink-200 bg-white">
       <div className="mx-auto flex max-w-3xl items-center justify-between gap-3 px-4 py-3 sm:px-6">
         <div className="flex min-w-0 items-center gap-3">
-          {companyName ? (
+          {companyName && logoSrc ? (
+            // The name is written beside it, so the logo itself is decorative.
+            <img src={logoSrc} alt="" className="h-10 w-auto max-w-40 shrink-0 object-contain" />
+          ) : companyName ? (
             <span aria-hidden="true" className="flex size-10 shrink-0 items-center justify-center rounded-md bg-ink-900 text-base font-semibold text-white">
               {initials}
             </span>

@@ -8,7 +8,7 @@ import { OkIcon } from "@/components/ui/icons";
 import { LoadingBlock } from "@/components/ui/spinner";
 import { isApiError } from "@/lib/api-client";
 import { formatDate, formatDateTime } from "@/lib/format-date";
-import { publicPdfHref } from "../api/get-public-proposal";
+import { publicLogoSrc, publicPdfHref } from "../api/get-public-proposal";
 import { homeownerQueries } from "../api/queries";
 import type { PublicProposal } from "../api/types";
 import { AcceptForm } from "../components/accept-form";
@@ -16,6 +16,7 @@ import { DeclineForm } from "../components/decline-form";
 import type { DepositSlotProps } from "../components/deposit-slot";
 import { LinkProblem, type LinkProblemKind } from "../components/link-problem";
 import { OptionCard } from "../components/option-card";
+import { PhotoGallery } from "../components/photo-gallery";
 import { PublicHeader } from "../components/public-header";
 import { nfaSentences, providedSentence } from "../lib/nfa-words";
 
@@ -120,7 +121,7 @@ export function HomeownerPage({ token, renderDeposit }: { token: string; renderD
   return (
     <div className="min-h-dvh bg-ink-25">
       <title>{`Your proposal from ${view.company.name}`}</title>
-      <PublicHeader companyName={view.company.name} phone={view.company.phone} />
+      <PublicHeader companyName={view.company.name} phone={view.company.phone} logoSrc={view.company.hasLogo ? publicLogoSrc(token) : null} />
       <main className="mx-auto max-w-3xl space-y-10 px-4 py-8 sm:px-6 sm:py-10">
         <div className="space-y-3">
           <p className="text-base font-medium text-ink-600">
@@ -171,6 +172,13 @@ export function HomeownerPage({ token, renderDeposit }: { token: string; renderD
             </ul>
           ) : null}
         </Section>
+
+        {view.photos.length > 0 ? (
+          <Section id="photos-title" title={view.photos.length === 1 ? "A photo from the survey" : "Photos from the survey"}>
+            <p className="text-base text-ink-700">Tap a photo to see it full size.</p>
+            <PhotoGallery token={token} photos={view.photos} />
+          </Section>
+        ) : null}
 
         {view.before.map((space) => (
           <Section key={space.spaceId} id={`today-${space.spaceId}`} title={view.before.length > 1 ? `${space.name} today` : "How air moves through your attic today"}>

@@ -54,6 +54,8 @@ export interface OptionMaterials {
   project: { id: string; title: string; siteAddress: string };
   spaces: { id: string; name: string }[];
   materials: MaterialsList;
+  /** Set once an accepted proposal released this list to the crew (ISO time). */
+  release: { releasedAt: string; proposalId: string; revision: number } | null;
 }
 
 /** The project fields the options workspace needs, from GET /api/projects/:id. */

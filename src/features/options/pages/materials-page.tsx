@@ -3,9 +3,11 @@ import { Link } from "react-router";
 import { formatNumber } from "@shared/units/format";
 import { Button } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/empty-state";
-import { ChevronLeftIcon, ClipboardIcon, WarningIcon } from "@/components/ui/icons";
+import { ChevronLeftIcon, ClipboardIcon, OkIcon, WarningIcon } from "@/components/ui/icons";
 import { LoadingBlock } from "@/components/ui/spinner";
 import { paths } from "@/config/paths";
+import { formatDate } from "@/lib/format-date";
+import type { OptionMaterials } from "../api/types";
 import { optionQueries } from "../api/queries";
 
 /*
@@ -24,12 +26,32 @@ const PRINT_CSS = `
   #materials-sheet tr, #materials-sheet li { break-inside: avoid; }
 }`;
 
+/** Whether the crew may work from this list: printed with it, so a paper copy says so too. */
+function ReleaseBanner({ release }: { release: OptionMaterials["release"] }) {
+  if (release) {
+    return (
+      <p data-release="released" className="flex items-start gap-2 rounded-md border-2 border-ok-600 bg-ok-50 px-3 py-2 text-base font-semibold text-ok-900">
+        <OkIcon className="mt-0.5 size-5 shrink-0 text-ok-600" />
+        <span>
+          Released to the crew on {formatDate(release.releasedAt)} (accepted proposal rev. {release.revision})
+        </span>
+      </p>
+    );
+  }
+  return (
+    <p data-release="not-released" className="flex items-start gap-2 rounded-md border-2 border-dashed border-ink-500 bg-ink-50 px-3 py-2 text-base font-semibold text-ink-900">
+      <WarningIcon className="mt-0.5 size-5 shrink-0 text-ink-600" />
+      <span>Not released — this option has not been accepted</span>
+    </p>
+  );
+}
+
 /** The crew's list for one option: what to buy (rounded to how it's sold) and the work to do. */
 export function MaterialsPage({ projectId, optionId }: { projectId: string; optionId: string }) {
   const query = useQuery(optionQueries.materials(optionId));
   if (query.isPending) return <LoadingBlock label="Working out the materials…" />;
   if (query.isError) return <EmptyState icon={<ClipboardIcon />} title="Couldn't load the materials list" description={query.error.message} />;
-  const { option, project, spaces, materials } = query.data;
+  const { option, project, spaces, materials, release } = query.data;
   const spaceName = (id: string | null) => (id ? (spaces.find((s) => s.id === id)?.name ?? null) : null);
 
   return (
@@ -50,6 +72,7 @@ export function MaterialsPage({ projectId, optionId }: { projectId: string; opti
         </p>
         <p className="text-sm text-ink-700">Option version {option.version}. Quantities are rounded up to what is bought.</p>
       </header>
+      <ReleaseBanner release={release} />
 
       <section aria-labelledby="buy-title" className="space-y-2">
         <h2 id="buy-title" className="text-lg font-semibold">

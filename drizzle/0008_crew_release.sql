@@ -1,0 +1,3 @@
+ALTER TABLE "design_options" ADD COLUMN "released_at" timestamp with time zone;--> statement-breakpoint
+ALTER TABLE "design_options" ADD COLUMN "released_by_proposal_id" uuid;--> statement-breakpoint
+ALTER TABLE "design_options" ADD CONSTRAINT "design_options_released_by_proposal_id_proposals_id_fk" FOREIGN KEY ("released_by_proposal_id") REFERENCES "public"."proposals"("id") ON DELETE set null ON UPDATE no action;
