@@ -1,42 +1,11 @@
 import { PROPOSAL_STATUSES, type ProposalStatus } from "../../../shared/proposals/types.ts";
+import { PIPELINE_PERIODS_DAYS, type PipelineOverview, type PipelinePeriodDays, type PipelineProposal } from "../../../shared/schemas/pipeline.ts";
 import type { Actor } from "../../lib/request-context.ts";
 import type { PipelineRepository, PipelineRow } from "./pipeline.repository.ts";
 
 const DAY_MS = 86_400_000;
-export const PIPELINE_PERIODS_DAYS = [30, 90, 365] as const;
-export type PipelinePeriodDays = (typeof PIPELINE_PERIODS_DAYS)[number];
-
-export interface PipelineProposal {
-  id: string;
-  projectId: string;
-  projectTitle: string;
-  customerName: string | null;
-  revision: number;
-  status: ProposalStatus;
-  /** The accepted option's total, else the largest option total; null when nothing is priced yet. */
-  valueCents: number | null;
-  valueBasis: "accepted" | "largest" | null;
-  /** Whole days from sending (drafts: from creation) to the decision, or to now while open. */
-  ageDays: number;
-  createdAt: string;
-  sentAt: string | null;
-  viewedAt: string | null;
-  decidedAt: string | null;
-  validUntil: string;
-  /** Deposits received (confirmed by the payment webhook, not refunded), cents. */
-  depositPaidCents: number;
-}
-
-export interface PipelineOverview {
-  periodDays: PipelinePeriodDays;
-  generatedAt: string;
-  stages: { status: ProposalStatus; count: number; valueCents: number }[];
-  proposals: PipelineProposal[];
-  /** Accepted ÷ decided (accepted + declined) among decisions in the period; null with no decisions. */
-  winRate: { accepted: number; declined: number; decided: number; expired: number; rate: number | null };
-  deposits: { receivedCents: number; count: number };
-}
-
+export { PIPELINE_PERIODS_DAYS };
+export type { PipelineOverview, PipelinePeriodDays, PipelineProposal };
 /** When a proposal left the open pipeline, for the period filter: its decision, or its link's lapse. */
 function closedAt(row: PipelineRow): Date | null {
   if (row.status === "accepted" || row.status === "declined") return row.decidedAt;

@@ -22,7 +22,7 @@ import { updateOption } from "../api/update-option";
 import { ComplianceBadge, ComplianceReasons, FindingCounts, FindingsList, NotAnalysed, VentAreaFigures } from "../components/analysis-summary";
 import { AirflowView } from "../components/airflow-view";
 import { PriceSummary } from "../components/price-summary";
-import { SaveStatus } from "../components/save-status";
+import { SaveStatus } from "@/components/ui/save-status";
 import { SpacePlanEditor } from "../components/space-plan-editor";
 import { TermsEditor } from "../components/terms-editor";
 import { fingerprint, useAutosave } from "@/lib/use-autosave";
@@ -142,7 +142,7 @@ function Editor({ projectId, optionId, unitSystem, canEdit, detail, option, cata
       />
       {canEdit ? (
         <div className="-mt-3 mb-4">
-          <SaveStatus state={autosave.state} onRetry={autosave.saveNow} onResolve={openConflict} />
+          <SaveStatus state={autosave.state} thing="option" onRetry={autosave.saveNow} onResolve={openConflict} />
         </div>
       ) : (
         <Alert severity="info" className="mb-4">

@@ -12,7 +12,7 @@ import type { ProjectAnalysis, ProjectOption, ProjectSummary, ProposalRecord, Pr
 import { updateProposal } from "../api/update-proposal";
 import { fingerprint, useAutosave, type SaveState } from "@/lib/use-autosave";
 import { depositFor, depositToRule, ruleToDraft, type DepositDraft } from "../lib/deposit";
-import { SaveStatus } from "./save-status";
+import { SaveStatus } from "@/components/ui/save-status";
 
 interface Draft {
   coverNote: string;
@@ -125,7 +125,7 @@ export function DraftEditor({ proposal, project, options, analysis, onSaved, ren
     <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_24rem] lg:items-start">
     <div className="min-w-0 space-y-6">
       <div className="sticky top-14 z-10 rounded-lg border border-ink-200 bg-white/95 px-4 shadow-card backdrop-blur-sm md:top-16">
-        <SaveStatus state={state} onRetry={autosave.saveNow} onResolve={() => setIsConflictOpen(true)} />
+        <SaveStatus state={state} thing="proposal" onRetry={autosave.saveNow} onResolve={() => setIsConflictOpen(true)} />
       </div>
 
       <Card aria-labelledby="pb-options-title">

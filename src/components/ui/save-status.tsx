@@ -4,8 +4,11 @@ import { Spinner } from "@/components/ui/spinner";
 import { cn } from "@/lib/cn";
 import type { SaveState } from "@/lib/use-autosave";
 
-/** "Saved · Saving… · Not saved: <reason>", in words and icon, announced politely. */
-export function SaveStatus({ state, onRetry, onResolve }: { state: SaveState; onRetry: () => void; onResolve: () => void }) {
+/**
+ * "Saved · Saving… · Not saved: <reason>", in words and icon, announced politely; shared by the
+ * editors that autosave with versions (`thing` names what was edited, e.g. "option", "proposal").
+ */
+export function SaveStatus({ state, thing, onRetry, onResolve }: { state: SaveState; thing: string; onRetry: () => void; onResolve: () => void }) {
   let icon = <OkIcon className="text-ok-600" />;
   let text = "All changes saved";
   let tone = "text-ink-800";
@@ -26,7 +29,7 @@ export function SaveStatus({ state, onRetry, onResolve }: { state: SaveState; on
     tone = "text-critical-800";
   } else if (state.kind === "conflict") {
     icon = <CriticalIcon className="text-critical-600" />;
-    text = "Not saved: someone else saved this option meanwhile. Choose whose changes to keep.";
+    text = `Not saved: someone else saved this ${thing} meanwhile. Choose whose changes to keep.`;
     tone = "text-critical-800";
   }
   return (
