@@ -20,6 +20,11 @@ const server = app.listen(env.PORT, env.HOST, () => {
   process.send?.({ ready: true });
 });
 
+// pg-boss's background loops can reject while the database is briefly down (e.g. marking a job
+// failed); on Node 20 an unhandled rejection would end the process. Log it and carry on: the
+// loops retry, and requests answer 503 until the database is back.
+process.on("unhandledRejection", (err) => logger.error({ err }, "unhandled rejection"));
+
 let stopping = false;
 async function shutdown(signal: string) {
   if (stopping) return;

@@ -62,6 +62,25 @@ export const ListQuerySchema = z.object({
   pageSize: z.coerce.number().int().min(1).max(100).default(25),
 });
 
+/** A project as the API answers it (GET/POST/PATCH /api/projects…); dates are ISO strings. */
+export interface ProjectRecord {
+  id: string;
+  customerId: string;
+  title: string;
+  siteAddress: string;
+  status: ProjectStatus;
+  estimatorId: string | null;
+  climateZone: number;
+  moistureRegime: "A" | "B" | "C" | null;
+  codeBasis: z.infer<typeof CodeBasisSchema>;
+  ceilingVaporRetarder: z.infer<typeof VaporRetarderSchema>;
+  roofColor: z.infer<typeof RoofColorSchema>;
+  notes: string | null;
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
 export type CustomerInput = z.infer<typeof CustomerInputSchema>;
 export type ProjectInput = z.infer<typeof ProjectInputSchema>;
 export type ProjectPatch = z.infer<typeof ProjectPatchSchema>;

@@ -4,7 +4,8 @@ import { ORIGIN, startTestApp, type TestApp } from "../setup/test-app.ts";
 
 let t: TestApp;
 beforeAll(async () => {
-  t = await startTestApp();
+  // No workers: jobs queued by other test files must not be mid-run when the database stops.
+  t = await startTestApp({ runWorkers: false });
 });
 afterAll(async () => {
   startCluster(testCluster()); // never leave the suite without its database

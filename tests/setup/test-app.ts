@@ -22,7 +22,11 @@ export const TEST_PASSWORD = "correct horse battery";
  * The real app on the real test database, with a clock the test can move. Files go to a
  * throwaway folder of this test file unless `envOverrides` names other storage.
  */
-export async function startTestApp(opts: { envOverrides?: Record<string, string> } = {}) {
+/**
+ * `runWorkers: false` leaves background jobs (mail, PDF) to other processes, e.g. for a test
+ * that stops the database, where another file's queued job must not be half-run.
+ */
+export async function startTestApp(opts: { envOverrides?: Record<string, string>; runWorkers?: boolean } = {}) {
   const databaseUrl = testDatabaseUrl();
   const storageDir = mkdtempSync(path.join(tmpdir(), "eavesight-files-"));
   const env = parseEnv({
@@ -32,7 +36,7 @@ export async function startTestApp(opts: { envOverrides?: Record<string, string>
   const logger = createLogger("silent");
   const { db, sql } = createDb(databaseUrl, { max: 5 });
   const mailer = createMailer({ host: "127.0.0.1", port: testSmtpPort(), from: "Eavesight <no-reply@eavesight.example>" });
-  const jobs = await startJobs({ databaseUrl, logger, mailer });
+  const jobs = await startJobs({ databaseUrl, logger, mailer, runWorkers: opts.runWorkers });
   const clock = { offsetMs: 0 };
   const now = () => new Date(Date.now() + clock.offsetMs);
   const app = createApp({ env, db, logger, jobs, now });

@@ -19,7 +19,8 @@ import { getOption } from "../api/get-option";
 import { optionKeys, optionQueries } from "../api/queries";
 import type { CatalogRecord, OptionRecord, ProjectDetail } from "../api/types";
 import { updateOption } from "../api/update-option";
-import { ComplianceBadge, ComplianceReasons, FindingCounts, FindingsList, NotAnalysed, VentAreaFigures } from "../components/analysis-summary";
+import { FindingsList } from "@/components/findings/findings-list";
+import { ComplianceBadge, ComplianceReasons, FindingCounts, NotAnalysed, VentAreaFigures } from "../components/analysis-summary";
 import { AirflowView } from "../components/airflow-view";
 import { PriceSummary } from "../components/price-summary";
 import { SaveStatus } from "@/components/ui/save-status";
@@ -241,7 +242,7 @@ function Editor({ projectId, optionId, unitSystem, canEdit, detail, option, cata
                       <details className="rounded-md border border-ink-200 bg-white px-3 py-1">
                         <summary className="min-h-touch cursor-pointer py-2.5 font-medium text-ink-900 md:min-h-0 md:py-2">Each finding</summary>
                         <div className="pt-1 pb-3">
-                          <FindingsList findings={s.after.result.analysis.findings} />
+                          <FindingsList findings={s.after.result.analysis.findings} emptyText="Nothing to flag in this space after the work." />
                         </div>
                       </details>
                     </div>

@@ -1,5 +1,4 @@
-import type { ProjectPatch, ProjectStatus } from "@shared/schemas/projects";
-import type { CodeBasis, RoofColor, VaporRetarder } from "@shared/ventilation/index";
+import type { ProjectPatch, ProjectRecord, ProjectStatus } from "@shared/schemas/projects";
 
 export type ProjectSort = "updatedAt" | "createdAt" | "title" | "customerName" | "status";
 
@@ -32,24 +31,8 @@ export interface ProjectPage {
   pageSize: number;
 }
 
-/** A project as POST/PATCH /api/projects answer it. */
-export interface Project {
-  id: string;
-  customerId: string;
-  title: string;
-  siteAddress: string;
-  status: ProjectStatus;
-  estimatorId: string | null;
-  climateZone: number;
-  moistureRegime: "A" | "B" | "C" | null;
-  codeBasis: CodeBasis;
-  ceilingVaporRetarder: VaporRetarder;
-  roofColor: RoofColor;
-  notes: string | null;
-  version: number;
-  createdAt: string;
-  updatedAt: string;
-}
+/** A project as the API answers it: the contract lives in shared/schemas/projects.ts. */
+export type Project = ProjectRecord;
 
 /** A member of the team, for the estimator pickers. */
 export interface TeamMember {

@@ -1,25 +1,9 @@
-import type { ProjectStatus } from "@shared/schemas/projects";
+import type { ProjectRecord } from "@shared/schemas/projects";
 import type { SpaceRoof, SiteChecklist } from "@shared/schemas/survey";
-import type { CodeBasis, RoofColor, Section, VaporRetarder, Vent } from "@shared/ventilation/index";
+import type { Section, Vent } from "@shared/ventilation/index";
 
-/** The project row as GET/PATCH /api/projects/:id answer it. Dates are ISO strings. */
-export interface ProjectRecord {
-  id: string;
-  customerId: string;
-  title: string;
-  siteAddress: string;
-  status: ProjectStatus;
-  estimatorId: string | null;
-  climateZone: number;
-  moistureRegime: "A" | "B" | "C" | null;
-  codeBasis: CodeBasis;
-  ceilingVaporRetarder: VaporRetarder;
-  roofColor: RoofColor;
-  notes: string | null;
-  version: number;
-  createdAt: string;
-  updatedAt: string;
-}
+/** A project as the API answers it: the contract lives in shared/schemas/projects.ts. */
+export type { ProjectRecord };
 
 /** One attic space as stored. */
 export interface SpaceRecord {

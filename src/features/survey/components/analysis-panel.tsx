@@ -1,3 +1,4 @@
+import { FindingsList } from "@/components/findings/findings-list";
 import type { UnitSystem } from "@shared/units/format";
 import { formatAirflowCfm, formatAreaSqFt, formatNfaSqIn } from "@shared/units/format";
 import { sortFindings, type AtticInput, type TryAnalyzeResult } from "@shared/ventilation/index";
@@ -160,28 +161,7 @@ export function AnalysisPanel({ spaceName, input, result, problems, unitSystem, 
         <h3 id="findings-title" className="text-lg font-semibold text-ink-900">
           Findings <span className="font-normal text-ink-600">({findings.length})</span>
         </h3>
-        {findings.length === 0 ? <p className="text-base text-ink-700">Nothing to flag in this space.</p> : null}
-        <ol className="space-y-3">
-          {findings.map((f, i) => {
-            // The core appends the caution to the detail; it is shown once, in its own box.
-            const detail = f.caution ? f.detail.replace(f.caution, "").replace(/\s{2,}/g, " ").trim() : f.detail;
-            return (
-              <li key={`${f.code}-${i}`} data-finding={f.code} className="space-y-2 rounded-lg border border-ink-200 bg-white p-4">
-                <div className="flex flex-wrap items-center gap-2">
-                  <SeverityBadge severity={f.severity} />
-                  <h4 className="text-base font-semibold text-ink-900">{f.title}</h4>
-                </div>
-                <p className="text-base text-ink-800">{detail}</p>
-                {f.caution ? (
-                  <p className="flex gap-2 rounded-md bg-warning-50 px-3 py-2 text-sm text-warning-900">
-                    <WarningIcon className="mt-0.5 size-4 shrink-0 text-warning-600" />
-                    <span>{f.caution}</span>
-                  </p>
-                ) : null}
-              </li>
-            );
-          })}
-        </ol>
+        <FindingsList findings={findings} emptyText="Nothing to flag in this space." />
       </section>
 
       <AirflowSection input={input} analysis={a} spaceName={spaceName} />
