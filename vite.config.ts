@@ -54,6 +54,18 @@ export default defineConfig({
           hookTimeout: 120_000,
         },
       },
+      {
+        resolve: { alias },
+        test: {
+          // Faults on purpose: servers killed, PostgreSQL stopped under load. One file at a time.
+          name: "stress",
+          include: ["tests/stress/**/*.test.ts"],
+          environment: "node",
+          fileParallelism: false,
+          testTimeout: 120_000,
+          hookTimeout: 120_000,
+        },
+      },
     ],
   },
 });

@@ -4,7 +4,7 @@
 // node_modules when they are missing or older than package-lock.json, then hands over
 // to the TypeScript task in scripts/tasks/<name>.ts.
 import { spawnSync, spawn } from "node:child_process";
-import { existsSync, statSync } from "node:fs";
+import { existsSync, readdirSync, statSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import path from "node:path";
 
@@ -17,7 +17,10 @@ if (!task) {
 
 const marker = path.join(root, "node_modules", ".package-lock.json");
 const lock = path.join(root, "package-lock.json");
-const needsInstall = !existsSync(marker) || statSync(marker).mtimeMs < statSync(lock).mtimeMs;
+// A patch of a dependency (scripts/patches, applied by patch-package at install) counts as a change too.
+const patchDir = path.join(root, "scripts", "patches");
+const newestInput = Math.max(statSync(lock).mtimeMs, ...(existsSync(patchDir) ? readdirSync(patchDir).map((f) => statSync(path.join(patchDir, f)).mtimeMs) : []));
+const needsInstall = !existsSync(marker) || statSync(marker).mtimeMs < newestInput;
 if (needsInstall) {
   console.log("[eavesight] installing dependencies (npm ci)…");
   const r = spawnSync("npm", ["ci", "--no-audit", "--no-fund"], { cwd: root, stdio: "inherit" });

@@ -133,7 +133,7 @@ export function createApp(deps: AppDeps): Express {
   const optionsService = createOptionsService({ repo: createOptionsRepository(db), projects: projectsRepo, spaces: spacesRepo, catalog: catalogRepo });
 
   const proposalsRepo = createProposalsRepository(db);
-  const proposalJobs = createProposalJobs({ jobs: deps.jobs, repo: proposalsRepo, storage, logger, now, appOrigin: () => appOrigin() });
+  const proposalJobs = createProposalJobs({ jobs: deps.jobs, repo: proposalsRepo, storage, logger, now, appOrigin: () => appOrigin(), recoveryAfterMs: env.JOBS_RECOVERY_SECONDS * 1_000 });
   const proposalsService = createProposalsService({
     repo: proposalsRepo, projects: projectsRepo, spaces: spacesRepo, options: createOptionsRepository(db), catalog: catalogRepo,
     storage, jobs: proposalJobs, now, appOrigin: () => appOrigin(),

@@ -21,6 +21,12 @@ const EnvSchema = z.object({
   S3_SECRET_ACCESS_KEY: z.string().optional(),
   SERVE_CLIENT: z.enum(["true", "false"]).default("true"),
   /**
+   * How long background work may look stalled before another server takes it over: an unsent
+   * outbox e-mail, a PDF render whose server died. Also the e-mail lease, so it must stay above
+   * the mailer's worst case (about 50 s). Tests shorten it to watch a recovery happen.
+   */
+  JOBS_RECOVERY_SECONDS: z.coerce.number().int().min(2).max(3_600).default(90),
+  /**
    * Where the payment provider's API is, e.g. http://127.0.0.1:4243 for the local fake
    * (scripts/lib/fake-payments.ts); unset means the provider's real API.
    */

@@ -1,7 +1,8 @@
 /**
  * `npm test`: the whole suite as CI runs it. Bootstraps a throwaway PostgreSQL cluster and
  * database, the fake SMTP server and (for the browser tests) the built app, then runs
- * type-check, lint, unit + API tests, and end-to-end tests in Debian's Chromium.
+ * type-check, lint, unit + API tests, end-to-end tests in Debian's Chromium, and the stress
+ * tests (faults on purpose).
  * Every step runs even if an earlier one failed; the last line sums them up.
  * `npm test -- --only unit,api` runs a subset.
  */
@@ -99,6 +100,9 @@ try {
       await payments.close();
     }
   }
+  // Last, because it stops the shared test cluster on purpose: servers killed mid-send,
+  // PostgreSQL restarted under load. `npm run test:stress` runs this step alone.
+  if (wants("stress")) await vitest("stress", ["stress"], env);
 } finally {
   await smtp.close();
   dropDatabase(testCluster(), database);

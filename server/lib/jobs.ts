@@ -6,6 +6,8 @@ export const QUEUES = { email: "email-send" } as const;
 
 export interface Jobs {
   sendEmail(mail: OutgoingEmail, opts?: { singletonKey?: string }): Promise<void>;
+  /** Hands a message to the SMTP relay now; for workers that keep their own outbox (proposal e-mails). */
+  deliverNow(mail: OutgoingEmail): Promise<string>;
   boss: PgBoss;
   /** Whether this process runs workers; modules that add queues register theirs only then. */
   runsWorkers: boolean;
@@ -42,6 +44,7 @@ export async function startJobs(opts: { databaseUrl: string; logger: Logger; mai
         ...(o.singletonKey ? { singletonKey: o.singletonKey } : {}),
       });
     },
+    deliverNow: (mail) => opts.mailer.send(mail),
     async stop() {
       await boss.stop({ graceful: true, timeout: 5_000 });
     },

@@ -17,7 +17,11 @@ export function createMailer(opts: { host: string; port: number; from: string })
     secure: false,
     // The local fake speaks plain SMTP on loopback; a real relay is configured by env.
     ignoreTLS: opts.host === "127.0.0.1" || opts.host === "localhost",
-    connectionTimeout: 5_000,
+    // Bounded, so one attempt always ends well inside the outbox lease (JOBS_RECOVERY_SECONDS,
+    // 90 s by default) and a hung relay can never lead a second worker to send the same message.
+    connectionTimeout: 10_000,
+    greetingTimeout: 10_000,
+    socketTimeout: 30_000,
   });
   return {
     async send(mail: OutgoingEmail): Promise<string> {

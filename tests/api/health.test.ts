@@ -1,15 +1,18 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { startCluster, stopCluster, testCluster } from "../../scripts/lib/postgres.ts";
+import { startOwnCluster, type OwnCluster } from "../setup/own-cluster.ts";
 import { ORIGIN, startTestApp, type TestApp } from "../setup/test-app.ts";
 
+// A cluster of this file's own: stopping it leaves the suite's database (and other runs) alone.
+let db: OwnCluster;
 let t: TestApp;
 beforeAll(async () => {
-  // No workers: jobs queued by other test files must not be mid-run when the database stops.
-  t = await startTestApp({ runWorkers: false });
+  db = await startOwnCluster("health");
+  t = await startTestApp({ databaseUrl: db.databaseUrl });
 });
 afterAll(async () => {
-  startCluster(testCluster()); // never leave the suite without its database
+  db?.start();
   await t?.close();
+  db?.destroy();
 });
 
 async function pollStatus(path: string, want: number, timeoutMs = 20_000): Promise<number> {
@@ -29,14 +32,14 @@ describe("GET /api/health", () => {
     expect(ok.status).toBe(200);
     expect(ok.body).toEqual({ status: "ok", database: "reachable" });
 
-    stopCluster(testCluster());
+    db.stop("fast");
     try {
       expect(await pollStatus("/api/health", 503)).toBe(503);
       const signIn = await t.request().post("/api/auth/sign-in").set("origin", ORIGIN).send({ email: "someone@test.example", password: "whatever it is" });
       expect(signIn.status).toBe(503);
       expect(signIn.body.error.message).toMatch(/briefly unavailable/);
     } finally {
-      startCluster(testCluster());
+      db.start();
     }
     expect(await pollStatus("/api/health", 200)).toBe(200);
   });

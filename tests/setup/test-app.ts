@@ -26,8 +26,8 @@ export const TEST_PASSWORD = "correct horse battery";
  * `runWorkers: false` leaves background jobs (mail, PDF) to other processes, e.g. for a test
  * that stops the database, where another file's queued job must not be half-run.
  */
-export async function startTestApp(opts: { envOverrides?: Record<string, string>; runWorkers?: boolean } = {}) {
-  const databaseUrl = testDatabaseUrl();
+export async function startTestApp(opts: { envOverrides?: Record<string, string>; runWorkers?: boolean; databaseUrl?: string } = {}) {
+  const databaseUrl = opts.databaseUrl ?? testDatabaseUrl();
   const storageDir = mkdtempSync(path.join(tmpdir(), "eavesight-files-"));
   const env = parseEnv({
     ...process.env, DATABASE_URL: databaseUrl, APP_ORIGIN: ORIGIN, LOG_LEVEL: "silent", SERVE_CLIENT: "false",

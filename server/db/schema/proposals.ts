@@ -5,6 +5,7 @@ import { PROPOSAL_STATUSES, RENDER_STATUSES } from "../../../shared/proposals/ty
 import { companies } from "./companies.ts";
 import { projects } from "./projects.ts";
 import { users } from "./users.ts";
+import type { OutgoingEmail } from "../../lib/mailer.ts";
 
 export const proposalStatusEnum = pgEnum("proposal_status", PROPOSAL_STATUSES);
 export const renderStatusEnum = pgEnum("render_status", RENDER_STATUSES);
@@ -49,6 +50,7 @@ export const proposals = pgTable(
     signedPdfKey: text(),
     signedPdfSha256: text(),
     signedRenderStatus: renderStatusEnum().notNull().default("none"),
+    signedRenderUpdatedAt: timestamp({ withTimezone: true, mode: "date" }),
     signedRenderError: text(),
     acceptance: jsonb().$type<ProposalAcceptance>(),
     declineReason: text(),
@@ -101,8 +103,10 @@ export const proposalEvents = pgTable(
 );
 
 /**
- * One row per e-mail a proposal should cause (e.g. "send:<proposal id>"), claimed before the
- * mail is queued, so a retried job or a second click never mails twice.
+ * The outbox of a proposal's e-mails: one row per e-mail it should cause (e.g. "send:<proposal id>"),
+ * holding the message itself. The row is the truth, the queued job only a nudge: a worker takes a
+ * lease on the row, sends, and marks it delivered, so a retried job, a second click or a server
+ * killed mid-send never mails twice, and the recovery sweep re-queues rows whose job was lost.
  */
 export const proposalMails = pgTable("proposal_mails", {
   dedupeKey: text().primaryKey(),
@@ -110,5 +114,10 @@ export const proposalMails = pgTable("proposal_mails", {
   proposalId: uuid().notNull(),
   kind: text().notNull(),
   toAddress: text().notNull(),
+  /** The message as queued; null only for rows written before the outbox kept messages. */
+  payload: jsonb().$type<OutgoingEmail>(),
   queuedAt: timestamp({ withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  /** A worker is sending until then; a lease left by a process that died simply runs out. */
+  leaseUntil: timestamp({ withTimezone: true, mode: "date" }),
+  deliveredAt: timestamp({ withTimezone: true, mode: "date" }),
 });

@@ -16,6 +16,7 @@ export const PROPOSAL_QUEUES = {
   renderSigned: "proposal-render-signed",
   reminder: "proposal-reminder",
   sweep: "proposal-sweep",
+  mail: "proposal-mail",
 } as const;
 
 const RENDER_RETRIES = 3;
@@ -23,6 +24,7 @@ const RENDER_RETRIES = 3;
 interface RenderJob { companyId: string; proposalId: string; snapshotSha256: string }
 interface SignedJob { companyId: string; proposalId: string }
 interface ReminderJob { companyId: string; proposalId: string; to: string; link: string }
+interface MailJob { dedupeKey: string }
 
 export const pdfKey = (companyId: string, sha256: string) => `proposals/${companyId}/${sha256}.pdf`;
 
@@ -37,20 +39,61 @@ async function dataUrlOf(storage: Storage, key: string, contentType: string): Pr
  * its e-mails, reminders and the expiry sweep. A request only enqueues; any server process
  * running workers picks the job up.
  */
-export function createProposalJobs(deps: { jobs: Jobs; repo: ProposalsRepository; storage: Storage; logger: Logger; now: () => Date; appOrigin: () => string }) {
-  const { repo, storage, logger } = deps;
+export function createProposalJobs(deps: {
+  jobs: Jobs; repo: ProposalsRepository; storage: Storage; logger: Logger; now: () => Date; appOrigin: () => string;
+  /** JOBS_RECOVERY_SECONDS in ms: the outbox lease, and how long work may look stalled before it is re-queued. */
+  recoveryAfterMs: number;
+}) {
+  const { repo, storage, logger, recoveryAfterMs } = deps;
   const boss: PgBoss = deps.jobs.boss;
+  // Leases and stall detection are between processes, so they use the wall clock, never the app's
+  // (which tests move by days).
+  const wallClock = () => new Date();
 
-  /** Claims the e-mail's key, then queues it: a second call with the same key sends nothing. */
-  async function deliverOnce(tenant: Tenant, proposalId: string, dedupeKey: string, kind: string, mail: OutgoingEmail): Promise<boolean> {
-    if (!(await repo.claimMail(tenant, proposalId, dedupeKey, kind, mail.to))) return false;
+  /** Queues an outbox e-mail's job; the outbox row, not the job, decides whether it is sent. */
+  async function nudgeMail(dedupeKey: string): Promise<void> {
+    await ready;
+    await boss.send(PROPOSAL_QUEUES.mail, { dedupeKey } satisfies MailJob, { retryLimit: 5, retryDelay: 2, retryBackoff: true });
+  }
+
+  /** Puts the e-mail in the outbox and queues it: a second call with the same key sends nothing. */
+  async function deliverOnce(tenant: Tenant, proposalId: string, dedupeKey: string, kind: string, message: OutgoingEmail): Promise<boolean> {
+    if (!(await repo.queueMail(tenant, proposalId, { dedupeKey, kind, message }))) return false;
+    // Should this fail, the row stays undelivered and the recovery sweep queues it again.
+    await nudgeMail(dedupeKey).catch((err: unknown) => logger.warn({ err, dedupeKey }, "e-mail job not queued; the recovery sweep will"));
+    return true;
+  }
+
+  /** Sends one outbox e-mail under a lease, then marks it delivered: exactly once unless the relay dies mid-reply. */
+  async function runMail(data: MailJob): Promise<void> {
+    const message = await repo.leaseMail(data.dedupeKey, wallClock(), recoveryAfterMs);
+    if (!message) return; // delivered already, or another worker is sending it
     try {
-      await deps.jobs.sendEmail(mail, { singletonKey: dedupeKey });
+      const messageId = await deps.jobs.deliverNow(message);
+      await repo.markMailDelivered(data.dedupeKey, wallClock());
+      logger.info({ dedupeKey: data.dedupeKey, messageId }, "proposal e-mail sent");
     } catch (err) {
-      await repo.releaseMail(dedupeKey);
+      await repo.releaseMailLease(data.dedupeKey).catch(() => {});
       throw err;
     }
-    return true;
+  }
+
+  /**
+   * Picks up work a dead server left behind: outbox e-mails never sent, renders queued or running
+   * past the recovery time. Every handler is idempotent, so a job queued twice does no harm.
+   */
+  async function recover(): Promise<{ mails: number; renders: number }> {
+    const now = wallClock();
+    const before = new Date(now.getTime() - recoveryAfterMs);
+    const mails = await repo.mailsToRecover(now, before);
+    for (const { dedupeKey } of mails) await nudgeMail(dedupeKey);
+    const renders = await repo.rendersToRecover(now, before);
+    for (const r of renders) if (r.snapshotSha256) await enqueueRender({ companyId: r.companyId }, r.id, r.snapshotSha256);
+    const signed = await repo.signedRendersToRecover(now, before);
+    for (const r of signed) await enqueueSignedRender({ companyId: r.companyId }, r.id);
+    const counts = { mails: mails.length, renders: renders.length + signed.length };
+    if (counts.mails || counts.renders) logger.warn(counts, "re-queued stalled proposal work");
+    return counts;
   }
 
   async function assets(snapshot: ProposalSnapshot) {
@@ -95,7 +138,7 @@ export function createProposalJobs(deps: { jobs: Jobs; repo: ProposalsRepository
     const row = await repo.find(tenant, data.proposalId);
     if (!row?.snapshot || !row.acceptance || !row.snapshotSha256) return;
     if (!row.signedPdfKey) {
-      await repo.update(tenant, row.id, { signedRenderStatus: "rendering" });
+      await repo.update(tenant, row.id, { signedRenderStatus: "rendering", signedRenderUpdatedAt: wallClock() });
       try {
         const a = row.acceptance;
         const signatureUrl = a.signature.pngStorageKey ? await dataUrlOf(storage, a.signature.pngStorageKey, "image/png") : null;
@@ -113,10 +156,12 @@ export function createProposalJobs(deps: { jobs: Jobs; repo: ProposalsRepository
         });
         const sha256 = sha256Hex(bytes);
         await storage.put(pdfKey(row.companyId, sha256), bytes, "application/pdf");
-        await repo.update(tenant, row.id, { signedPdfKey: pdfKey(row.companyId, sha256), signedPdfSha256: sha256, signedRenderStatus: "ready", signedRenderError: null });
+        // "ready" only once the e-mails below are in the outbox: a crash in between leaves the render
+        // looking stalled, and the recovery sweep comes back here (skipping the drawing).
+        await repo.update(tenant, row.id, { signedPdfKey: pdfKey(row.companyId, sha256), signedPdfSha256: sha256, signedRenderError: null, signedRenderUpdatedAt: wallClock() });
         await repo.addEvent(tenant, row.id, { event: "signed-pdf-created", snapshotSha256: row.snapshotSha256, pdfSha256: sha256, tokenId: row.tokenId, detail: { originalPdfSha256: row.pdfSha256 } });
       } catch (err) {
-        await repo.update(tenant, row.id, { signedRenderStatus: isLastAttempt ? "failed" : "queued", signedRenderError: err instanceof Error ? err.message.slice(0, 500) : "unknown error" });
+        await repo.update(tenant, row.id, { signedRenderStatus: isLastAttempt ? "failed" : "queued", signedRenderError: err instanceof Error ? err.message.slice(0, 500) : "unknown error", signedRenderUpdatedAt: wallClock() });
         throw err;
       }
     }
@@ -144,6 +189,7 @@ export function createProposalJobs(deps: { jobs: Jobs; repo: ProposalsRepository
         text: `${fresh.acceptance!.signerName} accepted option "${option?.name ?? ""}"${total ? ` for ${total}` : ""} on ${fresh.acceptance!.acceptedAt} (UTC).\nThe project is now marked sold.\n\n${deps.appOrigin()}/projects/${fresh.projectId}`,
       });
     }
+    if (fresh.signedRenderStatus !== "ready") await repo.update(tenant, fresh.id, { signedRenderStatus: "ready", signedRenderUpdatedAt: wallClock() });
   }
 
   async function runReminder(data: ReminderJob): Promise<void> {
@@ -195,12 +241,22 @@ export function createProposalJobs(deps: { jobs: Jobs; repo: ProposalsRepository
     await boss.work<ReminderJob>(PROPOSAL_QUEUES.reminder, { pollingIntervalSeconds: 2 }, async (batch) => {
       for (const job of batch) await runReminder(job.data);
     });
+    await boss.work<MailJob>(PROPOSAL_QUEUES.mail, { pollingIntervalSeconds: 0.5 }, async (batch) => {
+      for (const job of batch) await runMail(job.data);
+    });
     await boss.work(PROPOSAL_QUEUES.sweep, { pollingIntervalSeconds: 5 }, async () => {
       const expired = await sweep(deps.now());
       if (expired) logger.info({ expired }, "proposals expired");
     });
     // Every 15 minutes: expiry is a matter of a day, and the sweep is one indexed query.
     await boss.schedule(PROPOSAL_QUEUES.sweep, "*/15 * * * *");
+    // Recovery runs in every worker process, at once (a restart after a crash) and then a few
+    // times per recovery period; the sweep's UPDATE … RETURNING hands each stalled row to one process.
+    const recoverLogged = () => recover().catch((err: unknown) => logger.warn({ err }, "recovery sweep failed; it runs again shortly"));
+    void recoverLogged();
+    const timer = setInterval(recoverLogged, Math.max(1_000, Math.round(recoveryAfterMs / 3)));
+    timer.unref();
+    boss.once("stopped", () => clearInterval(timer));
   })().catch((err: unknown) => {
     logger.error({ err }, "proposal job queues could not be set up");
     throw err;
@@ -209,19 +265,24 @@ export function createProposalJobs(deps: { jobs: Jobs; repo: ProposalsRepository
   ready.catch(() => {});
 
   const retry = { retryLimit: RENDER_RETRIES, retryDelay: 2, retryBackoff: true };
+  async function enqueueRender(tenant: Tenant, proposalId: string, snapshotSha256: string) {
+    await ready;
+    await boss.send(PROPOSAL_QUEUES.render, { companyId: tenant.companyId, proposalId, snapshotSha256 } satisfies RenderJob, { ...retry, singletonKey: `${proposalId}:${snapshotSha256}` });
+  }
+  async function enqueueSignedRender(tenant: Tenant, proposalId: string) {
+    await ready;
+    await boss.send(PROPOSAL_QUEUES.renderSigned, { companyId: tenant.companyId, proposalId } satisfies SignedJob, { ...retry, singletonKey: `signed:${proposalId}` });
+  }
+
   return {
     ready,
     deliverOnce,
+    nudgeMail,
+    recover,
     sweep,
     runReminder,
-    async enqueueRender(tenant: Tenant, proposalId: string, snapshotSha256: string) {
-      await ready;
-      await boss.send(PROPOSAL_QUEUES.render, { companyId: tenant.companyId, proposalId, snapshotSha256 } satisfies RenderJob, { ...retry, singletonKey: `${proposalId}:${snapshotSha256}` });
-    },
-    async enqueueSignedRender(tenant: Tenant, proposalId: string) {
-      await ready;
-      await boss.send(PROPOSAL_QUEUES.renderSigned, { companyId: tenant.companyId, proposalId } satisfies SignedJob, { ...retry, singletonKey: `signed:${proposalId}` });
-    },
+    enqueueRender,
+    enqueueSignedRender,
     async scheduleReminder(tenant: Tenant, proposalId: string, to: string, link: string, afterDays: number) {
       await ready;
       await boss.send(PROPOSAL_QUEUES.reminder, { companyId: tenant.companyId, proposalId, to, link } satisfies ReminderJob, { startAfter: Math.round(afterDays * 86_400), retryLimit: 3, singletonKey: `reminder:${proposalId}` });

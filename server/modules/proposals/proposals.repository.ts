@@ -1,13 +1,24 @@
-import { and, asc, desc, eq, inArray, isNull, lte, sql } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, isNotNull, isNull, lt, lte, or, sql } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
 import { companies, customers, designOptions, photos, projects, proposalEvents, proposalMails, proposals, users } from "../../db/schema/index.ts";
 import { scoped } from "../../lib/tenant.ts";
 import type { ProposalStatus } from "../../../shared/proposals/types.ts";
+import type { OutgoingEmail } from "../../lib/mailer.ts";
 
 /** Only the company matters for scoping; jobs and the homeowner's link have no signed-in actor. */
 export interface Tenant {
   companyId: string;
 }
+
+/** An e-mail for the outbox: its once-only key (e.g. "send:<proposal id>"), kind and message. */
+export interface OutboxMail {
+  dedupeKey: string;
+  kind: string;
+  message: OutgoingEmail;
+}
+const outboxRow = (tenant: Tenant, proposalId: string, mail: OutboxMail) => ({
+  dedupeKey: mail.dedupeKey, companyId: tenant.companyId, proposalId, kind: mail.kind, toAddress: mail.message.to, payload: mail.message,
+});
 
 export type ProposalRow = typeof proposals.$inferSelect;
 export type ProposalWrite = Partial<Omit<typeof proposals.$inferInsert, "id" | "companyId" | "version" | "createdAt">>;
@@ -155,15 +166,74 @@ export function createProposalsRepository(db: Database) {
       return row ?? null;
     },
 
-    /** Claims a once-only e-mail; false when it was claimed before. */
-    async claimMail(tenant: Tenant, proposalId: string, dedupeKey: string, kind: string, toAddress: string): Promise<boolean> {
-      const rows = await db.insert(proposalMails).values({ dedupeKey, companyId: tenant.companyId, proposalId, kind, toAddress })
+    /**
+     * Sending, in one transaction: the draft becomes sent (at the version read), the "sent" event is
+     * written, the e-mail to the homeowner goes into the outbox and the project becomes proposed.
+     * A crash leaves all of it or none, never a sent proposal whose e-mail nobody will send.
+     */
+    markSent: (tenant: Tenant, id: string, version: number, patch: ProposalWrite, event: NewProposalEvent, mail: OutboxMail, projectId: string) =>
+      db.transaction(async (tx) => {
+        const [row] = await tx.update(proposals)
+          .set({ ...patch, version: sql`${proposals.version} + 1`, updatedAt: new Date() })
+          .where(scoped(proposals, tenant, eq(proposals.id, id), eq(proposals.version, version), eq(proposals.status, "draft")))
+          .returning();
+        if (!row) return null;
+        await tx.insert(proposalEvents).values({ ...event, companyId: tenant.companyId, proposalId: id });
+        await tx.insert(proposalMails).values(outboxRow(tenant, id, mail)).onConflictDoNothing();
+        await tx.update(projects).set({ status: "proposed", version: sql`${projects.version} + 1`, updatedAt: new Date() })
+          .where(scoped(projects, tenant, eq(projects.id, projectId), inArray(projects.status, ["lead", "surveyed"])));
+        return row;
+      }),
+
+    /** Puts a once-only e-mail in the outbox; false when its key was queued before. */
+    async queueMail(tenant: Tenant, proposalId: string, mail: OutboxMail): Promise<boolean> {
+      const rows = await db.insert(proposalMails).values(outboxRow(tenant, proposalId, mail))
         .onConflictDoNothing().returning({ key: proposalMails.dedupeKey });
       return rows.length > 0;
     },
-    async releaseMail(dedupeKey: string) {
-      await db.delete(proposalMails).where(eq(proposalMails.dedupeKey, dedupeKey));
+
+    /**
+     * Takes the lease on an undelivered outbox row and returns its message, or null when it was
+     * delivered already or another worker holds a lease that has not run out.
+     */
+    async leaseMail(dedupeKey: string, now: Date, leaseMs: number): Promise<OutgoingEmail | null> {
+      const [row] = await db.update(proposalMails).set({ leaseUntil: new Date(now.getTime() + leaseMs) })
+        .where(and(eq(proposalMails.dedupeKey, dedupeKey), isNull(proposalMails.deliveredAt), isNotNull(proposalMails.payload),
+          or(isNull(proposalMails.leaseUntil), lt(proposalMails.leaseUntil, now))))
+        .returning({ payload: proposalMails.payload });
+      return row?.payload ?? null;
     },
+    async markMailDelivered(dedupeKey: string, now: Date) {
+      await db.update(proposalMails).set({ deliveredAt: now, leaseUntil: null }).where(eq(proposalMails.dedupeKey, dedupeKey));
+    },
+    /** After a failed attempt: the next retry may take the row at once. */
+    async releaseMailLease(dedupeKey: string) {
+      await db.update(proposalMails).set({ leaseUntil: null }).where(and(eq(proposalMails.dedupeKey, dedupeKey), isNull(proposalMails.deliveredAt)));
+    },
+    async mail(dedupeKey: string) {
+      const [row] = await db.select().from(proposalMails).where(eq(proposalMails.dedupeKey, dedupeKey)).limit(1);
+      return row ?? null;
+    },
+
+    /**
+     * Outbox rows still undelivered, unleased and last queued before `before`: their job was lost
+     * (a server killed after committing) or gave up. Marks them queued now, so the next sweep waits.
+     */
+    mailsToRecover: (now: Date, before: Date) =>
+      db.update(proposalMails).set({ queuedAt: now })
+        .where(and(isNull(proposalMails.deliveredAt), isNotNull(proposalMails.payload), lt(proposalMails.queuedAt, before),
+          or(isNull(proposalMails.leaseUntil), lt(proposalMails.leaseUntil, now))))
+        .returning({ dedupeKey: proposalMails.dedupeKey }),
+
+    /** Renders queued or running since before `before` (their job was lost with its server); marked touched now. */
+    rendersToRecover: (now: Date, before: Date) =>
+      db.update(proposals).set({ renderUpdatedAt: now })
+        .where(and(inArray(proposals.renderStatus, ["queued", "rendering"]), isNotNull(proposals.snapshotSha256), lt(proposals.renderUpdatedAt, before)))
+        .returning({ id: proposals.id, companyId: proposals.companyId, snapshotSha256: proposals.snapshotSha256 }),
+    signedRendersToRecover: (now: Date, before: Date) =>
+      db.update(proposals).set({ signedRenderUpdatedAt: now })
+        .where(and(inArray(proposals.signedRenderStatus, ["queued", "rendering"]), lt(proposals.signedRenderUpdatedAt, before)))
+        .returning({ id: proposals.id, companyId: proposals.companyId }),
 
     /** Sent or viewed revisions whose link is past its expiry, across companies (the sweep). */
     dueToExpire: (now: Date) =>

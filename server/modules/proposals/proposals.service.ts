@@ -259,24 +259,27 @@ export function createProposalsService(deps: {
       const { token, tokenHash } = newToken();
       const tokenId = randomUUID();
       const now = deps.now();
-      const sent = await repo.updateIfVersion(actor, id, p.version, {
+      const link = `${deps.appOrigin()}/p/${token}`;
+      const dedupeKey = `send:${id}`;
+      const sent = await repo.markSent(actor, id, p.version, {
         status: "sent", snapshot, snapshotSha256: sha, sellerUserId: seller.id, sentAt: now,
         tokenHash, tokenId, tokenExpiresAt: linkExpiresAt(p.validUntil), tokenRevokedAt: null,
         renderStatus: "queued", renderError: null, renderAttempts: 0, renderUpdatedAt: now,
-      }, ["draft"]);
+      }, { event: "sent", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, tokenId, snapshotSha256: sha, detail: { to: customer.email, revision: p.revision } }, {
+        dedupeKey, kind: "proposal",
+        message: {
+          companyId: actor.companyId, to: customer.email,
+          subject: `Your attic ventilation proposal from ${snapshot.company.name}`,
+          text: `Hello ${snapshot.customer.firstName},\n\n${seller.name} of ${snapshot.company.name} has sent you a proposal for the attic at ${snapshot.site.address}. It explains what we found, shows how air moves through the attic, and offers ${snapshot.options.length === 1 ? "one option" : `${snapshot.options.length} options`} with prices.\n\nOpen it here (valid until ${p.validUntil}): ${link}\n\nYou can download the PDF and accept or decline on that page.\n\n${snapshot.company.name}${snapshot.company.phone ? `\n${snapshot.company.phone}` : ""}`,
+        },
+      }, p.projectId);
       if (!sent) throw conflict("This proposal changed or was sent meanwhile. Reload it.", "already-sent");
-      await repo.addEvent(actor, id, { event: "sent", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, tokenId, snapshotSha256: sha, detail: { to: customer.email, revision: p.revision } });
+      // Committed: from here a crash loses nothing, since the recovery sweep re-queues both jobs.
       await deps.jobs.enqueueRender(actor, id, sha);
-      const link = `${deps.appOrigin()}/p/${token}`;
+      await deps.jobs.nudgeMail(dedupeKey);
       const company = await repo.company(actor);
-      await deps.jobs.deliverOnce(actor, id, `send:${id}`, "proposal", {
-        companyId: actor.companyId, to: customer.email,
-        subject: `Your attic ventilation proposal from ${snapshot.company.name}`,
-        text: `Hello ${snapshot.customer.firstName},\n\n${seller.name} of ${snapshot.company.name} has sent you a proposal for the attic at ${snapshot.site.address}. It explains what we found, shows how air moves through the attic, and offers ${snapshot.options.length === 1 ? "one option" : `${snapshot.options.length} options`} with prices.\n\nOpen it here (valid until ${p.validUntil}): ${link}\n\nYou can download the PDF and accept or decline on that page.\n\n${snapshot.company.name}${snapshot.company.phone ? `\n${snapshot.company.phone}` : ""}`,
-      });
       const reminderDays = (company?.settings as CompanySettings | undefined)?.reminderDays ?? null;
       if (reminderDays) await deps.jobs.scheduleReminder(actor, id, customer.email, link, reminderDays);
-      await repo.setProjectStatus(actor, p.projectId, "proposed", ["lead", "surveyed"]);
       return { proposal: presentProposal(sent), link };
     },
 
@@ -355,7 +358,7 @@ export function createProposalsService(deps: {
         signature: { typed: input.signature.typed ?? null, pngStorageKey: pngKey, pngSha256 },
         consentTextVersion: input.consent.consentTextVersion, acceptedAt: now.toISOString(), ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId,
       };
-      const updated = await repo.acceptAndRelease(p, p.id, p.version, input.optionId, { status: "accepted", acceptance, decidedAt: now, signedRenderStatus: "queued" }, now);
+      const updated = await repo.acceptAndRelease(p, p.id, p.version, input.optionId, { status: "accepted", acceptance, decidedAt: now, signedRenderStatus: "queued", signedRenderUpdatedAt: now }, now);
       if (!updated) throw conflict("This proposal changed meanwhile; please reload the page.", "stale-version");
       await repo.addEvent(p, p.id, {
         event: "accepted", at: now, ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId,
