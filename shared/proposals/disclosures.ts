@@ -6,6 +6,7 @@
  * A change to the consent text must bump its version: acceptances record the version signed.
  */
 import { ATTIC_SAFETY_CAUTION, COMBUSTION_SAFETY_CAUTION, FAN_SAFETY_CAUTION, ROOF_SAFETY_CAUTION } from "../diagnostics/cautions";
+import { isLegalPublicHoliday } from "./legal-holidays";
 
 export const ESIGN_CONSENT_VERSION = "esign-2026-12-01";
 
@@ -35,18 +36,19 @@ export function coolingOffNotice(opts: { companyName: string; companyAddress: st
 }
 
 /**
- * The third business day after a date (Saturdays count as business days under 16 CFR 429.0(c);
- * Sundays and federal holidays do not — holidays are left to the seller to check).
+ * The third business day after a date, for the cooling-off notice: every day counts except Sundays
+ * (16 CFR 429.0(c) counts Saturdays) and the legal public holidays (see legal-holidays.ts).
  *
  * @example
  * thirdBusinessDayAfter("2026-12-04") // "2026-12-08" (Fri → Sat 5, Mon 7, Tue 8)
+ * thirdBusinessDayAfter("2026-11-24") // "2026-11-28" (Tue → Wed 25, Thanksgiving skipped, Fri 27, Sat 28)
  */
 export function thirdBusinessDayAfter(isoDate: string): string {
   const day = new Date(`${isoDate}T12:00:00Z`);
   let counted = 0;
   while (counted < 3) {
     day.setUTCDate(day.getUTCDate() + 1);
-    if (day.getUTCDay() !== 0) counted++;
+    if (day.getUTCDay() !== 0 && !isLegalPublicHoliday(day.toISOString().slice(0, 10))) counted++;
   }
   return day.toISOString().slice(0, 10);
 }

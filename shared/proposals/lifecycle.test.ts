@@ -1,6 +1,5 @@
 import { describe, expect, it } from "vitest";
 import { isDueToExpire, linkExpiresAt, linkState, reminderDecision, type ReminderFacts } from "./lifecycle";
-import { thirdBusinessDayAfter } from "./disclosures";
 
 const sent: ReminderFacts = {
   status: "sent", sentAt: new Date("2026-12-01T10:00:00Z"), viewedAt: null, reminderSentAt: null,
@@ -30,10 +29,5 @@ describe("proposal lifecycle", () => {
     expect(reminderDecision({ ...sent, reminderSentAt: new Date("2026-12-04T11:00:00Z") }, new Date("2026-12-06T00:00:00Z"), 3).shouldSend).toBe(false);
     expect(reminderDecision(sent, new Date("2027-01-02T00:00:00Z"), 3)).toEqual({ shouldSend: false, reason: "the link is expired" });
     expect(reminderDecision(sent, new Date("2026-12-20T00:00:00Z"), null).shouldSend).toBe(false);
-  });
-
-  it("when the three business days are counted, then Sundays are skipped and Saturdays count", () => {
-    expect(thirdBusinessDayAfter("2026-12-04")).toBe("2026-12-08");
-    expect(thirdBusinessDayAfter("2026-12-01")).toBe("2026-12-04");
   });
 });
