@@ -6,7 +6,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import sharp from "sharp";
 import { eq } from "drizzle-orm";
-import { proposalEvents, proposals, projects } from "../../server/db/schema/index.ts";
+import { outboxMessages, proposalEvents, proposals, projects } from "../../server/db/schema/index.ts";
 import { ESIGN_CONSENT_VERSION } from "../../shared/proposals/disclosures.ts";
 import { ORIGIN, startTestApp, type TestApp } from "../setup/test-app.ts";
 import { createProject, createSpace, makeTeam, send, type Agent, type Team } from "../setup/survey-fixtures.ts";
@@ -417,6 +417,29 @@ describe("revisions, typed signatures, refusals", () => {
     const expiredRow = (await team.asSales.get(`/api/proposals/${q.id}`)).body;
     expect(expiredRow.proposal.status).toBe("expired");
     expect(expiredRow.events.map((e: { event: string }) => e.event)).toContain("expired");
+  });
+
+  it("when a sent proposal is still unopened after the company's reminder days, then the queued reminder mails the homeowner once", async () => {
+    const p = await draft(team.asSales, [optionIds[0]!]);
+    const { link } = await sendAndGetToken(team.asSales, p.id);
+    const reminders = async () => (await t.db.select().from(outboxMessages).where(eq(outboxMessages.toAddress, homeowner))).filter((m) => m.subject.startsWith("A reminder") && Boolean(m.text?.includes(link)));
+    // The reminder was queued for 3 days later (the profile's reminderDays); move the clock past
+    // that and make the job due now, as pg-boss would once the days had passed.
+    t.clock.offsetMs = 4 * 86_400_000;
+    try {
+      const due = await t.sql`update pgboss.job set start_after = now() where name = 'proposal-reminder' and data->>'proposalId' = ${p.id} and state = 'created' returning id`;
+      expect(due).toHaveLength(1);
+      await waitFor("the reminder e-mail", reminders, (rows) => rows.length > 0);
+      const detail = (await team.asSales.get(`/api/proposals/${p.id}`)).body;
+      expect(detail.events.map((e: { event: string }) => e.event)).toContain("reminded");
+      // A second run of the same reminder (a retried job) sends nothing more.
+      const jobs = t.app.locals.proposalJobs as { runReminder: (data: { companyId: string; proposalId: string; to: string; link: string }) => Promise<void> };
+      await jobs.runReminder({ companyId: team.company.id, proposalId: p.id, to: homeowner, link });
+      await new Promise((r) => setTimeout(r, 1_500));
+      expect(await reminders()).toHaveLength(1);
+    } finally {
+      t.clock.offsetMs = 0;
+    }
   });
 
   it("when someone declines, then the reason is recorded and the proposal can no longer be accepted", async () => {
