@@ -1,5 +1,5 @@
 import * as RadixDialog from "@radix-ui/react-dialog";
-import type { ReactNode } from "react";
+import { useLayoutEffect, useRef, useState, type RefObject, type ReactNode } from "react";
 import { cn } from "@/lib/cn";
 import { Button, type ButtonVariant } from "./button";
 import { CloseIcon } from "./icons";
@@ -20,10 +20,24 @@ export interface DialogContentProps {
 }
 
 /**
- * A modal dialog: focus is trapped, Escape closes it, focus returns to the trigger.
+ * Notes the element that had focus as the dialog opens. It renders with the dialog's content, before
+ * anything inside takes focus (an autoFocus field included), so what it reads is the opener.
+ */
+function RememberOpener({ openerRef }: { openerRef: RefObject<HTMLElement | null> }) {
+  const [opener] = useState(() => document.activeElement as HTMLElement | null);
+  useLayoutEffect(() => {
+    openerRef.current = opener;
+  }, [opener, openerRef]);
+  return null;
+}
+
+/**
+ * A modal dialog: focus is trapped, Escape closes it, focus returns to the element that opened it.
  * On phones it rises from the bottom edge, where a thumb can reach the buttons.
  */
 export function DialogContent({ title, description, children, className, footer }: DialogContentProps) {
+  // Radix hands focus back only to a DialogTrigger; our dialogs are opened by state, so the opener is kept here.
+  const openerRef = useRef<HTMLElement | null>(null);
   return (
     <RadixDialog.Portal>
       <RadixDialog.Overlay className="fixed inset-0 z-40 bg-ink-950/55 data-[state=open]:animate-[fade-in_150ms_ease-out]" />
@@ -36,7 +50,14 @@ export function DialogContent({ title, description, children, className, footer 
           className,
         )}
         {...(description ? {} : { "aria-describedby": undefined })}
+        onCloseAutoFocus={(event) => {
+          const opener = openerRef.current;
+          if (!opener?.isConnected || opener === document.body) return;
+          event.preventDefault();
+          opener.focus();
+        }}
       >
+        <RememberOpener openerRef={openerRef} />
         <div className="flex items-start justify-between gap-4 px-5 pt-5 sm:px-6 sm:pt-6">
           <div className="space-y-1.5">
             <RadixDialog.Title className="text-xl font-semibold text-ink-900">{title}</RadixDialog.Title>

@@ -38,7 +38,7 @@ const s = StyleSheet.create({
   caution: { borderWidth: 0.75, borderColor: "#b4411b", borderRadius: 3, padding: 8, marginBottom: 6, fontSize: 9, lineHeight: "12.5pt" },
   sigRow: { flexDirection: "row", gap: 24, marginTop: 12 },
   sigBox: { flex: 1 },
-  sigLine: { height: 52, borderBottomWidth: 1, borderBottomColor: INK, justifyContent: "flex-end", paddingBottom: 3, marginBottom: 4 },
+  sigLine: { minHeight: 52, borderBottomWidth: 1, borderBottomColor: INK, justifyContent: "flex-end", paddingBottom: 3, marginBottom: 4 },
   sigImage: { height: 44, width: 160, objectFit: "contain" },
   typedSig: { fontSize: 16, fontWeight: 600, lineHeight: "21pt", marginBottom: 4 },
   table: { borderTopWidth: 0.5, borderTopColor: RULE, marginTop: 4 },
