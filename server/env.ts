@@ -20,6 +20,8 @@ const EnvSchema = z.object({
   S3_ACCESS_KEY_ID: z.string().optional(),
   S3_SECRET_ACCESS_KEY: z.string().optional(),
   SERVE_CLIENT: z.enum(["true", "false"]).default("true"),
+  /** The built client to serve; dist/client unless a test run built its own copy elsewhere. */
+  CLIENT_DIR: z.string().optional(),
   /**
    * How long background work may look stalled before another server takes it over: an unsent
    * outbox e-mail, a PDF render whose server died. Also the e-mail lease, so it must stay above

@@ -12,7 +12,7 @@ const logger = createLogger(env.LOG_LEVEL, { pretty: Boolean(process.stdout.isTT
 const { db, sql } = createDb(env.DATABASE_URL);
 const mailer = createMailer({ host: env.SMTP_HOST, port: env.SMTP_PORT, from: env.MAIL_FROM });
 const jobs = await startJobs({ databaseUrl: env.DATABASE_URL, logger, mailer });
-const clientDir = env.SERVE_CLIENT === "true" ? path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..", "dist", "client") : undefined;
+const clientDir = env.SERVE_CLIENT === "true" ? path.resolve(env.CLIENT_DIR ?? path.join(path.dirname(fileURLToPath(import.meta.url)), "..", "dist", "client")) : undefined;
 const app = createApp({ env, db, logger, jobs, clientDir });
 
 const server = app.listen(env.PORT, env.HOST, () => {

@@ -35,9 +35,14 @@ export async function freePort(): Promise<number> {
   });
 }
 
-export function buildClient(): void {
+/**
+ * `vite build` into dist/client, or into `outDir` (a test run builds into a folder of its own, so
+ * a second run building at the same time never empties the files the first one is serving).
+ */
+export function buildClient(opts: { outDir?: string } = {}): void {
   log("building the client (vite build)…");
-  const r = spawnSync(process.execPath, ["node_modules/vite/bin/vite.js", "build", "--logLevel", "warn"], { cwd: projectRoot, stdio: "inherit" });
+  const outDirArgs = opts.outDir ? ["--outDir", opts.outDir, "--emptyOutDir"] : [];
+  const r = spawnSync(process.execPath, ["node_modules/vite/bin/vite.js", "build", "--logLevel", "warn", ...outDirArgs], { cwd: projectRoot, stdio: "inherit" });
   if (r.status !== 0) throw new Error("vite build failed");
 }
 

@@ -7,7 +7,7 @@
  * `npm test -- --only unit,api` runs a subset.
  */
 import { spawn } from "node:child_process";
-import { existsSync, mkdirSync, readFileSync, rmSync } from "node:fs";
+import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync } from "node:fs";
 import path from "node:path";
 import { prepareDatabase, buildClient, startServer, stopChild, freePort, startLocalPayments } from "../lib/environment.ts";
 import { dropDatabase, listDatabases, testCluster } from "../lib/postgres.ts";
@@ -56,10 +56,17 @@ async function vitest(step: string, projects: string[], env: NodeJS.ProcessEnv) 
 const testPort = Number(process.env.EAVESIGHT_TEST_PORT ?? (await freePort()));
 const smtpPort = Number(process.env.EAVESIGHT_TEST_SMTP_PORT ?? (await freePort()));
 const database = `eavesight_test_${process.pid}`;
+// This run's own client build: another run building at the same time cannot empty it. (Not under
+// .var: express.static and sendFile refuse paths through a dot-folder.)
+const clientDir = path.join(projectRoot, "dist", `client-test-${process.pid}`);
 const { databaseUrl, env: baseEnv } = await prepareDatabase("test", { recreate: true, database });
 for (const name of listDatabases(testCluster())) {
   const pid = Number(/^eavesight_test_(\d+)$/.exec(name)?.[1]);
   if (pid && pid !== process.pid && !isAlive(pid)) dropDatabase(testCluster(), name);
+}
+for (const name of existsSync(path.dirname(clientDir)) ? readdirSync(path.dirname(clientDir)) : []) {
+  const pid = Number(/^client-test-(\d+)$/.exec(name)?.[1]);
+  if (pid && pid !== process.pid && !isAlive(pid)) rmSync(path.join(path.dirname(clientDir), name), { recursive: true, force: true });
 }
 function isAlive(pid: number): boolean {
   try {
@@ -90,9 +97,9 @@ try {
   }
   if (wants("e2e")) {
     ensureChromium();
-    buildClient();
+    buildClient({ outDir: clientDir });
     const payments = await startLocalPayments({ appPort: testPort, quiet: true, isTest: true });
-    const server = await startServer({ ...env, ...payments.env, PORT: String(testPort), LOG_LEVEL: "error" });
+    const server = await startServer({ ...env, ...payments.env, PORT: String(testPort), LOG_LEVEL: "error", CLIENT_DIR: clientDir });
     try {
       await vitest("e2e", ["e2e"], { ...env, ...payments.env, E2E_BASE_URL: `http://127.0.0.1:${testPort}` });
     } finally {
@@ -106,6 +113,7 @@ try {
 } finally {
   await smtp.close();
   dropDatabase(testCluster(), database);
+  rmSync(clientDir, { recursive: true, force: true });
 }
 
 const seconds = Math.round((Date.now() - started) / 1000);
