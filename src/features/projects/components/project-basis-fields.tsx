@@ -75,6 +75,8 @@ export function ProjectBasisFields({ value, onChange, disabled, errors = {}, all
         onChange={(event) => onChange({ ceilingVaporRetarder: event.target.value as VaporRetarder })}
       />
       <Select
+        // Alone on its row, and its choices are long: the full width keeps them readable.
+        className="sm:col-span-2"
         label="Roof colour"
         hint="Dark roofs run hotter; fan sizing allows for it."
         options={ROOF_COLOR_OPTIONS}
