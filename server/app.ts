@@ -80,7 +80,8 @@ export function createApp(deps: AppDeps): Express {
   const now = deps.now ?? (() => new Date());
   const app = express();
   app.disable("x-powered-by");
-  app.set("trust proxy", "loopback");
+  // Whose X-Forwarded-For to believe (client addresses feed the rate limits and the audit trail).
+  app.set("trust proxy", /^\d+$/.test(env.TRUST_PROXY) ? Number(env.TRUST_PROXY) : env.TRUST_PROXY);
 
   app.use(
     helmet({

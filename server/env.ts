@@ -20,6 +20,13 @@ const EnvSchema = z.object({
   S3_ACCESS_KEY_ID: z.string().optional(),
   S3_SECRET_ACCESS_KEY: z.string().optional(),
   SERVE_CLIENT: z.enum(["true", "false"]).default("true"),
+  /**
+   * Express's "trust proxy": which hops' X-Forwarded-For to believe. "loopback" suits a proxy on
+   * the same host; behind one elsewhere give its address or subnet (e.g. "10.0.0.0/8"), else every
+   * homeowner shares the proxy's address and its rate limit. Comma-separated for several; a
+   * plain number trusts that many hops.
+   */
+  TRUST_PROXY: z.string().min(1).default("loopback"),
   /** The built client to serve; dist/client unless a test run built its own copy elsewhere. */
   CLIENT_DIR: z.string().optional(),
   /**

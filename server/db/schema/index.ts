@@ -1,5 +1,6 @@
 export * from "./companies.ts";
 export * from "./users.ts";
+export * from "./user-signatures.ts";
 export * from "./sessions.ts";
 export * from "./auth-tokens.ts";
 export * from "./audit-events.ts";

@@ -17,8 +17,6 @@ export const users = pgTable(
     passwordHash: text().notNull(),
     isActive: boolean().notNull().default(true),
     unitSystem: unitSystemEnum().notNull().default("imperial"),
-    signatureDataUrl: text(),
-    signatureTyped: text(),
     createdAt: timestamp({ withTimezone: true, mode: "date" }).notNull().defaultNow(),
     updatedAt: timestamp({ withTimezone: true, mode: "date" }).notNull().defaultNow(),
   },

@@ -1,6 +1,6 @@
 import { and, asc, desc, eq, inArray, isNotNull, isNull, lt, lte, or, sql } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
-import { companies, customers, designOptions, photos, projects, proposalEvents, proposalMails, proposals, users } from "../../db/schema/index.ts";
+import { companies, customers, designOptions, photos, projects, proposalEvents, proposalMails, proposals, userSignatures, users } from "../../db/schema/index.ts";
 import { scoped } from "../../lib/tenant.ts";
 import type { ProposalStatus } from "../../../shared/proposals/types.ts";
 import type { OutgoingEmail } from "../../lib/mailer.ts";
@@ -45,15 +45,20 @@ export function createProposalsRepository(db: Database) {
       return row ? { ...row, settings: row.settings as CompanySettings } : null;
     },
 
+    /** A user of the company with the saved signature, if any. */
     async user(tenant: Tenant, userId: string) {
       const [row] = await db
-        .select({ id: users.id, name: users.name, email: users.email, signatureTyped: users.signatureTyped, signatureDataUrl: users.signatureDataUrl })
-        .from(users).where(scoped(users, tenant, eq(users.id, userId))).limit(1);
+        .select({ id: users.id, name: users.name, email: users.email, signatureTyped: userSignatures.typed, signatureDataUrl: userSignatures.drawnPngDataUrl })
+        .from(users)
+        .leftJoin(userSignatures, eq(userSignatures.userId, users.id))
+        .where(scoped(users, tenant, eq(users.id, userId))).limit(1);
       return row ?? null;
     },
 
     async setSignature(tenant: Tenant, userId: string, signature: { signatureTyped: string | null; signatureDataUrl: string | null }) {
-      await db.update(users).set({ ...signature, updatedAt: new Date() }).where(scoped(users, tenant, eq(users.id, userId)));
+      const values = { typed: signature.signatureTyped, drawnPngDataUrl: signature.signatureDataUrl, updatedAt: new Date() };
+      await db.insert(userSignatures).values({ userId, companyId: tenant.companyId, ...values })
+        .onConflictDoUpdate({ target: userSignatures.userId, set: values, where: eq(userSignatures.companyId, tenant.companyId) });
     },
 
     async customer(tenant: Tenant, id: string) {
