@@ -1,3 +1,4 @@
+import { memo } from "react";
 import { FindingsList } from "@/components/findings/findings-list";
 import type { UnitSystem } from "@shared/units/format";
 import { formatAirflowCfm, formatAreaSqFt, formatNfaSqIn } from "@shared/units/format";
@@ -16,6 +17,8 @@ export interface AnalysisPanelProps {
   problems: Problem[];
   unitSystem: UnitSystem;
   onJumpTo?: (partId: string) => void;
+  /** False while the panel is hidden (the phone's Survey tab), so hidden work can wait. */
+  isShown?: boolean;
 }
 
 function Figure({ label, value, sub }: { label: string; value: string; sub?: string }) {
@@ -34,7 +37,7 @@ function issueText(issue: { path: string; message: string }): string {
 }
 
 /** The live analysis of one space, from the same core the server and the PDF use. */
-export function AnalysisPanel({ spaceName, input, result, problems, unitSystem, onJumpTo }: AnalysisPanelProps) {
+export const AnalysisPanel = memo(function AnalysisPanel({ spaceName, input, result, problems, unitSystem, onJumpTo, isShown = true }: AnalysisPanelProps) {
   const todo = problems.length > 0 ? (
     <section aria-labelledby="todo-title" className="space-y-2 rounded-lg border border-warning-200 bg-warning-50 p-4">
       <h3 id="todo-title" className="flex items-center gap-2 text-base font-semibold text-warning-900">
@@ -164,7 +167,7 @@ export function AnalysisPanel({ spaceName, input, result, problems, unitSystem, 
         <FindingsList findings={findings} emptyText="Nothing to flag in this space." />
       </section>
 
-      <AirflowSection input={input} analysis={a} spaceName={spaceName} />
+      <AirflowSection input={input} analysis={a} spaceName={spaceName} isShown={isShown} />
     </div>
   );
-}
+});

@@ -1,3 +1,4 @@
+import { memo } from "react";
 import { formatAreaSqFt, formatLength, type UnitSystem } from "@shared/units/format";
 import { shoelaceAreaSqFt } from "@shared/ventilation/index";
 import type { SectionDraft } from "../lib/drafts";
@@ -84,7 +85,7 @@ export interface PlanSketchProps {
  * corner, entered areas as a dashed square of the same area. Sections sit side by side, top
  * edges aligned, so a main block and a wing read as an L.
  */
-export function PlanSketch({ sections, unitSystem }: PlanSketchProps) {
+export const PlanSketch = memo(function PlanSketch({ sections, unitSystem }: PlanSketchProps) {
   const shapes = sections.map((s, i) => shapeOf(s, i, unitSystem)).filter((s): s is Shape => s !== null);
   if (shapes.length === 0) {
     return (
@@ -179,4 +180,4 @@ export function PlanSketch({ sections, unitSystem }: PlanSketchProps) {
       </figcaption>
     </figure>
   );
-}
+});

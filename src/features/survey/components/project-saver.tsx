@@ -1,5 +1,5 @@
 import { useQueryClient } from "@tanstack/react-query";
-import { useEffect, useState } from "react";
+import { memo, useEffect, useState } from "react";
 import { surveyQueries } from "../api/queries";
 import { saveProject } from "../api/save-project";
 import type { ProjectRecord } from "../api/types";
@@ -23,7 +23,7 @@ export interface ProjectSaverProps {
 const describe = (f: ProjectFields) => `"${f.title}", climate zone ${f.climateZone}${f.moistureRegime ?? ""}, status ${f.status}.`;
 
 /** Saves the project details in the background, with the same rules as a space. */
-export function ProjectSaver({ projectId, fields, init, isReadOnly, resolveRequest, onState, onReplace, onSaved }: ProjectSaverProps) {
+export const ProjectSaver = memo(function ProjectSaver({ projectId, fields, init, isReadOnly, resolveRequest, onState, onReplace, onSaved }: ProjectSaverProps) {
   const queryClient = useQueryClient();
   const checked = checkFields(fields);
   const { state, isDirty, saveNow, resolve, getVersion } = useAutosave({
@@ -85,4 +85,4 @@ export function ProjectSaver({ projectId, fields, init, isReadOnly, resolveReque
       }}
     />
   );
-}
+});

@@ -1,3 +1,4 @@
+import { memo } from "react";
 import type { UnitSystem } from "@shared/units/format";
 import { Select } from "@/components/ui/select";
 import type { RoofDraft } from "../lib/drafts";
@@ -16,7 +17,7 @@ export interface RoofFieldsProps {
   unitSystem: UnitSystem;
 }
 
-export function RoofFields({ roof, onChange, unitSystem }: RoofFieldsProps) {
+export const RoofFields = memo(function RoofFields({ roof, onChange, unitSystem }: RoofFieldsProps) {
   return (
     <div className="grid gap-4 sm:grid-cols-2">
       <Select
@@ -53,4 +54,4 @@ export function RoofFields({ roof, onChange, unitSystem }: RoofFieldsProps) {
       />
     </div>
   );
-}
+});

@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { memo, useCallback, useState } from "react";
 import type { UnitSystem } from "@shared/units/format";
 import { formatAreaSqFt } from "@shared/units/format";
 import { sectionAreaSqFt } from "@shared/ventilation/index";
@@ -6,14 +6,18 @@ import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { CloseIcon, PlusIcon } from "@/components/ui/icons";
 import { Radio, RadioGroup } from "@/components/ui/checkbox";
-import { buildSection, emptySection, newId, sectionName, type SectionDraft, type SectionKind } from "../lib/drafts";
+import { buildSection, emptySection, newId, sectionName, type PointDraft, type SectionDraft, type SectionKind } from "../lib/drafts";
 import { areaEntry, lengthEntry, lengthText } from "../lib/measure";
 import { EntryField } from "./entry-field";
 import { PolygonGrid } from "./polygon-grid";
 
+type SectionsUpdate = (sections: SectionDraft[]) => SectionDraft[];
+type SectionUpdate = (section: SectionDraft) => SectionDraft;
+
 export interface SectionsEditorProps {
   sections: SectionDraft[];
-  onChange: (sections: SectionDraft[]) => void;
+  /** Given a function of the current sections, so the callbacks below stay the same from render to render. */
+  onChange: (update: SectionsUpdate) => void;
   unitSystem: UnitSystem;
   isReadOnly: boolean;
 }
@@ -24,8 +28,17 @@ const KIND_LABELS: Record<SectionKind, { label: string; description: string }> =
   area: { label: "Area", description: "Already worked out" },
 };
 
-export function SectionsEditor({ sections, onChange, unitSystem, isReadOnly }: SectionsEditorProps) {
-  const update = (index: number, next: SectionDraft) => onChange(sections.map((s, i) => (i === index ? next : s)));
+export const SectionsEditor = memo(function SectionsEditor({ sections, onChange, unitSystem, isReadOnly }: SectionsEditorProps) {
+  // Keyed by id and stable, so typing in one section leaves the other (memoised) cards alone.
+  const updateSection = useCallback(
+    (sectionId: string, update: SectionUpdate) => onChange((list) => list.map((s) => (s.id === sectionId ? update(s) : s))),
+    [onChange],
+  );
+  const removeSection = useCallback((sectionId: string) => onChange((list) => list.filter((s) => s.id !== sectionId)), [onChange]);
+  const add = (kind: SectionKind) => {
+    const section = emptySection(kind);
+    onChange((list) => [...list, section]);
+  };
   return (
     <div className="space-y-4">
       {sections.length === 0 ? (
@@ -41,69 +54,65 @@ export function SectionsEditor({ sections, onChange, unitSystem, isReadOnly }: S
           section={section}
           unitSystem={unitSystem}
           isReadOnly={isReadOnly}
-          onChange={(next) => update(index, next)}
-          onRemove={() => onChange(sections.filter((_, i) => i !== index))}
+          onUpdate={updateSection}
+          onRemove={removeSection}
         />
       ))}
       {isReadOnly ? null : (
         <div className="flex flex-wrap gap-2">
-          <Button variant="secondary" icon={<PlusIcon />} onClick={() => onChange([...sections, emptySection("rect")])}>
+          <Button variant="secondary" icon={<PlusIcon />} onClick={() => add("rect")}>
             Add rectangle
           </Button>
-          <Button variant="ghost" icon={<PlusIcon />} onClick={() => onChange([...sections, emptySection("polygon")])}>
+          <Button variant="ghost" icon={<PlusIcon />} onClick={() => add("polygon")}>
             Add outline
           </Button>
-          <Button variant="ghost" icon={<PlusIcon />} onClick={() => onChange([...sections, emptySection("area")])}>
+          <Button variant="ghost" icon={<PlusIcon />} onClick={() => add("area")}>
             Add area
           </Button>
         </div>
       )}
     </div>
   );
-}
+});
 
-function SectionCard({
+const SectionCard = memo(function SectionCard({
   index,
   section,
-  onChange,
+  onUpdate,
   onRemove,
   unitSystem,
   isReadOnly,
 }: {
   index: number;
   section: SectionDraft;
-  onChange: (next: SectionDraft) => void;
-  onRemove: () => void;
+  onUpdate: (sectionId: string, update: SectionUpdate) => void;
+  onRemove: (sectionId: string) => void;
   unitSystem: UnitSystem;
   isReadOnly: boolean;
 }) {
   const [isGridOpen, setIsGridOpen] = useState(false);
+  const update = (next: SectionUpdate) => onUpdate(section.id, next);
+  const edit = (patch: Partial<SectionDraft>) => update((s) => ({ ...s, ...patch }));
   const built = buildSection(section);
   // Messages already shown under their own field aren't repeated in the list below.
   const fieldErrors = [section.length, section.width, section.area, ...section.points.flatMap((p) => [p.x, p.y])].flatMap((e) => (e.error ? [e.error] : []));
   const area = built.section ? sectionAreaSqFt(built.section) : null;
   const name = sectionName(section, index);
-  const setPoint = (i: number, axis: "x" | "y", text: string) =>
-    onChange({
-      ...section,
-      points: section.points.map((p, k) => (k === i ? { ...p, [axis]: lengthEntry(text, { allowZero: true, system: unitSystem }) } : p)),
-    });
+  const setPoint = (i: number, axis: "x" | "y", text: string) => {
+    const entry = lengthEntry(text, { allowZero: true, system: unitSystem });
+    update((s) => ({ ...s, points: s.points.map((p, k) => (k === i ? { ...p, [axis]: entry } : p)) }));
+  };
+  const appendPoint = (point: PointDraft) => update((s) => ({ ...s, points: [...s.points, point] }));
   const addPoint = (point?: [number, number]) =>
-    onChange({
-      ...section,
-      points: [
-        ...section.points,
-        {
-          key: newId(),
-          x: point ? lengthEntry(lengthText(point[0], unitSystem), { allowZero: true, system: unitSystem }) : lengthEntry(""),
-          y: point ? lengthEntry(lengthText(point[1], unitSystem), { allowZero: true, system: unitSystem }) : lengthEntry(""),
-        },
-      ],
+    appendPoint({
+      key: newId(),
+      x: point ? lengthEntry(lengthText(point[0], unitSystem), { allowZero: true, system: unitSystem }) : lengthEntry(""),
+      y: point ? lengthEntry(lengthText(point[1], unitSystem), { allowZero: true, system: unitSystem }) : lengthEntry(""),
     });
   // Grid taps are exact feet; keep the exact value even when shown in metres.
   const addGridPoint = (point: [number, number]) => {
     const mk = (v: number) => ({ ...lengthEntry(lengthText(v, unitSystem), { allowZero: true, system: unitSystem }), value: v });
-    onChange({ ...section, points: [...section.points, { key: newId(), x: mk(point[0]), y: mk(point[1]) }] });
+    appendPoint({ key: newId(), x: mk(point[0]), y: mk(point[1]) });
   };
   const gridPoints = section.points.flatMap((p) => (p.x.value !== null && p.y.value !== null ? [[p.x.value, p.y.value] as [number, number]] : []));
 
@@ -119,7 +128,7 @@ function SectionCard({
           {area !== null ? <span className="ml-2 font-normal text-ink-600">{formatAreaSqFt(area, unitSystem)}</span> : null}
         </legend>
         {isReadOnly ? null : (
-          <Button variant="ghost" size="icon" aria-label={`Remove ${name}`} onClick={onRemove} className="-mt-2 -mr-2 shrink-0">
+          <Button variant="ghost" size="icon" aria-label={`Remove ${name}`} onClick={() => onRemove(section.id)} className="-mt-2 -mr-2 shrink-0">
             <CloseIcon />
           </Button>
         )}
@@ -133,7 +142,7 @@ function SectionCard({
             label={KIND_LABELS[kind].label}
             description={KIND_LABELS[kind].description}
             checked={section.kind === kind}
-            onChange={() => onChange({ ...section, kind })}
+            onChange={() => edit({ kind })}
           />
         ))}
       </RadioGroup>
@@ -142,7 +151,7 @@ function SectionCard({
         isOptional
         placeholder="e.g. Main block, Garage wing"
         value={section.label}
-        onChange={(event) => onChange({ ...section, label: event.target.value })}
+        onChange={(event) => edit({ label: event.target.value })}
       />
       {section.kind === "rect" ? (
         <div className="grid gap-4 sm:grid-cols-2">
@@ -150,13 +159,13 @@ function SectionCard({
             label="Length (along the ridge)"
             placeholder={`40' or 12.2 m`}
             entry={section.length}
-            onText={(text) => onChange({ ...section, length: lengthEntry(text, { system: unitSystem }) })}
+            onText={(text) => edit({ length: lengthEntry(text, { system: unitSystem }) })}
           />
           <EntryField
             label="Width (eave to eave)"
             placeholder={`28' 6"`}
             entry={section.width}
-            onText={(text) => onChange({ ...section, width: lengthEntry(text, { system: unitSystem }) })}
+            onText={(text) => edit({ width: lengthEntry(text, { system: unitSystem }) })}
           />
         </div>
       ) : section.kind === "area" ? (
@@ -165,7 +174,7 @@ function SectionCard({
           hint="An area in sq ft or m², or sides to multiply, such as 12 x 20 or 30 x 40 + 12 x 20."
           placeholder="12 x 20"
           entry={section.area}
-          onText={(text) => onChange({ ...section, area: areaEntry(text, unitSystem) })}
+          onText={(text) => edit({ area: areaEntry(text, unitSystem) })}
         />
       ) : (
         <div className="space-y-3">
@@ -187,7 +196,7 @@ function SectionCard({
                   size="icon"
                   aria-label={`Remove corner ${i + 1}`}
                   className="mt-7"
-                  onClick={() => onChange({ ...section, points: section.points.filter((_, k) => k !== i) })}
+                  onClick={() => update((s) => ({ ...s, points: s.points.filter((_, k) => k !== i) }))}
                 >
                   <CloseIcon />
                 </Button>
@@ -216,4 +225,4 @@ function SectionCard({
       ) : null}
     </fieldset>
   );
-}
+});

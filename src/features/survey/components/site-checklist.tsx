@@ -1,3 +1,4 @@
+import { memo } from "react";
 import type { SiteChecklist as Site } from "@shared/schemas/survey";
 import { cn } from "@/lib/cn";
 
@@ -27,7 +28,7 @@ export interface SiteChecklistProps {
 }
 
 /** Yes / No / Not checked for each observation: "no" is a finding too, so silence is not "no". */
-export function SiteChecklistFields({ site, onChange, isReadOnly }: SiteChecklistProps) {
+export const SiteChecklistFields = memo(function SiteChecklistFields({ site, onChange, isReadOnly }: SiteChecklistProps) {
   return (
     <ul className="divide-y divide-ink-100">
       {ITEMS.map((item) => (
@@ -74,4 +75,4 @@ export function SiteChecklistFields({ site, onChange, isReadOnly }: SiteChecklis
       ))}
     </ul>
   );
-}
+});

@@ -1,9 +1,10 @@
-import type { ReactNode } from "react";
+import { memo, useCallback, type ReactNode } from "react";
+import type { SiteChecklist } from "@shared/schemas/survey";
 import type { UnitSystem } from "@shared/units/format";
 import { Button } from "@/components/ui/button";
 import { Card, CardBody, CardDescription, CardHeader, CardTitle } from "@/components/ui/card";
 import { TextArea, TextField } from "@/components/ui/field";
-import type { SpaceDraft } from "../lib/drafts";
+import type { RoofDraft, SectionDraft, SpaceDraft, VentDraft } from "../lib/drafts";
 import { PlanSketch } from "./plan-sketch";
 import { RoofFields } from "./roof-fields";
 import { SectionsEditor } from "./sections-editor";
@@ -12,22 +13,26 @@ import { VentsEditor } from "./vents-editor";
 
 export interface SpaceEditorProps {
   draft: SpaceDraft;
-  onChange: (draft: SpaceDraft) => void;
+  /**
+   * Applies `update` to the current draft of space `spaceId`. The page passes the same callbacks on
+   * every render, so this editor and its parts render again only when their own data changes.
+   */
+  onUpdate: (spaceId: string, update: (draft: SpaceDraft) => SpaceDraft) => void;
   unitSystem: UnitSystem;
   isReadOnly: boolean;
   typicalIds: string[];
-  onTypicalChange: (ids: string[]) => void;
+  onTypicalChange: (spaceId: string, ids: string[]) => void;
   otherSpaces: { id: string; name: string; ventCount: number }[];
-  onCopyFrom: (spaceId: string) => void;
-  onDelete: () => void;
+  onCopyFrom: (toSpaceId: string, fromSpaceId: string) => void;
+  onDelete: (spaceId: string) => void;
   /** The photos panel, built by the page. */
   photos: ReactNode;
 }
 
 /** Everything recorded for one attic space, top to bottom in the order it is surveyed. */
-export function SpaceEditor({
+export const SpaceEditor = memo(function SpaceEditor({
   draft,
-  onChange,
+  onUpdate,
   unitSystem,
   isReadOnly,
   typicalIds,
@@ -37,6 +42,20 @@ export function SpaceEditor({
   onDelete,
   photos,
 }: SpaceEditorProps) {
+  const { id } = draft;
+  const edit = (patch: Partial<SpaceDraft>) => onUpdate(id, (d) => ({ ...d, ...patch }));
+  const setRoof = useCallback((roof: RoofDraft) => onUpdate(id, (d) => ({ ...d, roof })), [id, onUpdate]);
+  const updateSections = useCallback(
+    (update: (sections: SectionDraft[]) => SectionDraft[]) => onUpdate(id, (d) => ({ ...d, sections: update(d.sections) })),
+    [id, onUpdate],
+  );
+  const updateVents = useCallback(
+    (update: (vents: VentDraft[]) => VentDraft[]) => onUpdate(id, (d) => ({ ...d, vents: update(d.vents) })),
+    [id, onUpdate],
+  );
+  const setSite = useCallback((site: SiteChecklist) => onUpdate(id, (d) => ({ ...d, site })), [id, onUpdate]);
+  const setTypical = useCallback((ids: string[]) => onTypicalChange(id, ids), [id, onTypicalChange]);
+  const copyFrom = useCallback((fromSpaceId: string) => onCopyFrom(id, fromSpaceId), [id, onCopyFrom]);
   return (
     <div className="space-y-5">
       <Card>
@@ -46,11 +65,11 @@ export function SpaceEditor({
             value={draft.name}
             disabled={isReadOnly}
             error={draft.name.trim() === "" ? "Name the space (e.g. Main attic)." : undefined}
-            onChange={(event) => onChange({ ...draft, name: event.target.value })}
+            onChange={(event) => edit({ name: event.target.value })}
             className="flex-1"
           />
           {isReadOnly ? null : (
-            <Button variant="ghost" className="text-critical-700 hover:bg-critical-50" onClick={onDelete}>
+            <Button variant="ghost" className="text-critical-700 hover:bg-critical-50" onClick={() => onDelete(id)}>
               Delete space
             </Button>
           )}
@@ -63,7 +82,7 @@ export function SpaceEditor({
             <CardTitle id={`roof-${draft.id}`}>Roof</CardTitle>
           </CardHeader>
           <CardBody>
-            <RoofFields roof={draft.roof} onChange={(roof) => onChange({ ...draft, roof })} unitSystem={unitSystem} />
+            <RoofFields roof={draft.roof} onChange={setRoof} unitSystem={unitSystem} />
           </CardBody>
         </Card>
 
@@ -78,7 +97,7 @@ export function SpaceEditor({
             <PlanSketch sections={draft.sections} unitSystem={unitSystem} />
             <SectionsEditor
               sections={draft.sections}
-              onChange={(sections) => onChange({ ...draft, sections })}
+              onChange={updateSections}
               unitSystem={unitSystem}
               isReadOnly={isReadOnly}
             />
@@ -93,14 +112,14 @@ export function SpaceEditor({
           <CardBody>
             <VentsEditor
               vents={draft.vents}
-              onChange={(vents) => onChange({ ...draft, vents })}
+              onChange={updateVents}
               unitSystem={unitSystem}
               ridgeLengthFt={draft.roof.ridgeLength.value}
               eaveLengthFt={draft.roof.eaveLength.value}
               typicalIds={typicalIds}
-              onTypicalChange={onTypicalChange}
+              onTypicalChange={setTypical}
               otherSpaces={otherSpaces}
-              onCopyFrom={onCopyFrom}
+              onCopyFrom={copyFrom}
               isReadOnly={isReadOnly}
             />
           </CardBody>
@@ -112,7 +131,7 @@ export function SpaceEditor({
             <CardDescription>What you saw in this space. "Not checked" is fine; it isn't counted as a no.</CardDescription>
           </CardHeader>
           <CardBody>
-            <SiteChecklistFields site={draft.site} onChange={(site) => onChange({ ...draft, site })} isReadOnly={isReadOnly} />
+            <SiteChecklistFields site={draft.site} onChange={setSite} isReadOnly={isReadOnly} />
           </CardBody>
         </Card>
       </fieldset>
@@ -132,10 +151,10 @@ export function SpaceEditor({
             rows={3}
             disabled={isReadOnly}
             value={draft.notes}
-            onChange={(event) => onChange({ ...draft, notes: event.target.value })}
+            onChange={(event) => edit({ notes: event.target.value })}
           />
         </CardBody>
       </Card>
     </div>
   );
-}
+});

@@ -1,5 +1,5 @@
 import { useQueryClient } from "@tanstack/react-query";
-import { useEffect, useMemo, useState } from "react";
+import { memo, useEffect, useMemo, useState } from "react";
 import type { SpaceRoof } from "@shared/schemas/survey";
 import type { UnitSystem } from "@shared/units/format";
 import type { Section, Vent } from "@shared/ventilation/index";
@@ -35,7 +35,7 @@ const describe = (s: { name: string; sections: unknown[]; vents: unknown[] }) =>
   `"${s.name}" with ${s.sections.length} section${s.sections.length === 1 ? "" : "s"} and ${s.vents.length} vent${s.vents.length === 1 ? "" : "s"}.`;
 
 /** Saves one attic space in the background; renders only the conflict dialog when needed. */
-export function SpaceSaver({ projectId, draft, init, unitSystem, isReadOnly, resolveRequest, onState, onReplaceDraft, onGone }: SpaceSaverProps) {
+export const SpaceSaver = memo(function SpaceSaver({ projectId, draft, init, unitSystem, isReadOnly, resolveRequest, onState, onReplaceDraft, onGone }: SpaceSaverProps) {
   const queryClient = useQueryClient();
   const [lastSaved, setLastSaved] = useState(init.lastSaved);
   const built = useMemo(() => buildSpace(draft, lastSaved), [draft, lastSaved]);
@@ -115,4 +115,4 @@ export function SpaceSaver({ projectId, draft, init, unitSystem, isReadOnly, res
       }}
     />
   );
-}
+});

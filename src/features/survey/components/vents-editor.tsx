@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { memo, useCallback, useState } from "react";
 import type { UnitSystem } from "@shared/units/format";
 import { formatNfaSqIn } from "@shared/units/format";
 import { VENT_KIND_LABELS, VENT_KINDS, ventNfa, type VentKind } from "@shared/ventilation/index";
@@ -25,9 +25,13 @@ const CONTROL_OPTIONS = [
   { value: "solar", label: "Solar (runs with sun)" },
 ];
 
+type VentsUpdate = (vents: VentDraft[]) => VentDraft[];
+type VentUpdate = (vent: VentDraft) => VentDraft;
+
 export interface VentsEditorProps {
   vents: VentDraft[];
-  onChange: (vents: VentDraft[]) => void;
+  /** Given a function of the current vents, so the callbacks below stay the same from render to render. */
+  onChange: (update: VentsUpdate) => void;
   unitSystem: UnitSystem;
   ridgeLengthFt: number | null;
   eaveLengthFt: number | null;
@@ -40,7 +44,7 @@ export interface VentsEditorProps {
   isReadOnly?: boolean;
 }
 
-export function VentsEditor({
+export const VentsEditor = memo(function VentsEditor({
   vents,
   onChange,
   unitSystem,
@@ -57,12 +61,17 @@ export function VentsEditor({
   const [toRemove, setToRemove] = useState<number | null>(null);
 
   const add = (vent: VentDraft, isTypical: boolean) => {
-    onChange([...vents, vent]);
+    onChange((list) => [...list, vent]);
     if (isTypical) onTypicalChange([...typicalIds, vent.id]);
     // Bring the new vent into view so the typical values can be checked straight away.
     setTimeout(() => document.getElementById(`part-${vent.id}`)?.scrollIntoView({ behavior: "smooth", block: "start" }), 50);
   };
-  const update = (index: number, next: VentDraft) => onChange(vents.map((v, i) => (i === index ? next : v)));
+  // Keyed by id and stable, so editing one vent leaves the other (memoised) cards alone.
+  const updateVent = useCallback(
+    (ventId: string, update: VentUpdate) => onChange((list) => list.map((v) => (v.id === ventId ? update(v) : v))),
+    [onChange],
+  );
+  const markChecked = useCallback((ventId: string) => onTypicalChange(typicalIds.filter((id) => id !== ventId)), [onTypicalChange, typicalIds]);
   const copyable = otherSpaces.filter((s) => s.ventCount > 0);
 
   return (
@@ -129,9 +138,9 @@ export function VentsEditor({
               unitSystem={unitSystem}
               isTypical={!isReadOnly && typicalIds.includes(vent.id)}
               isReadOnly={isReadOnly}
-              onChecked={() => onTypicalChange(typicalIds.filter((id) => id !== vent.id))}
-              onChange={(next) => update(index, next)}
-              onRemove={() => setToRemove(index)}
+              onChecked={markChecked}
+              onUpdate={updateVent}
+              onRemove={setToRemove}
             />
           </li>
         ))}
@@ -146,22 +155,22 @@ export function VentsEditor({
         onConfirm={() => {
           if (toRemove === null) return;
           const id = vents[toRemove]?.id;
-          onChange(vents.filter((_, i) => i !== toRemove));
+          onChange((list) => list.filter((_, i) => i !== toRemove));
           if (id) onTypicalChange(typicalIds.filter((t) => t !== id));
           setToRemove(null);
         }}
       />
     </div>
   );
-}
+});
 
-function VentCard({
+const VentCard = memo(function VentCard({
   vent,
   index,
   unitSystem,
   isTypical,
   onChecked,
-  onChange,
+  onUpdate,
   onRemove,
   isReadOnly,
 }: {
@@ -170,10 +179,11 @@ function VentCard({
   index: number;
   unitSystem: UnitSystem;
   isTypical: boolean;
-  onChecked: () => void;
-  onChange: (next: VentDraft) => void;
-  onRemove: () => void;
+  onChecked: (ventId: string) => void;
+  onUpdate: (ventId: string, update: VentUpdate) => void;
+  onRemove: (index: number) => void;
 }) {
+  const edit = (patch: Partial<VentDraft>) => onUpdate(vent.id, (v) => ({ ...v, ...patch }));
   const mode = SIZE_MODE[vent.kind];
   const name = ventName(vent, index);
   const built = buildVent(vent);
@@ -194,7 +204,7 @@ function VentCard({
           ) : null}
         </div>
         {isReadOnly ? null : (
-          <Button variant="ghost" size="icon" aria-label={`Remove ${name}`} onClick={onRemove} className="-mt-2 -mr-2 shrink-0">
+          <Button variant="ghost" size="icon" aria-label={`Remove ${name}`} onClick={() => onRemove(index)} className="-mt-2 -mr-2 shrink-0">
             <CloseIcon />
           </Button>
         )}
@@ -204,7 +214,7 @@ function VentCard({
           <WarningIcon className="size-4 text-warning-600" />
           <Badge tone="outline">Typical values</Badge>
           <span className="flex-1 text-sm text-warning-900">Check these against the product label.</span>
-          <Button variant="secondary" size="sm" onClick={onChecked}>
+          <Button variant="secondary" size="sm" onClick={() => onChecked(vent.id)}>
             Checked against label
           </Button>
         </div>
@@ -216,7 +226,7 @@ function VentCard({
           value={vent.kind}
           onChange={(event) => {
             const kind = event.target.value as VentKind;
-            onChange({ ...vent, kind, location: DEFAULT_LOCATION[kind] });
+            edit({ kind, location: DEFAULT_LOCATION[kind] });
           }}
         />
         <TextField
@@ -224,7 +234,7 @@ function VentCard({
           isOptional
           placeholder="e.g. North slope, garage gable"
           value={vent.label}
-          onChange={(event) => onChange({ ...vent, label: event.target.value })}
+          onChange={(event) => edit({ label: event.target.value })}
         />
       </div>
       <RadioGroup legend="Position" isInline>
@@ -233,14 +243,14 @@ function VentCard({
           label="Upper (exhaust)"
           description="High on the roof or gable"
           checked={vent.location === "upper"}
-          onChange={() => onChange({ ...vent, location: "upper" })}
+          onChange={() => edit({ location: "upper" })}
         />
         <Radio
           name={`loc-${vent.id}`}
           label="Lower (intake)"
           description="At the eaves or soffits"
           checked={vent.location === "lower"}
-          onChange={() => onChange({ ...vent, location: "lower" })}
+          onChange={() => edit({ location: "lower" })}
         />
       </RadioGroup>
 
@@ -251,7 +261,7 @@ function VentCard({
             hint="Measured along the vent."
             placeholder={`34'`}
             entry={vent.length}
-            onText={(text) => onChange({ ...vent, length: lengthEntry(text, { system: unitSystem }) })}
+            onText={(text) => edit({ length: lengthEntry(text, { system: unitSystem }) })}
           />
           <EntryField
             label="NFA per foot"
@@ -260,7 +270,7 @@ function VentCard({
             suffix="sq in/ft"
             showUnderstood={false}
             entry={vent.nfaPerFt}
-            onText={(text) => onChange({ ...vent, nfaPerFt: numberEntry(text, { max: 200, unit: "sq in per foot" }) })}
+            onText={(text) => edit({ nfaPerFt: numberEntry(text, { max: 200, unit: "sq in per foot" }) })}
           />
         </div>
       ) : mode === "per-unit" ? (
@@ -270,7 +280,7 @@ function VentCard({
             inputMode="numeric"
             showUnderstood={false}
             entry={vent.quantity}
-            onText={(text) => onChange({ ...vent, quantity: numberEntry(text, { isWhole: true, min: 1, max: 1000 }) })}
+            onText={(text) => edit({ quantity: numberEntry(text, { isWhole: true, min: 1, max: 1000 }) })}
           />
           <EntryField
             label="NFA of each"
@@ -279,7 +289,7 @@ function VentCard({
             suffix="sq in"
             showUnderstood={false}
             entry={vent.nfaPerUnit}
-            onText={(text) => onChange({ ...vent, nfaPerUnit: numberEntry(text, { max: 100_000, unit: "sq in" }) })}
+            onText={(text) => edit({ nfaPerUnit: numberEntry(text, { max: 100_000, unit: "sq in" }) })}
           />
         </div>
       ) : mode === "gross" ? (
@@ -290,14 +300,14 @@ function VentCard({
               hint="Gross size, in inches unless you say otherwise."
               inputMode="decimal"
               entry={vent.grossWidth}
-              onText={(text) => onChange({ ...vent, grossWidth: inchEntry(text) })}
+              onText={(text) => edit({ grossWidth: inchEntry(text) })}
             />
             <EntryField
               label="Opening height"
               hint="Gross size, in inches unless you say otherwise."
               inputMode="decimal"
               entry={vent.grossHeight}
-              onText={(text) => onChange({ ...vent, grossHeight: inchEntry(text) })}
+              onText={(text) => edit({ grossHeight: inchEntry(text) })}
             />
           </div>
           <div className="grid gap-4 sm:grid-cols-2">
@@ -309,13 +319,13 @@ function VentCard({
                 { value: "1/16", label: "1/16 in insect screen" },
               ]}
               value={vent.mesh}
-              onChange={(event) => onChange({ ...vent, mesh: event.target.value as VentDraft["mesh"] })}
+              onChange={(event) => edit({ mesh: event.target.value as VentDraft["mesh"] })}
             />
             <Checkbox
               label="Has louvers"
               description="Slats that shed rain reduce the free area further."
               checked={vent.louvers}
-              onChange={(event) => onChange({ ...vent, louvers: event.target.checked })}
+              onChange={(event) => edit({ louvers: event.target.checked })}
               className="sm:pt-7"
             />
           </div>
@@ -330,7 +340,7 @@ function VentCard({
               suffix="cfm"
               showUnderstood={false}
               entry={vent.cfm}
-              onText={(text) => onChange({ ...vent, cfm: numberEntry(text, { max: 50_000, unit: "cfm" }) })}
+              onText={(text) => edit({ cfm: numberEntry(text, { max: 50_000, unit: "cfm" }) })}
             />
             <EntryField
               label="How many"
@@ -339,7 +349,7 @@ function VentCard({
               inputMode="numeric"
               showUnderstood={false}
               entry={vent.quantity}
-              onText={(text) => onChange({ ...vent, quantity: numberEntry(text, { isWhole: true, min: 1, max: 1000 }) })}
+              onText={(text) => edit({ quantity: numberEntry(text, { isWhole: true, min: 1, max: 1000 }) })}
             />
             <Select
               label="Mounting"
@@ -349,14 +359,14 @@ function VentCard({
               ]}
               placeholder="Not recorded"
               value={vent.mounting}
-              onChange={(event) => onChange({ ...vent, mounting: event.target.value as VentDraft["mounting"] })}
+              onChange={(event) => edit({ mounting: event.target.value as VentDraft["mounting"] })}
             />
             <Select
               label="Control"
               options={CONTROL_OPTIONS}
               placeholder="Not recorded"
               value={vent.control}
-              onChange={(event) => onChange({ ...vent, control: event.target.value as VentDraft["control"] })}
+              onChange={(event) => edit({ control: event.target.value as VentDraft["control"] })}
             />
             <EntryField
               label="Thermostat set point"
@@ -365,7 +375,7 @@ function VentCard({
               suffix="°F"
               showUnderstood={false}
               entry={vent.setPoint}
-              onText={(text) => onChange({ ...vent, setPoint: numberEntry(text, { min: 40, max: 180, unit: "°F" }) })}
+              onText={(text) => edit({ setPoint: numberEntry(text, { min: 40, max: 180, unit: "°F" }) })}
             />
             {vent.mounting === "gable" || vent.kind === "powered-gable" ? (
               <Select
@@ -377,7 +387,7 @@ function VentCard({
                 ]}
                 placeholder="Not checked"
                 value={vent.sealedToOpening}
-                onChange={(event) => onChange({ ...vent, sealedToOpening: event.target.value as VentDraft["sealedToOpening"] })}
+                onChange={(event) => edit({ sealedToOpening: event.target.value as VentDraft["sealedToOpening"] })}
               />
             ) : null}
           </div>
@@ -389,11 +399,11 @@ function VentCard({
         isOptional
         placeholder={`2'`}
         entry={vent.drop}
-        onText={(text) => onChange({ ...vent, drop: lengthEntry(text, { allowZero: true, system: unitSystem }) })}
+        onText={(text) => edit({ drop: lengthEntry(text, { allowZero: true, system: unitSystem }) })}
         className="sm:max-w-xs"
       />
       {mode === "powered" ? (
-        <FanDiagnosticsSteps value={vent.diagnostics} fanName={name} onChange={(diagnostics) => onChange({ ...vent, diagnostics })} />
+        <FanDiagnosticsSteps value={vent.diagnostics} fanName={name} onChange={(diagnostics) => edit({ diagnostics })} />
       ) : null}
       {built.problems.length > 0 && hasTyped ? (
         <ul className="space-y-1 text-sm text-warning-800">
@@ -406,4 +416,4 @@ function VentCard({
       ) : null}
     </section>
   );
-}
+});

@@ -283,7 +283,33 @@ function zodMessages(issues: { path: PropertyKey[]; message: string }[]): string
   return issues.map((i) => i.message);
 }
 
+/*
+ * Drafts are replaced, never changed in place, so each part's check is kept beside the part: a
+ * keystroke in one section checks that section again and reuses the others' results, in the live
+ * analysis and in the save alike. The results are shared, so callers only read them.
+ */
+const builtSections = new WeakMap<SectionDraft, { section: Section | null; problems: string[] }>();
+const builtVents = new WeakMap<VentDraft, { vent: Vent | null; problems: string[] }>();
+
 export function buildSection(draft: SectionDraft): { section: Section | null; problems: string[] } {
+  let built = builtSections.get(draft);
+  if (!built) {
+    built = checkSection(draft);
+    builtSections.set(draft, built);
+  }
+  return built;
+}
+
+export function buildVent(draft: VentDraft): { vent: Vent | null; problems: string[] } {
+  let built = builtVents.get(draft);
+  if (!built) {
+    built = checkVent(draft);
+    builtVents.set(draft, built);
+  }
+  return built;
+}
+
+function checkSection(draft: SectionDraft): { section: Section | null; problems: string[] } {
   const problems: string[] = [];
   const base = { id: draft.id, ...(draft.label.trim() ? { label: draft.label.trim() } : {}) };
   let candidate: unknown;
@@ -310,7 +336,7 @@ export function buildSection(draft: SectionDraft): { section: Section | null; pr
   return { section: parsed.data, problems: [] };
 }
 
-export function buildVent(draft: VentDraft): { vent: Vent | null; problems: string[] } {
+function checkVent(draft: VentDraft): { vent: Vent | null; problems: string[] } {
   const problems: string[] = [];
   const mode = SIZE_MODE[draft.kind];
   const vent: Record<string, unknown> = { id: draft.id, kind: draft.kind, location: draft.location };

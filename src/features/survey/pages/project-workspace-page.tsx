@@ -1,5 +1,5 @@
 import { useQuery, useQueryClient } from "@tanstack/react-query";
-import { useCallback, useMemo, useState, type ReactNode } from "react";
+import { useCallback, useLayoutEffect, useMemo, useRef, useState, type ReactNode } from "react";
 import { Link } from "react-router";
 import { toAtticInput } from "@shared/survey/to-attic-input";
 import type { UnitSystem } from "@shared/units/format";
@@ -30,6 +30,8 @@ import { SpaceEditor } from "../components/space-editor";
 import { SpaceSaver, type SpaceSaverInit } from "../components/space-saver";
 import type { SaveState } from "@/lib/use-autosave";
 import { useIsOnline } from "../hooks/use-is-online";
+import { useMediaQuery } from "../hooks/use-media-query";
+import { useStableJson } from "../hooks/use-stable-json";
 import {
   buildSpace,
   copyVents,
@@ -115,6 +117,8 @@ function initProject(record: ProjectRecord) {
 }
 
 const SPACE_NAME_IDEAS = ["Main attic", "Garage attic", "Bonus room attic", "Addition attic"];
+/** One empty list for every space without typical vents, so the vent editor's props stay equal. */
+const NO_TYPICAL_VENTS: string[] = [];
 
 function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: ProjectWorkspacePageProps & { detail: ProjectDetail }) {
   const queryClient = useQueryClient();
@@ -124,6 +128,8 @@ function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: Pr
   const [entries, setEntries] = useState<SpaceEntry[]>(() => detail.spaces.map((s) => initSpace(s, unitSystem)));
   const [activeId, setActiveId] = useState<string | null>(() => detail.spaces[0]?.id ?? null);
   const [phoneTab, setPhoneTab] = useState<"survey" | "analysis">("survey");
+  // Tailwind's lg: from there up the analysis stands beside the form, below it only on its tab.
+  const isSideBySide = useMediaQuery("(min-width: 64rem)");
   const [typical, setTypical] = useState<Record<string, string[]>>(() =>
     Object.fromEntries(detail.spaces.map((s) => [s.id, readTypicalVents(s.id)])),
   );
@@ -138,8 +144,13 @@ function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: Pr
   const photosQuery = useQuery(surveyQueries.project(projectId));
   const photos: PhotoRecord[] = photosQuery.data?.photos ?? detail.photos;
 
-  const checked = checkFields(fields);
+  const checked = useMemo(() => checkFields(fields), [fields]);
   const active = entries.find((e) => e.draft.id === activeId) ?? entries[0] ?? null;
+  // For the few handlers that need the whole list when they run, without changing on every edit.
+  const entriesRef = useRef(entries);
+  useLayoutEffect(() => {
+    entriesRef.current = entries;
+  });
 
   const onSpaceState = useCallback((spaceId: string, state: SaveState, problems: Problem[], retry: () => void) => {
     setStates((prev) => ({ ...prev, [spaceId]: { state, problems, retry } }));
@@ -155,16 +166,35 @@ function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: Pr
     [queryClient, projectId],
   );
 
-  const setDraft = (draft: SpaceDraft) => setEntries((list) => list.map((e) => (e.draft.id === draft.id ? { ...e, draft } : e)));
-  const setTypicalFor = (spaceId: string, ids: string[]) => {
+  // Stable, and keyed by space id: a keystroke replaces one draft and leaves every other prop as it was.
+  const updateDraft = useCallback((spaceId: string, update: (draft: SpaceDraft) => SpaceDraft) => {
+    setEntries((list) => list.map((e) => (e.draft.id === spaceId ? { ...e, draft: update(e.draft) } : e)));
+  }, []);
+  const setDraft = useCallback((draft: SpaceDraft) => updateDraft(draft.id, () => draft), [updateDraft]);
+  const setTypicalFor = useCallback((spaceId: string, ids: string[]) => {
     writeTypicalVents(spaceId, ids);
     setTypical((t) => ({ ...t, [spaceId]: ids }));
-  };
-  const removeEntry = (spaceId: string) => {
+  }, []);
+  const removeEntry = useCallback((spaceId: string) => {
     setEntries((list) => list.filter((e) => e.draft.id !== spaceId));
     setStates(({ [spaceId]: _gone, ...rest }) => rest);
-    if (activeId === spaceId) setActiveId(entries.find((e) => e.draft.id !== spaceId)?.draft.id ?? null);
-  };
+    const next = entriesRef.current.find((e) => e.draft.id !== spaceId)?.draft.id ?? null;
+    setActiveId((id) => (id === spaceId ? next : id));
+  }, []);
+  const copyVentsInto = useCallback(
+    (toSpaceId: string, fromSpaceId: string) => {
+      const from = entriesRef.current.find((e) => e.draft.id === fromSpaceId);
+      if (!from) return;
+      const copies = copyVents(from.draft.vents);
+      updateDraft(toSpaceId, (draft) => ({ ...draft, vents: [...draft.vents, ...copies] }));
+      toast.success(`${copies.length} vent${copies.length === 1 ? "" : "s"} copied from ${from.draft.name}`, {
+        description: "Fan checks were not copied: each fan is checked on its own.",
+      });
+    },
+    [updateDraft],
+  );
+  const askToDelete = useCallback((spaceId: string) => setToDelete(entriesRef.current.find((e) => e.draft.id === spaceId) ?? null), []);
+  const patchFields = useCallback((patch: Partial<ProjectFields>) => setFields((f) => ({ ...f, ...patch })), []);
 
   function addSpace(name: string) {
     createSpace.mutate(
@@ -185,26 +215,22 @@ function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: Pr
     );
   }
 
-  const basis = {
-    codeBasis: fields.codeBasis,
-    climateZone: fields.climateZone,
-    ceilingVaporRetarder: fields.ceilingVaporRetarder,
-    roofColor: fields.roofColor,
-  };
+  const activeDraft = active?.draft ?? null;
+  const { codeBasis, climateZone, ceilingVaporRetarder, roofColor } = fields;
   const analysis = useMemo(() => {
-    if (!active) return null;
-    const input = toAtticInput(basis, liveSurvey(active.draft));
+    if (!activeDraft) return null;
+    const input = toAtticInput({ codeBasis, climateZone, ceilingVaporRetarder, roofColor }, liveSurvey(activeDraft));
     return { input, result: tryAnalyzeAttic(input) };
-    // basis fields are listed one by one so the object identity doesn't recompute every render
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [active, basis.codeBasis, basis.climateZone, basis.ceilingVaporRetarder, basis.roofColor]);
+  }, [activeDraft, codeBasis, climateZone, ceilingVaporRetarder, roofColor]);
 
   const allStates = Object.values(states);
   const combined = combineStates(allStates.map((s) => s.state));
   const heldCount = allStates.reduce((n, s) => n + s.problems.length, 0);
-  const activeProblems = active ? (states[active.draft.id]?.problems ?? buildSpace(active.draft).problems) : [];
+  const activeProblems = useStableJson(
+    activeDraft ? (states[activeDraft.id]?.problems ?? buildSpace(activeDraft).problems) : [],
+  );
 
-  const jumpTo = (partId: string) => {
+  const jumpTo = useCallback((partId: string) => {
     // From the phone's analysis tab back to the entry that needs finishing.
     setPhoneTab("survey");
     setTimeout(() => {
@@ -212,20 +238,56 @@ function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: Pr
       el?.scrollIntoView({ behavior: "smooth", block: "start" });
       el?.querySelector<HTMLElement>("input, select, textarea")?.focus({ preventScroll: true });
     }, 50);
-  };
+  }, []);
 
-  const findingOptions = analysis?.result.ok
-    ? [...new Map(analysis.result.analysis.findings.map((f) => [f.code, f.title])).entries()].map(([value, label]) => ({ value, label }))
-    : [];
-  const describeAttachment = (photo: PhotoRecord) => {
-    const space = entries.find((e) => e.draft.id === photo.spaceId)?.draft;
-    if (photo.ventId) {
-      const index = space?.vents.findIndex((v) => v.id === photo.ventId) ?? -1;
-      return space && index >= 0 ? ventName(space.vents[index]!, index) : "A vent no longer listed";
-    }
-    if (photo.findingCode) return findingOptions.find((f) => f.value === photo.findingCode)?.label ?? `Finding: ${photo.findingCode.replace(/-/g, " ")}`;
-    return space ? `${space.name} in general` : "The project";
-  };
+  const findingOptions = useStableJson(
+    analysis?.result.ok
+      ? [...new Map(analysis.result.analysis.findings.map((f) => [f.code, f.title])).entries()].map(([value, label]) => ({ value, label }))
+      : [],
+  );
+  // The photos panel shows only the active space's photos, so only its vents and name are needed.
+  const activeSpaceId = active?.draft.id ?? null;
+  const activeName = active?.draft.name ?? "";
+  const activeVents = active?.draft.vents;
+  const describeAttachment = useCallback(
+    (photo: PhotoRecord) => {
+      const space = photo.spaceId === activeSpaceId && activeVents ? { name: activeName, vents: activeVents } : undefined;
+      if (photo.ventId) {
+        const index = space?.vents.findIndex((v) => v.id === photo.ventId) ?? -1;
+        return space && index >= 0 ? ventName(space.vents[index]!, index) : "A vent no longer listed";
+      }
+      if (photo.findingCode) return findingOptions.find((f) => f.value === photo.findingCode)?.label ?? `Finding: ${photo.findingCode.replace(/-/g, " ")}`;
+      return space ? `${space.name} in general` : "The project";
+    },
+    [activeSpaceId, activeName, activeVents, findingOptions],
+  );
+  const ventOptions = useMemo(() => (activeVents ?? []).map((v, i) => ({ value: v.id, label: ventName(v, i) })), [activeVents]);
+  // Built here only when its inputs change, so typing a length doesn't touch the photos.
+  const photosPanel = useMemo(
+    () =>
+      activeSpaceId ? (
+        <PhotosPanel
+          projectId={projectId}
+          spaceId={activeSpaceId}
+          spaceName={activeName || "This space"}
+          photos={photos}
+          canEdit={canEdit}
+          vents={ventOptions}
+          findings={findingOptions}
+          describeAttachment={describeAttachment}
+        />
+      ) : null,
+    [projectId, activeSpaceId, activeName, photos, canEdit, ventOptions, findingOptions, describeAttachment],
+  );
+  const otherSpaces = useStableJson(
+    entries
+      .filter((e) => e.draft.id !== activeSpaceId)
+      .map((e) => ({ id: e.draft.id, name: e.draft.name, ventCount: e.draft.vents.length })),
+  );
+  const detailsForm = useMemo(
+    () => (isDetailsOpen ? renderDetails({ value: fields, onChange: patchFields, isReadOnly: !canEdit, errors: checked.errors }) : null),
+    [isDetailsOpen, renderDetails, fields, patchFields, canEdit, checked.errors],
+  );
 
   const spaceTabs = entries.map((e) => {
     const s = states[e.draft.id]?.state.kind;
@@ -335,16 +397,7 @@ function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: Pr
               </span>
               <ChevronDownIcon className={cn("size-6 text-ink-600 transition-transform", isDetailsOpen && "rotate-180")} />
             </button>
-            {isDetailsOpen ? (
-              <CardBody className="border-t border-ink-100">
-                {renderDetails({
-                  value: fields,
-                  onChange: (patch) => setFields((f) => ({ ...f, ...patch })),
-                  isReadOnly: !canEdit,
-                  errors: checked.errors,
-                })}
-              </CardBody>
-            ) : null}
+            {isDetailsOpen ? <CardBody className="border-t border-ink-100">{detailsForm}</CardBody> : null}
           </Card>
 
           <section aria-labelledby="spaces-title" className="space-y-3">
@@ -387,36 +440,15 @@ function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: Pr
               <SpaceEditor
                 key={active.draft.id}
                 draft={active.draft}
-                onChange={setDraft}
+                onUpdate={updateDraft}
                 unitSystem={unitSystem}
                 isReadOnly={!canEdit}
-                typicalIds={typical[active.draft.id] ?? []}
-                onTypicalChange={(ids) => setTypicalFor(active.draft.id, ids)}
-                otherSpaces={entries
-                  .filter((e) => e.draft.id !== active.draft.id)
-                  .map((e) => ({ id: e.draft.id, name: e.draft.name, ventCount: e.draft.vents.length }))}
-                onCopyFrom={(fromId) => {
-                  const from = entries.find((e) => e.draft.id === fromId);
-                  if (!from) return;
-                  const copies = copyVents(from.draft.vents);
-                  setDraft({ ...active.draft, vents: [...active.draft.vents, ...copies] });
-                  toast.success(`${copies.length} vent${copies.length === 1 ? "" : "s"} copied from ${from.draft.name}`, {
-                    description: "Fan checks were not copied: each fan is checked on its own.",
-                  });
-                }}
-                onDelete={() => setToDelete(active)}
-                photos={
-                  <PhotosPanel
-                    projectId={projectId}
-                    spaceId={active.draft.id}
-                    spaceName={active.draft.name || "This space"}
-                    photos={photos}
-                    canEdit={canEdit}
-                    vents={active.draft.vents.map((v, i) => ({ value: v.id, label: ventName(v, i) }))}
-                    findings={findingOptions}
-                    describeAttachment={describeAttachment}
-                  />
-                }
+                typicalIds={typical[active.draft.id] ?? NO_TYPICAL_VENTS}
+                onTypicalChange={setTypicalFor}
+                otherSpaces={otherSpaces}
+                onCopyFrom={copyVentsInto}
+                onDelete={askToDelete}
+                photos={photosPanel}
               />
             </div>
           ) : null}
@@ -432,14 +464,15 @@ function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: Pr
             phoneTab !== "analysis" && "max-lg:hidden",
           )}
         >
-          {active && analysis ? (
+          {activeDraft && analysis ? (
             <AnalysisPanel
-              spaceName={active.draft.name || "This space"}
+              spaceName={activeDraft.name || "This space"}
               input={analysis.input}
               result={analysis.result}
               problems={activeProblems}
               unitSystem={unitSystem}
               onJumpTo={jumpTo}
+              isShown={isSideBySide || phoneTab === "analysis"}
             />
           ) : (
             <p className="text-base text-ink-700">Add an attic space to see its ventilation check here.</p>
