@@ -262,6 +262,17 @@ describe("the estimator's survey with the keyboard alone", () => {
     await expectFocusOn(page, /^Remove Vent 2 \(ridge vent\)$/, "button");
     expect(await page.getByRole("heading", { name: "Vent 2 (ridge vent)" }).count(), "Escape removed nothing").toBe(1);
 
+    // Confirmed, the removal takes its button away with the card: focus stays in the page content, near the vents, never on the page body.
+    await page.keyboard.press("Enter");
+    await confirm.waitFor();
+    await tabTo(page, /^Remove vent$/, { role: "button", maxTabs: 4 });
+    await page.keyboard.press("Enter");
+    await confirm.waitFor({ state: "detached" });
+    await page.getByRole("heading", { name: "Vent 2 (ridge vent)" }).waitFor({ state: "detached" });
+    const afterRemoval = await focused(page);
+    expect(afterRemoval.isInMain, `after the removal, focus stays in the page content (${describeFocus(afterRemoval)})`).toBe(true);
+    expect(await page.evaluate(() => document.activeElement === document.body || document.activeElement?.id === "main"), "focus is on a control, not the page or its main area").toBe(false);
+
     // The "Add an attic space" dialog, reached backwards with Shift+Tab: its name field has focus; Escape returns to "Add space".
     await tabTo(page, /^Add space$/, { role: "button", isBackwards: true, maxTabs: 120 });
     await page.keyboard.press("Enter");

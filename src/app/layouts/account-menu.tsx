@@ -76,7 +76,8 @@ export function AccountMenu() {
         >
           {initials(user.name, user.email)}
         </span>
-        <span className="hidden min-w-0 flex-col leading-tight lg:flex">
+        {/* Hidden from screen readers: the sr-only line below names the button once, with these words in it. */}
+        <span aria-hidden="true" className="hidden min-w-0 flex-col leading-tight lg:flex">
           <span className="max-w-44 truncate text-sm font-semibold">{user.name || user.email}</span>
           <span className="max-w-44 truncate text-xs text-ink-300">{company.name}</span>
         </span>

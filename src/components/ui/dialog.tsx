@@ -23,12 +23,41 @@ export interface DialogContentProps {
  * Notes the element that had focus as the dialog opens. It renders with the dialog's content, before
  * anything inside takes focus (an autoFocus field included), so what it reads is the opener.
  */
-function RememberOpener({ openerRef }: { openerRef: RefObject<HTMLElement | null> }) {
-  const [opener] = useState(() => document.activeElement as HTMLElement | null);
+function RememberOpener({ openerRef }: { openerRef: RefObject<Opener | null> }) {
+  const [opener] = useState(openerNow);
   useLayoutEffect(() => {
     openerRef.current = opener;
   }, [opener, openerRef]);
   return null;
+}
+
+const FOCUSABLE = 'button:not([disabled]), a[href], input:not([disabled]), select:not([disabled]), textarea:not([disabled]), [tabindex]:not([tabindex="-1"])';
+
+/**
+ * When the dialog removed what opened it (a "Remove" that deleted its card), keyboard users should
+ * carry on near where they were, not from the top of the page: the first control in the nearest
+ * part of the page still there, else the main content.
+ */
+function nearestFocusableAfterRemoval(opener: Opener): HTMLElement | null {
+  for (const node of opener.ancestors) {
+    if (!node.isConnected) continue;
+    const control = node.querySelector<HTMLElement>(FOCUSABLE);
+    if (control) return control;
+  }
+  return document.getElementById("main");
+}
+
+/** The element that opened a dialog, and its ancestors as they were (a removed node forgets its parent). */
+interface Opener {
+  element: HTMLElement;
+  ancestors: HTMLElement[];
+}
+function openerNow(): Opener | null {
+  const element = document.activeElement as HTMLElement | null;
+  if (!element) return null;
+  const ancestors: HTMLElement[] = [];
+  for (let node = element.parentElement; node && node !== document.body; node = node.parentElement) ancestors.push(node);
+  return { element, ancestors };
 }
 
 /**
@@ -37,7 +66,7 @@ function RememberOpener({ openerRef }: { openerRef: RefObject<HTMLElement | null
  */
 export function DialogContent({ title, description, children, className, footer }: DialogContentProps) {
   // Radix hands focus back only to a DialogTrigger; our dialogs are opened by state, so the opener is kept here.
-  const openerRef = useRef<HTMLElement | null>(null);
+  const openerRef = useRef<Opener | null>(null);
   return (
     <RadixDialog.Portal>
       <RadixDialog.Overlay className="fixed inset-0 z-40 bg-ink-950/55 data-[state=open]:animate-[fade-in_150ms_ease-out]" />
@@ -52,9 +81,11 @@ export function DialogContent({ title, description, children, className, footer 
         {...(description ? {} : { "aria-describedby": undefined })}
         onCloseAutoFocus={(event) => {
           const opener = openerRef.current;
-          if (!opener?.isConnected || opener === document.body) return;
+          if (!opener || opener.element === document.body) return;
+          const target = opener.element.isConnected ? opener.element : nearestFocusableAfterRemoval(opener);
+          if (!target) return;
           event.preventDefault();
-          opener.focus();
+          target.focus();
         }}
       >
         <RememberOpener openerRef={openerRef} />
