@@ -4,6 +4,7 @@ import { formatCents, formatBasisPoints } from "../../../../shared/pricing/index
 import { formatNumber } from "../../../../shared/units/format.ts";
 import { AirflowSvg } from "./airflow-svg.tsx";
 import { PLEX_FAMILIES } from "./fonts.ts";
+import { breakLongToken } from "./break-long-text.ts";
 
 const INK = "#22262b";
 const MUTED = "#5d646d";
@@ -216,7 +217,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
           <View style={[s.col, { flex: 1.4 }]}>
             <Text style={s.label}>Prepared for</Text>
             <Text style={[s.body, { fontWeight: 600 }]}>{snapshot.customer.name}</Text>
-            {snapshot.customer.email ? <Text style={s.small}>{snapshot.customer.email}</Text> : null}
+            {snapshot.customer.email ? <Text style={s.small}>{breakLongToken(snapshot.customer.email, 40)}</Text> : null}
             {snapshot.customer.phone ? <Text style={s.small}>{snapshot.customer.phone}</Text> : null}
           </View>
           <View style={s.col}>
@@ -227,7 +228,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
           <View style={s.col}>
             <Text style={s.label}>Your contact</Text>
             <Text style={s.body}>{snapshot.seller.name}</Text>
-            {snapshot.seller.email ? <Text style={s.small}>{snapshot.seller.email}</Text> : null}
+            {snapshot.seller.email ? <Text style={s.small}>{breakLongToken(snapshot.seller.email, 28)}</Text> : null}
           </View>
         </View>
 
