@@ -5,6 +5,7 @@ import { atticArb } from "../ventilation/arbitraries.test-helpers";
 import { buildAirflowPicture } from "./build-airflow-picture";
 import { DEMO_CASES } from "./demo-cases.test-helpers";
 import type { AirflowPicture, ShortCircuitArrow } from "./types";
+import { boxesOverlap, textBoxFt } from "./geometry";
 
 const build = (input: AtticInput, sectionIndex?: number) => buildAirflowPicture(input, analyzeAttic(input), sectionIndex === undefined ? {} : { sectionIndex });
 const shortCircuits = (p: AirflowPicture) => p.arrows.filter((a): a is ShortCircuitArrow => a.kind === "short-circuit-path");
@@ -227,5 +228,22 @@ describe("buildAirflowPicture", () => {
       }),
       { numRuns: 300 },
     );
+  });
+});
+
+describe("the insulation word", () => {
+  it("when each demo attic is drawn, then the word on the attic floor covers no vent's label", () => {
+    for (const [name, input] of Object.entries(DEMO_CASES)) {
+      const picture = build(input);
+      const word = picture.texts.find((t) => t.id === "insulation-text")!;
+      const covered = picture.texts.filter((t) => t.id !== word.id && boxesOverlap(textBoxFt(word), textBoxFt(t)));
+      expect(covered.map((t) => t.text), name).toEqual([]);
+    }
+  });
+
+  it("when the default spot is free, then the word stays at three quarters of the span", () => {
+    const picture = build(DEMO_CASES.balanced); // a 30 ft wide gable attic
+    const word = picture.texts.find((t) => t.id === "insulation-text")!;
+    expect(word.atFt[0]).toBeCloseTo(22.5, 6);
   });
 });

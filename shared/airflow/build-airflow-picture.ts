@@ -6,7 +6,7 @@
 import type { AtticAnalysis, AtticInput } from "../ventilation";
 import { joinPlaces } from "./describe-airflow-picture";
 import { flowPaths } from "./flow-paths";
-import { emptyBounds, includePoint, includePrimitive, textWidthFt, tidy } from "./geometry";
+import { boxesOverlap, emptyBounds, includePoint, includePrimitive, textBoxFt, textWidthFt, tidy } from "./geometry";
 import { placeVents } from "./place-vents";
 import { deckYAt, roofFrame, type RoofFrame } from "./roof-frame";
 import type { AirflowArrow, AirflowPicture, DrawPointFt, LegendEntry, PictureCaption, PictureShape, PictureText, Primitive, ViewBoxFt } from "./types";
@@ -240,16 +240,7 @@ export function buildAirflowPicture(input: AtticInput, analysis: AtticAnalysis, 
       style: "house",
       isBold: false,
     },
-    {
-      id: "insulation-text",
-      forId: "insulation",
-      text: "Insulation",
-      atFt: [frame.spanFt * (frame.roofForm === "shed" ? 0.62 : 0.75), frame.ceilingYFt - frame.insulationFt - 0.45 * u],
-      anchor: "middle",
-      fontSizeFt: 1.2 * u,
-      style: "insulation",
-      isBold: false,
-    },
+    insulationText(frame, u, placed.texts),
   ];
   const notes = [...frame.notes, ...placed.notes, ...flows.notes];
   const arrows = flows.arrows;
@@ -279,4 +270,18 @@ export function buildAirflowPicture(input: AtticInput, analysis: AtticAnalysis, 
     legend: legendFor(arrows),
     notes,
   };
+}
+
+/**
+ * The "Insulation" word on the attic floor, at the first spot along it where it covers no vent's
+ * label (a gable fan's name hangs down to the floor on small attics).
+ */
+function insulationText(frame: RoofFrame, u: number, others: readonly PictureText[]): PictureText {
+  const spots = frame.roofForm === "shed" ? [0.62, 0.3, 0.45] : [0.75, 0.25, 0.6, 0.4];
+  const at = (share: number): DrawPointFt => [frame.spanFt * share, frame.ceilingYFt - frame.insulationFt - 0.45 * u];
+  const candidate = (share: number): PictureText => ({
+    id: "insulation-text", forId: "insulation", text: "Insulation", atFt: at(share), anchor: "middle", fontSizeFt: 1.2 * u, style: "insulation", isBold: false,
+  });
+  const clear = spots.map(candidate).find((t) => others.every((o) => !boxesOverlap(textBoxFt(t), textBoxFt(o))));
+  return clear ?? candidate(spots[0]!);
 }

@@ -139,3 +139,15 @@ export function includePrimitive(bounds: BoundsFt, primitive: Primitive, padFt: 
 
 /** Rough width of a text line: average glyph of a sans face is about 0.56 em. */
 export const textWidthFt = (text: string, fontSizeFt: number): number => text.length * fontSizeFt * 0.56;
+
+export interface BoxFt { minXFt: number; minYFt: number; maxXFt: number; maxYFt: number }
+
+/** The rough box a text line covers (y grows downwards; the anchor point is on the baseline). */
+export function textBoxFt(t: { text: string; atFt: DrawPointFt; anchor: "start" | "middle" | "end"; fontSizeFt: number }): BoxFt {
+  const widthFt = textWidthFt(t.text, t.fontSizeFt);
+  const minXFt = t.anchor === "start" ? t.atFt[0] : t.anchor === "end" ? t.atFt[0] - widthFt : t.atFt[0] - widthFt / 2;
+  return { minXFt, maxXFt: minXFt + widthFt, minYFt: t.atFt[1] - t.fontSizeFt, maxYFt: t.atFt[1] + 0.25 * t.fontSizeFt };
+}
+
+export const boxesOverlap = (a: BoxFt, b: BoxFt): boolean =>
+  a.minXFt < b.maxXFt && b.minXFt < a.maxXFt && a.minYFt < b.maxYFt && b.minYFt < a.maxYFt;

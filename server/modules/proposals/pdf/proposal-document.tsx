@@ -98,13 +98,12 @@ function Figures({ analysis }: { analysis: SnapshotAnalysis }) {
 function Picture({ space, heading, widthPt = 495 }: { space: SnapshotSpace; heading: string; widthPt?: number }) {
   if (!space.picture) return null;
   return (
-    <View style={{ marginBottom: 8, width: widthPt }}>
-      <View wrap={false}>
-        <Text style={s.h3}>{heading}</Text>
-        <AirflowSvg picture={space.picture} widthPt={widthPt} />
-      </View>
+    // One block: a page never starts with a picture's captions or legend cut off from the picture.
+    <View style={{ marginBottom: 8, width: widthPt }} wrap={false}>
+      <Text style={s.h3}>{heading}</Text>
+      <AirflowSvg picture={space.picture} widthPt={widthPt} />
       {space.picture.captions.map((c) => (
-        <Text key={c.id} style={s.caption} wrap={false}>{c.text}</Text>
+        <Text key={c.id} style={s.caption}>{c.text}</Text>
       ))}
       <Text style={s.caption}>{space.picture.legend.map((l) => l.words).join("  ·  ")}</Text>
     </View>
