@@ -1,10 +1,5 @@
 import { useQuery } from "@tanstack/react-query";
-import {
-  getCoreRowModel,
-  useReactTable,
-  type ColumnDef,
-  type SortingState,
-} from "@tanstack/react-table";
+import type { ColumnDef } from "@tanstack/react-table";
 import { useEffect, useMemo, useState } from "react";
 import { Link, useNavigation, useSearchParams } from "react-router";
 import { Alert } from "@/components/ui/alert";
@@ -17,6 +12,7 @@ import { LoadingBlock } from "@/components/ui/spinner";
 import { Table, TableContainer, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
 import { Pagination, SortHeader } from "@/components/ui/table-controls";
 import { formatDate } from "@/lib/format-date";
+import { useServerTable } from "@/lib/use-server-table";
 import { customerQueries } from "../api/queries";
 import type { Customer, CustomerListParams, CustomerSort } from "../api/types";
 import { CustomerFormDialog } from "../components/customer-form-dialog";
@@ -52,8 +48,13 @@ export function CustomersPage({ canEdit, newProjectHref }: CustomersPageProps) {
   const [editing, setEditing] = useState<Customer | null>(null);
   const [isAdding, setIsAdding] = useState(false);
 
-  // Back/forward changes the URL: show its search text again.
-  useEffect(() => setTyped(params.q), [params.q]);
+  // Back/forward changes the URL: show its search text again (set while rendering, as React
+  // advises for state that follows a changed input, rather than in an effect a render later).
+  const [shownQ, setShownQ] = useState(params.q);
+  if (shownQ !== params.q) {
+    setShownQ(params.q);
+    setTyped(params.q);
+  }
 
   function update(next: Partial<CustomerListParams>) {
     const merged = { ...params, ...next };
@@ -75,7 +76,6 @@ export function CustomersPage({ canEdit, newProjectHref }: CustomersPageProps) {
   }, [debounced]);
 
   const list = useQuery(customerQueries.list(params));
-  const sorting: SortingState = [{ id: params.sort, desc: params.dir === "desc" }];
 
   const columns = useMemo<ColumnDef<Customer>[]>(
     () => [
@@ -88,18 +88,7 @@ export function CustomersPage({ canEdit, newProjectHref }: CustomersPageProps) {
     [],
   );
 
-  // No React Compiler here; TanStack Table re-renders through its own state, which is what we want.
-  // eslint-disable-next-line react-hooks/incompatible-library
-  const table = useReactTable({
-    data: list.data?.items ?? [],
-    columns,
-    getCoreRowModel: getCoreRowModel(),
-    manualSorting: true,
-    manualPagination: true,
-    rowCount: list.data?.total ?? 0,
-    state: { sorting, pagination: { pageIndex: params.page - 1, pageSize: PAGE_SIZE } },
-    getRowId: (row) => row.id,
-  });
+  const table = useServerTable({ rows: list.data?.items, total: list.data?.total, columns, sort: params.sort, dir: params.dir, page: params.page, pageSize: PAGE_SIZE });
 
   function toggleSort(id: CustomerSort) {
     if (params.sort === id) update({ dir: params.dir === "asc" ? "desc" : "asc", page: 1 });

@@ -1,5 +1,5 @@
 import { useQuery } from "@tanstack/react-query";
-import { getCoreRowModel, useReactTable, type ColumnDef } from "@tanstack/react-table";
+import type { ColumnDef } from "@tanstack/react-table";
 import { useEffect, useMemo, useState } from "react";
 import { Link, useNavigation, useSearchParams } from "react-router";
 import { PROJECT_STATUSES, type ProjectStatus } from "@shared/schemas/projects";
@@ -16,6 +16,7 @@ import { Table, TableContainer, TBody, Td, Th, THead, Tr } from "@/components/ui
 import { Pagination, SortHeader } from "@/components/ui/table-controls";
 import { paths } from "@/config/paths";
 import { formatDate } from "@/lib/format-date";
+import { useServerTable } from "@/lib/use-server-table";
 import { projectQueries } from "../api/queries";
 import type { ProjectListItem, ProjectListParams, ProjectSort } from "../api/types";
 import { useDebouncedValue } from "@/lib/use-debounced-value";
@@ -71,7 +72,13 @@ export function ProjectsPage({ canCreate, greeting, companyName }: ProjectsPageP
   const estimators = useQuery(projectQueries.estimators());
   const list = useQuery(projectQueries.list(params));
 
-  useEffect(() => setTyped(params.q), [params.q]);
+  // Back/forward changes the URL: show its search text again (set while rendering, as React
+  // advises for state that follows a changed input, rather than in an effect a render later).
+  const [shownQ, setShownQ] = useState(params.q);
+  if (shownQ !== params.q) {
+    setShownQ(params.q);
+    setTyped(params.q);
+  }
 
   function update(next: Partial<ProjectListParams>, options: { replace?: boolean } = {}) {
     setSearch(writeParams({ ...params, ...next }), options);
@@ -102,22 +109,7 @@ export function ProjectsPage({ canCreate, greeting, companyName }: ProjectsPageP
     ],
     [],
   );
-  // No React Compiler here; TanStack Table re-renders through its own state, which is what we want.
-  // eslint-disable-next-line react-hooks/incompatible-library
-  const table = useReactTable({
-    data: list.data?.items ?? [],
-    columns,
-    getCoreRowModel: getCoreRowModel(),
-    manualSorting: true,
-    manualPagination: true,
-    manualFiltering: true,
-    rowCount: list.data?.total ?? 0,
-    state: {
-      sorting: [{ id: params.sort, desc: params.dir === "desc" }],
-      pagination: { pageIndex: params.page - 1, pageSize: PAGE_SIZE },
-    },
-    getRowId: (row) => row.id,
-  });
+  const table = useServerTable({ rows: list.data?.items, total: list.data?.total, columns, sort: params.sort, dir: params.dir, page: params.page, pageSize: PAGE_SIZE });
 
   const estimatorOptions = (estimators.data ?? []).map((e) => ({ value: e.id, label: e.name }));
   const isFiltered = Boolean(params.q || params.status || params.estimatorId);

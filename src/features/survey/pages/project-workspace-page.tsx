@@ -25,7 +25,8 @@ import type { PhotoRecord, ProjectDetail, ProjectRecord, SpaceRecord } from "../
 import { AnalysisPanel } from "../components/analysis-panel";
 import { PhotosPanel } from "../components/photos-panel";
 import { ProjectSaver } from "../components/project-saver";
-import { combineStates, SaveStatus } from "../components/save-status";
+import { SaveStatus } from "@/components/ui/save-status";
+import { combineStates } from "../lib/save-states";
 import { SpaceEditor } from "../components/space-editor";
 import { SpaceSaver, type SpaceSaverInit } from "../components/space-saver";
 import type { SaveState } from "@/lib/use-autosave";
@@ -342,6 +343,8 @@ function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: Pr
         {canEdit ? (
           <SaveStatus
             state={combined}
+            thing="survey"
+            keptOn="device"
             isOnline={isOnline}
             heldCount={heldCount}
             onRetry={() => allStates.forEach((s) => s.retry())}
