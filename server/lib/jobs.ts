@@ -5,7 +5,8 @@ import type { Mailer, OutgoingEmail } from "./mailer.ts";
 export const QUEUES = { email: "email-send" } as const;
 
 export interface Jobs {
-  sendEmail(mail: OutgoingEmail, opts?: { singletonKey?: string }): Promise<void>;
+  /** Queues an e-mail, sent at least once (with retries); proposal e-mails keep their own outbox instead. */
+  sendEmail(mail: OutgoingEmail): Promise<void>;
   /** Hands a message to the SMTP relay now; for workers that keep their own outbox (proposal e-mails). */
   deliverNow(mail: OutgoingEmail): Promise<string>;
   boss: PgBoss;
@@ -36,13 +37,8 @@ export async function startJobs(opts: { databaseUrl: string; logger: Logger; mai
   return {
     boss,
     runsWorkers: opts.runWorkers !== false,
-    async sendEmail(mail, o = {}) {
-      await boss.send(QUEUES.email, mail, {
-        retryLimit: 5,
-        retryDelay: 2,
-        retryBackoff: true,
-        ...(o.singletonKey ? { singletonKey: o.singletonKey } : {}),
-      });
+    async sendEmail(mail) {
+      await boss.send(QUEUES.email, mail, { retryLimit: 5, retryDelay: 2, retryBackoff: true });
     },
     deliverNow: (mail) => opts.mailer.send(mail),
     async stop() {

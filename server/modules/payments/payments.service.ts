@@ -8,40 +8,24 @@ import type { ProposalsService } from "../proposals/proposals.service.ts";
 import { depositDue } from "./deposit-amount.ts";
 import type { CheckoutSessionFacts, PaymentProvider, ProviderEvent } from "./payment-provider.ts";
 import type { PaymentRow, PaymentsRepository, PaymentWrite } from "./payments.repository.ts";
+import type { DepositView, Payment } from "../../../shared/schemas/deposits.ts";
 
 /** Deposits are charged in US dollars: the product serves US contractors. */
 export const DEPOSIT_CURRENCY = "usd";
 /** A pending row without a session this old was left by a request that died midway. */
 const STALE_START_MS = 2 * 60_000;
 
-export type DepositState = "not-accepted" | "declined" | "none" | "due" | "paid" | "refunded";
-
-/** What the homeowner's page and the proposal page show about the deposit. */
-export interface DepositView {
-  state: DepositState;
-  /** The deposit due, or what was paid; null when there is none. Integer cents. */
-  amountCents: number | null;
-  currency: string;
-  /** Why there is nothing to pay, in plain words, when state is "none". */
-  message: string | null;
-  isOnlinePaymentAvailable: boolean;
-  /** A checkout was opened and not finished (the homeowner may come back to it). */
-  isCheckoutStarted: boolean;
-  paidAt: Date | null;
-  isRefundRequested: boolean;
-  refundedCents: number;
-  refundedAt: Date | null;
-}
-
 /** What staff see of one payment attempt, provider ids included. */
-export function presentPayment(p: PaymentRow) {
+export function presentPayment(p: PaymentRow): Payment {
   return {
     id: p.id, proposalId: p.proposalId, optionId: p.optionId, amountCents: p.amountCents, currency: p.currency, status: p.status,
-    paidCents: p.paidCents, paidAt: p.paidAt, checkoutSessionId: p.checkoutSessionId, paymentIntentId: p.paymentIntentId,
-    refundId: p.refundId, refundRequestedAt: p.refundRequestedAt, refundRequestedBy: p.refundRequestedBy, refundedCents: p.refundedCents, refundedAt: p.refundedAt,
-    failedAt: p.failedAt, failureReason: p.failureReason, createdAt: p.createdAt, updatedAt: p.updatedAt,
+    paidCents: p.paidCents, paidAt: iso(p.paidAt), checkoutSessionId: p.checkoutSessionId, paymentIntentId: p.paymentIntentId,
+    refundId: p.refundId, refundRequestedAt: iso(p.refundRequestedAt), refundRequestedBy: p.refundRequestedBy, refundedCents: p.refundedCents, refundedAt: iso(p.refundedAt),
+    failedAt: iso(p.failedAt), failureReason: p.failureReason, createdAt: p.createdAt.toISOString(), updatedAt: p.updatedAt.toISOString(),
   };
 }
+
+const iso = (d: Date | null) => d?.toISOString() ?? null;
 
 const utc = (d: Date) => `${d.toISOString().slice(0, 16).replace("T", " ")} UTC`;
 
@@ -75,7 +59,7 @@ export function createPaymentsService(deps: {
     if (settled) {
       return {
         ...base, state: settled.status === "refunded" ? "refunded" : "paid", amountCents: settled.paidCents ?? settled.amountCents, currency: settled.currency,
-        paidAt: settled.paidAt, isRefundRequested: Boolean(settled.refundRequestedAt), refundedCents: settled.refundedCents, refundedAt: settled.refundedAt,
+        paidAt: iso(settled.paidAt), isRefundRequested: Boolean(settled.refundRequestedAt), refundedCents: settled.refundedCents, refundedAt: iso(settled.refundedAt),
       };
     }
     if (p.status === "declined") return { ...base, state: "declined", amountCents: null, message: "This proposal was declined, so no deposit is due." };
@@ -108,7 +92,7 @@ export function createPaymentsService(deps: {
       text: [`Hello ${seller?.isActive ? seller.name : s.company.name},`, "", ...lines, "",
         `Open the project: ${deps.appOrigin()}/projects/${p.projectId}`, "",
         "Eavesight sent this when the payment service confirmed it. No card details ever reach Eavesight."].join("\n"),
-    }, { singletonKey: `${subjectStart.split(":")[0]}:${payment.id}` });
+    });
   }
 
   async function onSessionPaid(event: Extract<ProviderEvent, { session: CheckoutSessionFacts }>, meta: RequestMeta) {

@@ -215,10 +215,6 @@ export function createProposalsRepository(db: Database) {
     async releaseMailLease(dedupeKey: string) {
       await db.update(proposalMails).set({ leaseUntil: null }).where(and(eq(proposalMails.dedupeKey, dedupeKey), isNull(proposalMails.deliveredAt)));
     },
-    async mail(dedupeKey: string) {
-      const [row] = await db.select().from(proposalMails).where(eq(proposalMails.dedupeKey, dedupeKey)).limit(1);
-      return row ?? null;
-    },
 
     /**
      * Outbox rows still undelivered, unleased and last queued before `before`: their job was lost

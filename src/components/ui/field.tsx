@@ -40,7 +40,8 @@ export function useFieldIds(id?: string) {
   return { controlId, hintId: `${controlId}-hint`, errorId: `${controlId}-error` };
 }
 
-function describedBy(...ids: (string | false | undefined)[]): string | undefined {
+/** The aria-describedby value for the ids that apply, or none. */
+export function describedBy(...ids: (string | false | null | undefined)[]): string | undefined {
   const joined = ids.filter(Boolean).join(" ");
   return joined === "" ? undefined : joined;
 }

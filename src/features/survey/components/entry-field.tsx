@@ -1,5 +1,5 @@
 import type { ReactNode } from "react";
-import { controlStyles, FieldError, Hint, Label, useFieldIds } from "@/components/ui/field";
+import { controlStyles, describedBy, FieldError, Hint, Label, useFieldIds } from "@/components/ui/field";
 import { OkIcon } from "@/components/ui/icons";
 import { cn } from "@/lib/cn";
 import type { EntryDraft } from "../lib/measure";
@@ -41,9 +41,6 @@ export function EntryField({
 }: EntryFieldProps) {
   const { controlId, hintId, errorId } = useFieldIds();
   const understoodId = `${controlId}-understood`;
-  const describedBy = [hint ? hintId : null, entry.error ? errorId : null, entry.understood && showUnderstood ? understoodId : null]
-    .filter(Boolean)
-    .join(" ");
   return (
     <div className={cn("space-y-1.5", className)}>
       <Label htmlFor={controlId} isOptional={isOptional}>
@@ -63,7 +60,7 @@ export function EntryField({
           placeholder={placeholder}
           disabled={disabled}
           aria-invalid={entry.error ? true : undefined}
-          aria-describedby={describedBy || undefined}
+          aria-describedby={describedBy(hint ? hintId : null, entry.error ? errorId : null, entry.understood && showUnderstood ? understoodId : null)}
           onChange={(event) => onText(event.target.value)}
           className={cn(controlStyles, "h-touch", suffix && "pr-20")}
         />

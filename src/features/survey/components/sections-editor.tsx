@@ -10,6 +10,7 @@ import { buildSection, emptySection, newId, sectionName, type PointDraft, type S
 import { areaEntry, lengthEntry, lengthText } from "../lib/measure";
 import { EntryField } from "./entry-field";
 import { PolygonGrid } from "./polygon-grid";
+import { RemainingProblems } from "./remaining-problems";
 
 type SectionsUpdate = (sections: SectionDraft[]) => SectionDraft[];
 type SectionUpdate = (section: SectionDraft) => SectionDraft;
@@ -94,6 +95,7 @@ const SectionCard = memo(function SectionCard({
   const update = (next: SectionUpdate) => onUpdate(section.id, next);
   const edit = (patch: Partial<SectionDraft>) => update((s) => ({ ...s, ...patch }));
   const built = buildSection(section);
+  const hasTyped = Boolean(section.length.text || section.width.text || section.area.text || section.points.length > 0);
   // Messages already shown under their own field aren't repeated in the list below.
   const fieldErrors = [section.length, section.width, section.area, ...section.points.flatMap((p) => [p.x, p.y])].flatMap((e) => (e.error ? [e.error] : []));
   const area = built.section ? sectionAreaSqFt(built.section) : null;
@@ -214,15 +216,7 @@ const SectionCard = memo(function SectionCard({
           {isGridOpen ? <PolygonGrid points={gridPoints} onAdd={addGridPoint} unitSystem={unitSystem} /> : null}
         </div>
       )}
-      {built.problems.length > 0 && (section.length.text || section.width.text || section.area.text || section.points.length > 0) ? (
-        <ul className="space-y-1 text-sm text-warning-800">
-          {built.problems
-            .filter((p) => !fieldErrors.some((e) => p.endsWith(e)))
-            .map((p) => (
-              <li key={p}>• {p}</li>
-            ))}
-        </ul>
-      ) : null}
+      {hasTyped ? <RemainingProblems problems={built.problems} fieldErrors={fieldErrors} /> : null}
     </fieldset>
   );
 });

@@ -14,6 +14,7 @@ import { inchEntry, lengthEntry, numberEntry } from "../lib/measure";
 import { VENT_PRESETS } from "../lib/vent-presets";
 import { EntryField } from "./entry-field";
 import { FanDiagnosticsSteps } from "./fan-diagnostics";
+import { RemainingProblems } from "./remaining-problems";
 
 const capital = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 const KIND_OPTIONS = VENT_KINDS.map((k) => ({ value: k, label: capital(VENT_KIND_LABELS[k]) }));
@@ -405,15 +406,7 @@ const VentCard = memo(function VentCard({
       {mode === "powered" ? (
         <FanDiagnosticsSteps value={vent.diagnostics} fanName={name} onChange={(diagnostics) => edit({ diagnostics })} />
       ) : null}
-      {built.problems.length > 0 && hasTyped ? (
-        <ul className="space-y-1 text-sm text-warning-800">
-          {built.problems
-            .filter((p) => !fieldErrors.some((e) => p.endsWith(e)))
-            .map((p) => (
-              <li key={p}>• {p}</li>
-            ))}
-        </ul>
-      ) : null}
+      {hasTyped ? <RemainingProblems problems={built.problems} fieldErrors={fieldErrors} /> : null}
     </section>
   );
 });
