@@ -1,13 +1,13 @@
 import express, { type Express } from "express";
 import helmet from "helmet";
 import { pinoHttp } from "pino-http";
-import path from "node:path";
 import { existsSync } from "node:fs";
 import { sql as rawSql } from "drizzle-orm";
 import type { Env } from "./env.ts";
 import type { Database } from "./db/client.ts";
 import type { Logger } from "./lib/logger.ts";
 import type { Jobs } from "./lib/jobs.ts";
+import { clientRoutes, compressAnswers } from "./lib/delivery.ts";
 import { errorMiddleware } from "./lib/error-middleware.ts";
 import { originCheck } from "./lib/csrf.ts";
 import { AppError } from "./lib/errors.ts";
@@ -112,6 +112,8 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
+  app.use(compressAnswers());
+
   const appOrigin = (fallback?: string) => env.APP_ORIGIN ?? fallback ?? `http://${env.HOST}:${env.PORT}`;
   const audit = createAudit(db);
   const lucia = createLucia(db);
@@ -185,11 +187,7 @@ export function createApp(deps: AppDeps): Express {
   app.use("/api", api);
 
   if (deps.clientDir && existsSync(deps.clientDir)) {
-    const dir = deps.clientDir;
-    app.use(express.static(dir, { index: false, maxAge: "1h", setHeaders: (res, file) => {
-      if (file.includes(`${path.sep}assets${path.sep}`)) res.setHeader("Cache-Control", "public, max-age=31536000, immutable");
-    } }));
-    app.get("/{*splat}", (_req, res) => res.sendFile(path.join(dir, "index.html")));
+    app.use(clientRoutes(deps.clientDir));
   }
 
   app.use(errorMiddleware(logger));

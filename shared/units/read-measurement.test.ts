@@ -1,3 +1,4 @@
+import convert from "convert-units";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { formatFeetInches } from "./format";
@@ -41,5 +42,24 @@ describe("readMeasurement without the expression reader", () => {
         if (result.ok && result.kind === "length") expect(result.valueFt).toBeCloseTo(valueFt, 10);
       }),
     );
+  });
+});
+
+describe("unit definitions", () => {
+  it.each([
+    ["1 yd", "yd"], ["1 ft", "ft"], ["1 in", "in"], ["1 m", "m"], ["1 cm", "cm"], ["1 mm", "mm"],
+  ] as const)("when given %s, then it is the length convert-units gives (NIST SP 811 App. B: 1 ft = 0.3048 m)", (text, unit) => {
+    const result = readMeasurement(text, "length", {});
+    // convert-units bridges ft ↔ m with the rounded 3.28084, hence 1e-6 relative for metric units.
+    const expectedFt = convert(1).from(unit).to("ft");
+    expect(result.ok && result.kind === "length" && Math.abs(result.valueFt - expectedFt) / expectedFt).toBeLessThan(1e-6);
+  });
+
+  it.each([
+    ["1 sq yd", "yd2"], ["1 sq ft", "ft2"], ["1 sq in", "in2"], ["1 m2", "m2"], ["1 cm2", "cm2"],
+  ] as const)("when given %s, then it is the area convert-units gives", (text, unit) => {
+    const result = readMeasurement(text, "area", {});
+    const expectedSqFt = convert(1).from(unit as "ft2").to("ft2");
+    expect(result.ok && result.kind === "area" && Math.abs(result.valueSqFt - expectedSqFt) / expectedSqFt).toBeLessThan(1e-5);
   });
 });

@@ -13,11 +13,9 @@
  * then grouped into quantities ("26 ft 6 in" is one length), so an expression only ever sees
  * quantities, plain numbers, the four operators and parentheses.
  *
- * Unit factors come from convert-units inside each system (inches → feet, cm → m). The bridge
- * between metric and imperial uses the exact definition 1 ft = 0.3048 m (NIST SP 811 App. B),
- * because convert-units 2.3.4 bridges with the rounded 3.28084 ft/m.
+ * Units use their exact definitions (1 ft = 0.3048 m, NIST SP 811 App. B); the tests check them
+ * against convert-units.
  */
-import convert from "convert-units";
 import { formatNumber, M_PER_FT, SQ_M_PER_SQ_FT } from "./format";
 
 export type ParseLengthResult =
@@ -52,48 +50,36 @@ export const MAX_LENGTH_FT = 10_000;
 /** Largest area accepted (sq ft). */
 export const MAX_AREA_SQFT = 1_000_000;
 
-type LengthUnit = "ft" | "in" | "yd" | "m" | "cm" | "mm";
-type AreaUnit = "ft2" | "in2" | "yd2" | "m2" | "cm2";
-export type UnitId = LengthUnit | AreaUnit;
+export type UnitId = "ft" | "in" | "yd" | "m" | "cm" | "mm" | "ft2" | "in2" | "yd2" | "m2" | "cm2";
 
 interface UnitInfo {
   dim: 1 | 2;
   /** Label used in the `understood` text. */
   label: string;
-  /** Size of one of this unit in ft (dim 1) or sq ft (dim 2). */
-  factor: number;
+  /** How many of this unit make one ft (dim 1) or one sq ft (dim 2); a value in ft is value ÷ this. */
+  perFt: number;
   /** Rank within its dimension, larger = bigger unit; used to print "24 ft 6 in" without a "+". */
   rank: number;
 }
 
-const IMPERIAL_LENGTH = new Set<LengthUnit>(["ft", "in", "yd"]);
-const IMPERIAL_AREA = new Set<AreaUnit>(["ft2", "in2", "yd2"]);
-
-function lengthFactorFt(unit: LengthUnit): number {
-  // Within a system convert-units is exact (in → ft is 1/12); across systems use 0.3048 exactly.
-  if (IMPERIAL_LENGTH.has(unit)) return convert(1).from(unit).to("ft");
-  return convert(1).from(unit).to("m") / M_PER_FT;
-}
-
-function areaFactorSqFt(unit: AreaUnit): number {
-  // @types/convert-units omits "yd2", which convert-units 2.3.4 itself defines (to_anchor 9).
-  const from = unit as "ft2";
-  if (IMPERIAL_AREA.has(unit)) return convert(1).from(from).to("ft2");
-  return convert(1).from(from).to("m2") / SQ_M_PER_SQ_FT;
-}
-
+/*
+ * Exact definitions (NIST SP 811, 2008, App. B.8: 1 in = 2.54 cm, 1 ft = 0.3048 m, 1 yd = 0.9144 m,
+ * hence 12 in = 1 ft and 3 ft = 1 yd). Written here rather than taken from convert-units so the tests
+ * can hold the reader against convert-units as an independent check, and so the client does not load
+ * that library (which bridges metric and imperial with a rounded 3.28084 ft/m) for six numbers.
+ */
 export const UNITS: Record<UnitId, UnitInfo> = {
-  yd: { dim: 1, label: "yd", factor: lengthFactorFt("yd"), rank: 5 },
-  ft: { dim: 1, label: "ft", factor: lengthFactorFt("ft"), rank: 4 },
-  in: { dim: 1, label: "in", factor: lengthFactorFt("in"), rank: 3 },
-  m: { dim: 1, label: "m", factor: lengthFactorFt("m"), rank: 2 },
-  cm: { dim: 1, label: "cm", factor: lengthFactorFt("cm"), rank: 1 },
-  mm: { dim: 1, label: "mm", factor: lengthFactorFt("mm"), rank: 0 },
-  yd2: { dim: 2, label: "sq yd", factor: areaFactorSqFt("yd2"), rank: 4 },
-  ft2: { dim: 2, label: "sq ft", factor: areaFactorSqFt("ft2"), rank: 3 },
-  in2: { dim: 2, label: "sq in", factor: areaFactorSqFt("in2"), rank: 2 },
-  m2: { dim: 2, label: "m²", factor: areaFactorSqFt("m2"), rank: 1 },
-  cm2: { dim: 2, label: "cm²", factor: areaFactorSqFt("cm2"), rank: 0 },
+  yd: { dim: 1, label: "yd", perFt: 1 / 3, rank: 5 },
+  ft: { dim: 1, label: "ft", perFt: 1, rank: 4 },
+  in: { dim: 1, label: "in", perFt: 12, rank: 3 },
+  m: { dim: 1, label: "m", perFt: M_PER_FT, rank: 2 },
+  cm: { dim: 1, label: "cm", perFt: 30.48, rank: 1 },
+  mm: { dim: 1, label: "mm", perFt: 304.8, rank: 0 },
+  yd2: { dim: 2, label: "sq yd", perFt: 1 / 9, rank: 4 },
+  ft2: { dim: 2, label: "sq ft", perFt: 1, rank: 3 },
+  in2: { dim: 2, label: "sq in", perFt: 144, rank: 2 },
+  m2: { dim: 2, label: "m²", perFt: SQ_M_PER_SQ_FT, rank: 1 },
+  cm2: { dim: 2, label: "cm²", perFt: 929.0304, rank: 0 },
 };
 
 /** Unit spellings, matched longest first. Letters must not continue after a word match. */
@@ -299,13 +285,13 @@ function quantityOf(terms: readonly Term[]): Dimensioned {
   const first = terms[0]!;
   const firstInfo = UNITS[first.unit];
   if (terms.length === 1) {
-    return { value: first.value * firstInfo.factor, dim: firstInfo.dim, isBare: false, text: `${first.text} ${firstInfo.label}`, unit: first.unit };
+    return { value: first.value / firstInfo.perFt, dim: firstInfo.dim, isBare: false, text: `${first.text} ${firstInfo.label}`, unit: first.unit };
   }
   let value = 0;
   let text = "";
   terms.forEach((term, index) => {
     const info = UNITS[term.unit];
-    value += term.value * info.factor;
+    value += term.value / info.perFt;
     const termText = `${term.text} ${info.label}`;
     // "24 ft 6 in" when the units descend as on a tape; otherwise the sum is spelled out.
     const isDescending = index > 0 && UNITS[terms[index - 1]!.unit].rank > info.rank;
@@ -389,7 +375,7 @@ export function plainNumber(value: number): Dimensioned {
 export function withUnit(value: Dimensioned, unit: UnitId): Dimensioned {
   const info = UNITS[unit];
   if (value.dim !== 0) throw new MeasurementError(`"${info.label}" can only follow a plain number.`);
-  return { value: value.value * info.factor, dim: info.dim, isBare: false, text: `${value.text} ${info.label}`, unit };
+  return { value: value.value / info.perFt, dim: info.dim, isBare: false, text: `${value.text} ${info.label}`, unit };
 }
 
 /** `a + b` or `a − b`; a plain number beside a measurement takes that measurement's default unit. */
@@ -607,4 +593,24 @@ export function readMeasurement(
     if (error instanceof MeasurementError) return { ok: false, message: error.message };
     return { ok: false, message: "I could not read that measurement." };
   }
+}
+
+/**
+ * Reads a length in feet (a plain number is feet); see {@link readMeasurement}.
+ *
+ * @example
+ * readLengthFt(`4'-3 1/2"`, {}) // { ok: true, kind: "length", valueFt: 4.2916…, understood: "4 ft 3.5 in = 4.29 ft" }
+ */
+export function readLengthFt(text: unknown, options: ParseOptions, evaluateExpression?: ExpressionEvaluator): ParseLengthResult | NeedsExpressionReader {
+  return readMeasurement(text, "length", options, evaluateExpression) as ParseLengthResult | NeedsExpressionReader;
+}
+
+/**
+ * Reads an area in sq ft (a plain number is sq ft, `a x b` two sides in feet); see {@link readMeasurement}.
+ *
+ * @example
+ * readAreaSqFt(`26'6" x 40'`, {}) // { ok: true, kind: "area", valueSqFt: 1060, understood: "26 ft 6 in × 40 ft = 1,060 sq ft" }
+ */
+export function readAreaSqFt(text: unknown, options: ParseOptions, evaluateExpression?: ExpressionEvaluator): ParseAreaResult | NeedsExpressionReader {
+  return readMeasurement(text, "area", options, evaluateExpression) as ParseAreaResult | NeedsExpressionReader;
 }
