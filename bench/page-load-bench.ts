@@ -10,6 +10,7 @@
  * Prints figures; asserts nothing.
  *
  *   npm run bench -- page-load
+ *   BENCH_PAGE_LOAD_RUNS=9 BENCH_PAGE_LOAD_ONLY=workspace,loopback npm run bench -- page-load   (a subset, more runs)
  */
 import { execFileSync, spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { existsSync, mkdtempSync, rmSync, symlinkSync } from "node:fs";
@@ -25,6 +26,9 @@ import { projectRoot } from "../scripts/lib/paths.ts";
 const CPU_THROTTLING_RATE = 4;
 const RUNS = Number(process.env.BENCH_PAGE_LOAD_RUNS ?? 7);
 const BASELINE_REF = process.env.BENCH_BASELINE_REF ?? "main";
+/** Words that each measured page and network name must contain one of (empty: all). */
+const ONLY = (process.env.BENCH_PAGE_LOAD_ONLY ?? "").split(",").filter(Boolean);
+const isChosen = (name: string, all: readonly string[]) => !all.some((word) => ONLY.includes(word)) || all.some((word) => ONLY.includes(word) && name.includes(word));
 const ESTIMATOR = "estimator@tallgrass.example";
 const PROJECT_TITLE = "Varnum attic — gable fan and ridge vent";
 const NETWORKS = [
@@ -205,9 +209,11 @@ try {
     { name: "survey workspace", url: `/projects/${project.id}`, readyText: "Length (along the ridge)", storageState },
   ];
   console.log(`First visits (empty cache), 390 × 844, CPU ${CPU_THROTTLING_RATE}× slower, ${RUNS} runs each, baseline and this checkout alternating:`);
-  for (const network of NETWORKS) {
+  const networkWords = ["loopback", "slow"];
+  const pageWords = ["sign-in", "workspace"];
+  for (const network of NETWORKS.filter((n) => isChosen(n.name, networkWords))) {
     console.log(`  network: ${network.name}`);
-    for (const page of pages) {
+    for (const page of pages.filter((p) => isChosen(p.name, pageWords))) {
       const loadBefore = loadavg()[0]!.toFixed(1);
       const visits = new Map<Build, Visit[]>(builds.map((b) => [b, []]));
       // One untimed visit each first: the servers' first requests compile and connect.
