@@ -112,7 +112,8 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
-  const appOrigin = (fallback?: string) => env.APP_ORIGIN ?? fallback ?? `http://${env.HOST}:${env.PORT}`;
+  // Links in e-mail come from the configured origin only, never from a request header (server/env.ts).
+  const appOrigin = () => env.APP_ORIGIN;
   const audit = createAudit(db);
   const lucia = createLucia(db);
   const authRepo = createAuthRepository(db);
@@ -134,16 +135,16 @@ export function createApp(deps: AppDeps): Express {
   const optionsService = createOptionsService({ repo: createOptionsRepository(db), projects: projectsRepo, spaces: spacesRepo, catalog: catalogRepo });
 
   const proposalsRepo = createProposalsRepository(db);
-  const proposalJobs = createProposalJobs({ jobs: deps.jobs, repo: proposalsRepo, storage, logger, now, appOrigin: () => appOrigin(), recoveryAfterMs: env.JOBS_RECOVERY_SECONDS * 1_000 });
+  const proposalJobs = createProposalJobs({ jobs: deps.jobs, repo: proposalsRepo, storage, logger, now, appOrigin, recoveryAfterMs: env.JOBS_RECOVERY_SECONDS * 1_000 });
   const proposalsService = createProposalsService({
     repo: proposalsRepo, projects: projectsRepo, spaces: spacesRepo, options: createOptionsRepository(db), catalog: catalogRepo,
-    storage, jobs: proposalJobs, now, appOrigin: () => appOrigin(),
+    storage, jobs: proposalJobs, now, appOrigin,
   });
   const companyService = createCompanyService({ repo: proposalsRepo, storage });
   app.locals.proposalJobs = proposalJobs;
   const paymentsService = createPaymentsService({
     repo: createPaymentsRepository(db), proposals: proposalsService, provider: deps.paymentProvider === undefined ? createPaymentProvider(env) : deps.paymentProvider,
-    jobs: deps.jobs, logger, now, appOrigin: () => appOrigin(),
+    jobs: deps.jobs, logger, now, appOrigin,
   });
 
   const pipelineService = createPipelineService({
@@ -157,7 +158,7 @@ export function createApp(deps: AppDeps): Express {
   // The payment webhook's signature covers the raw bytes: read them before the JSON parser.
   api.use(PAYMENTS_WEBHOOK_PATH, paymentsWebhookBody());
   api.use(express.json({ limit: "1mb" }));
-  api.use(originCheck({ allowedOrigins: env.APP_ORIGIN ? [env.APP_ORIGIN] : [], exemptPaths: [/^\/webhooks\//] }));
+  api.use(originCheck({ allowedOrigins: [env.APP_ORIGIN], exemptPaths: [/^\/webhooks\//] }));
 
   api.get("/health", async (_req, res) => {
     try {

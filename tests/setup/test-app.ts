@@ -26,7 +26,7 @@ export const TEST_PASSWORD = "correct horse battery";
  * `runWorkers: false` leaves background jobs (mail, PDF) to other processes, e.g. for a test
  * that stops the database, where another file's queued job must not be half-run.
  */
-export async function startTestApp(opts: { envOverrides?: Record<string, string>; runWorkers?: boolean; databaseUrl?: string } = {}) {
+export async function startTestApp(opts: { envOverrides?: Record<string, string | undefined>; runWorkers?: boolean; databaseUrl?: string } = {}) {
   const databaseUrl = opts.databaseUrl ?? testDatabaseUrl();
   const storageDir = mkdtempSync(path.join(tmpdir(), "eavesight-files-"));
   const env = parseEnv({
@@ -56,7 +56,7 @@ export async function startTestApp(opts: { envOverrides?: Record<string, string>
   /** A supertest agent signed in as the user (cookie kept), sending this app's Origin. */
   async function signIn(email: string, password = TEST_PASSWORD) {
     const agent = request.agent(app);
-    const res = await agent.post("/api/auth/sign-in").set("origin", ORIGIN).send({ email, password });
+    const res = await agent.post("/api/auth/sign-in").set("origin", env.APP_ORIGIN).send({ email, password });
     if (res.status !== 200) throw new Error(`sign-in failed for ${email}: ${res.status} ${JSON.stringify(res.body)}`);
     return agent;
   }

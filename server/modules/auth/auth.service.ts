@@ -19,7 +19,8 @@ export interface AuthDeps {
   lucia: AppLucia;
   audit: Audit;
   jobs: Jobs;
-  appOrigin: (fallback?: string) => string;
+  /** The configured public origin; mailed links never come from request headers. */
+  appOrigin: () => string;
   now?: () => Date;
 }
 
@@ -102,13 +103,13 @@ export function createAuthService(deps: AuthDeps) {
     },
 
     /** Same answer whether or not the address exists; only a real account gets mail. */
-    async requestReset(email: string, meta: RequestMeta, origin?: string) {
+    async requestReset(email: string, meta: RequestMeta) {
       const user = await deps.repo.findUserByEmail(email);
       await deps.audit({ event: "password-reset-requested", subjectEmail: email, userId: user?.id, companyId: user?.companyId }, meta);
       if (!user || !user.isActive) return;
       const { token, tokenHash } = newToken();
       await deps.repo.insertReset({ userId: user.id, tokenHash, expiresAt: new Date(now().getTime() + RESET_TTL_MS) });
-      const link = `${deps.appOrigin(origin)}/reset-password?token=${token}`;
+      const link = `${deps.appOrigin()}/reset-password?token=${token}`;
       await deps.jobs.sendEmail({
         companyId: user.companyId,
         to: user.email,
