@@ -30,10 +30,10 @@ export async function startTestApp(opts: { envOverrides?: Record<string, string 
   const databaseUrl = opts.databaseUrl ?? testDatabaseUrl();
   const storageDir = mkdtempSync(path.join(tmpdir(), "eavesight-files-"));
   const env = parseEnv({
-    ...process.env, DATABASE_URL: databaseUrl, APP_ORIGIN: ORIGIN, LOG_LEVEL: "silent", SERVE_CLIENT: "false",
+    ...process.env, DATABASE_URL: databaseUrl, APP_ORIGIN: ORIGIN, LOG_LEVEL: process.env.TEST_LOG_LEVEL ?? "silent", SERVE_CLIENT: "false",
     STORAGE_DRIVER: "local", STORAGE_DIR: storageDir, ...opts.envOverrides,
   });
-  const logger = createLogger("silent");
+  const logger = createLogger((process.env.TEST_LOG_LEVEL ?? "silent") as "silent");
   const { db, sql } = createDb(databaseUrl, { max: 5 });
   const mailer = createMailer({ host: "127.0.0.1", port: testSmtpPort(), from: "Eavesight <no-reply@eavesight.example>" });
   const jobs = await startJobs({ databaseUrl, logger, mailer, runWorkers: opts.runWorkers });
