@@ -71,6 +71,11 @@ export interface AppDeps {
   now?: () => Date;
   /** File storage; by default the driver STORAGE_DRIVER names. */
   storage?: Storage;
+  /**
+   * Prefix of the shared rate-limit counters. Processes of one deployment share the default;
+   * test files each take their own so one file's failed look-ups never limit another's.
+   */
+  rateLimitNamespace?: string;
   /** The payment provider; by default the `stripe` SDK as PAYMENTS_API_BASE and the keys configure it. */
   paymentProvider?: PaymentProvider | null;
 }
@@ -152,7 +157,7 @@ export function createApp(deps: AppDeps): Express {
     liveOptionTotals: async (actor, projectId) => (await optionsService.list(actor, projectId)).map((o) => ({ id: o.id, totalCents: o.price?.totalCents ?? null })),
   });
   const api = express.Router();
-  api.use("/public", ...publicRateLimits());
+  api.use("/public", ...publicRateLimits({ db, now, namespace: deps.rateLimitNamespace ?? "" }));
   // Routes carrying a drawn signature parse their own (larger) JSON first; the parser below then skips them.
   api.use(["/public/proposals/:token/accept", "/auth/me/signature"], signatureJson());
   // The payment webhook's signature covers the raw bytes: read them before the JSON parser.

@@ -26,7 +26,7 @@ export const TEST_PASSWORD = "correct horse battery";
  * `runWorkers: false` leaves background jobs (mail, PDF) to other processes, e.g. for a test
  * that stops the database, where another file's queued job must not be half-run.
  */
-export async function startTestApp(opts: { envOverrides?: Record<string, string | undefined>; runWorkers?: boolean; databaseUrl?: string } = {}) {
+export async function startTestApp(opts: { envOverrides?: Record<string, string | undefined>; runWorkers?: boolean; databaseUrl?: string; rateLimitNamespace?: string } = {}) {
   const databaseUrl = opts.databaseUrl ?? testDatabaseUrl();
   const storageDir = mkdtempSync(path.join(tmpdir(), "eavesight-files-"));
   const env = parseEnv({
@@ -39,7 +39,7 @@ export async function startTestApp(opts: { envOverrides?: Record<string, string 
   const jobs = await startJobs({ databaseUrl, logger, mailer, runWorkers: opts.runWorkers });
   const clock = { offsetMs: 0 };
   const now = () => new Date(Date.now() + clock.offsetMs);
-  const app = createApp({ env, db, logger, jobs, now });
+  const app = createApp({ env, db, logger, jobs, now, rateLimitNamespace: opts.rateLimitNamespace ?? `test-${randomUUID()}:` });
 
   /** A company of its own per test file, so files never see each other's rows. */
   async function makeCompany(name = `Test Co ${randomUUID().slice(0, 8)}`) {
