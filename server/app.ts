@@ -12,6 +12,8 @@ import { errorMiddleware } from "./lib/error-middleware.ts";
 import { originCheck } from "./lib/csrf.ts";
 import { AppError } from "./lib/errors.ts";
 import { createAudit } from "./lib/audit.ts";
+import { requestScopedDb } from "./lib/request-transaction.ts";
+import { createsInTransaction } from "./lib/idempotency.ts";
 import { createLucia } from "./modules/auth/lucia.ts";
 import { sessionMiddleware } from "./modules/auth/session.middleware.ts";
 import { createAuthRepository } from "./modules/auth/auth.repository.ts";
@@ -81,7 +83,9 @@ export interface AppDeps {
 }
 
 export function createApp(deps: AppDeps): Express {
-  const { env, db, logger } = deps;
+  const { env, logger } = deps;
+  // Repositories see the request's transaction when one is running (creating routes), else the pool.
+  const db = requestScopedDb(deps.db);
   const now = deps.now ?? (() => new Date());
   const app = express();
   app.disable("x-powered-by");
@@ -119,6 +123,7 @@ export function createApp(deps: AppDeps): Express {
 
   // Links in e-mail come from the configured origin only, never from a request header (server/env.ts).
   const appOrigin = () => env.APP_ORIGIN;
+  app.locals.createsInTransaction = createsInTransaction({ db: deps.db, now });
   const audit = createAudit(db);
   const lucia = createLucia(db);
   const authRepo = createAuthRepository(db);
