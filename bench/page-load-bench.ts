@@ -184,7 +184,7 @@ try {
     if (!existsSync(clientDir)) throw new Error(`no client build in ${clientDir}`);
     const port = await freePort();
     const server = await startServerIn(root, {
-      ...process.env, DATABASE_URL: databaseUrl, NODE_ENV: "test", PORT: String(port), SMTP_PORT: String(smtp.port), LOG_LEVEL: "error", CLIENT_DIR: clientDir,
+      ...process.env, DATABASE_URL: databaseUrl, NODE_ENV: "test", PORT: String(port), APP_ORIGIN: `http://127.0.0.1:${port}`, SMTP_PORT: String(smtp.port), LOG_LEVEL: "error", CLIENT_DIR: clientDir,
     });
     builds.push({ label, root, baseUrl: `http://127.0.0.1:${port}`, server });
   }
