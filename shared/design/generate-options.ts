@@ -62,7 +62,7 @@ import {
   usableRidgeFt,
   type RoofConstraints,
 } from "./roof-constraints";
-import { sizeVentItem, type VentRoom } from "./size-vent-item";
+import { sizeVentItem, type SizeResult, type VentRoom } from "./size-vent-item";
 
 export const OPTION_TYPES = ["ridge-and-continuous-soffit", "static-vents-and-individual-soffit", "remove-fan-passive"] as const;
 export type OptionType = (typeof OPTION_TYPES)[number];
@@ -348,6 +348,32 @@ function upperShareMin(ctx: Context, ratio: Ratio): number {
   return ratio === 300 && ctx.input.project.codeBasis === "irc-2009" ? 0.5 : 0.4;
 }
 
+/** The most passive exhaust the 1/300 route allows, sq in: 50 % (2009: 80 %) of the exact required area under the literal reading; unlimited otherwise. */
+function exhaustCapSqIn(ctx: Context, ratio: Ratio, areaSqFt: number): number {
+  if (ratio !== 300 || (ctx.input.project.upperShareBase ?? "required") !== "required") return Infinity;
+  return ((areaSqFt * 144) / 300) * upperShareMax(ctx);
+}
+
+function upperShareMax(ctx: Context): number {
+  return ctx.input.project.codeBasis === "irc-2009" ? 0.8 : 0.5;
+}
+
+/** The smallest bought quantity of `item` giving at least `minSqIn` and at most `maxSqIn`, or null. */
+function sizeWithinCap(item: CatalogItem, minSqIn: number, maxSqIn: number, room: VentRoom): Extract<SizeResult, { fits: true }> | null {
+  const atMin = sizeVentItem(item, minSqIn, room);
+  if (atMin.fits && atMin.nfaSqIn <= maxSqIn + 1e-9) return atMin;
+  if (item.unit !== "linear-ft" || item.nfaSqInPerFt === null) return null;
+  const perFt = item.nfaSqInPerFt;
+  const feet = Math.ceil(minSqIn / perFt - 1e-9);
+  if (feet * perFt > maxSqIn + 1e-9 || feet > room.amount + 1e-9) return null;
+  return {
+    fits: true,
+    quantity: feet,
+    nfaSqIn: feet * perFt,
+    explanation: `${item.name} gives ${fmt(perFt)} sq in per ft: ${fmt(minSqIn)} ÷ ${fmt(perFt)} → ${fmt(feet)} ft, the last piece cut so the exhaust stays within the 50 % limit. ${fmt(feet)} ft × ${fmt(perFt)} = ${fmt(feet * perFt)} sq in.`,
+  };
+}
+
 function staticDropFt(ctx: Context): number {
   return ctx.minRiseFt !== null ? Math.min(STATIC_VENT_DROP_FT, ctx.minRiseFt / 2) : STATIC_VENT_DROP_FT;
 }
@@ -405,6 +431,18 @@ function designAt(ctx: Context, plan: Plan, ratio: Ratio): Design | { failure: s
       }
       aimWords = `Exhaust: half of ${fmt(requiredSqIn)} sq in does not fit (${sized.reason}) so the exhaust is held to the minimum share, ${fmt(shareMin * 100)} % = ${fmt(minSqIn)} sq in${haveSqIn > 0 ? `, less ${fmt(haveSqIn)} already counted` : ""}.`;
       sized = fallback;
+    }
+    // IRC 2012+ R806.2 condition 2, literal reading: upper vents at most 50 % of the REQUIRED area
+    // [SOURCES.md S4]. Whole pieces can overshoot it; then aim at the minimum share, then cut the
+    // last piece of a linear vent to whole feet; if even that overshoots, 1/300 is not offered.
+    const capSqIn = exhaustCapSqIn(ctx, ratio, areaSqFt) - keptAllSqIn - reusedSqIn;
+    if (sized.nfaSqIn > capSqIn + 1e-9) {
+      const within = sizeWithinCap(plan.exhaustItem, Math.max(0, minSqIn - haveSqIn), capSqIn, plan.exhaustRoom);
+      if (!within) {
+        return { failure: `At 1/${ratio} the exhaust must stay within ${fmt(shareMin * 100)}–${fmt(upperShareMax(ctx) * 100)} % of the ${fmt((areaSqFt * 144) / ratio)} sq in required (IRC R806.2), and ${plan.exhaustItem.name} can't be bought in a quantity that lands there.` };
+      }
+      aimWords = `${aimWords} Held to at most ${fmt(upperShareMax(ctx) * 100)} % of the required area (IRC R806.2: "not more than ${upperShareMax(ctx) === 0.8 ? "80" : "50"} percent of the required ventilating area").`;
+      sized = within;
     }
     rationale.push(clip(aimWords));
     if (sized.quantity > 0) {

@@ -1,4 +1,4 @@
-import type { AtticInput, CodeBasis, RoofColor, VaporRetarder } from "../ventilation/schema.ts";
+import type { AtticInput, CodeBasis, RoofColor, UpperShareBase, VaporRetarder } from "../ventilation/schema.ts";
 import type { SpaceSurvey } from "../schemas/survey.ts";
 
 export interface ProjectBasis {
@@ -6,6 +6,8 @@ export interface ProjectBasis {
   climateZone: number;
   ceilingVaporRetarder: VaporRetarder;
   roofColor: RoofColor;
+  /** The company's reading of the 1/300 upper-vent share (its profile setting); literal when absent. */
+  upperShareBase?: UpperShareBase | undefined;
 }
 
 /**
@@ -26,6 +28,7 @@ export function toAtticInput(project: ProjectBasis, space: SpaceSurvey): AtticIn
     climateZone: project.climateZone,
     ceilingVaporRetarder: project.ceilingVaporRetarder,
     roofColor: project.roofColor,
+    ...(project.upperShareBase !== undefined ? { upperShareBase: project.upperShareBase } : {}),
     sections: space.sections.map((s) => ({ ...s, roofForm: s.roofForm ?? space.roof.form, pitchIn12: s.pitchIn12 ?? space.roof.pitchIn12 })),
     vents: space.vents,
     site,

@@ -4,7 +4,7 @@
 import { diagnoseFan } from "../diagnostics/fan-diagnostics";
 import { formatNumber, roundTo, SQ_IN_PER_SQ_FT } from "../units/format";
 import { sectionGeometry } from "./attic-volume";
-import { providedNfa, type ProvidedNfa } from "./balance";
+import { meetsRequiredArea, providedNfa, type ProvidedNfa } from "./balance";
 import { fanIntakeNeededSqIn, recommendFanCfm, STEEP_PITCH_IN_12 } from "./fan-sizing";
 import { describeSectionArea, sectionAreaSqFt } from "./floor-area";
 import { sortFindings, ventilationFindings, type Finding } from "./findings";
@@ -52,7 +52,7 @@ export interface AtticAnalysis {
   /** Powered-fan sizing, or null when the attic has no powered fan. */
   fan: FanAnalysis | null;
   /**
-   * Meets the code minimum: passive NFA provided ≥ the required NFA (IRC R806.2) and the eave
+   * Meets the code minimum: passive NFA provided ≥ the exact required NFA (IRC R806.2; never rounded) and the eave
    * vents are not blocked by insulation (IRC R806.3).
    */
   compliant: boolean;
@@ -108,6 +108,7 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     codeBasis: attic.codeBasis,
     climateZone: attic.climateZone,
     ceilingVaporRetarder: attic.ceilingVaporRetarder,
+    upperShareBase: attic.upperShareBase,
     vents,
   });
 
@@ -149,18 +150,24 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     fan,
     site,
     required300SqIn: (floorAreaSqFt * SQ_IN_PER_SQ_FT) / 300,
+    impossibleHeights: vents.filter((v) => v.position.isHeightImpossible).map((v) => ({ vent: v.vent, riseFt: v.position.riseFt ?? 0 })),
   });
   for (const vent of attic.vents) {
     if (vent.diagnostics) findings.push(...diagnoseFan(vent.diagnostics, vent.id));
   }
 
-  const meetsArea = provided.totalSqIn >= requirement.totalSqIn;
+  // "Not less than" (IRC R806.2): the exact figures, never rounded [SOURCES.md S1, S7].
+  const meetsArea = meetsRequiredArea(provided.exactTotalSqIn, requirement.exactSqIn);
   const compliant = meetsArea && site.soffitsBlocked !== true;
+  // Enough digits that two different figures never print alike ("1,185.119 of 1,185.12").
+  const digits = Math.abs(provided.exactTotalSqIn - requirement.exactSqIn) < 0.01 ? 3 : 2;
+  const providedText = formatNumber(provided.exactTotalSqIn, { maxFractionDigits: digits });
+  const requiredText = formatNumber(requirement.exactSqIn, { maxFractionDigits: digits });
   const summary = meetsArea
     ? compliant
-      ? `Meets the code minimum: ${formatNumber(provided.totalSqIn)} sq in of vent area provided, ${formatNumber(requirement.totalSqIn)} sq in required at 1/${requirement.ratio}.`
-      : `Enough vent area on paper (${formatNumber(provided.totalSqIn)} of ${formatNumber(requirement.totalSqIn)} sq in at 1/${requirement.ratio}), but insulation blocks the soffit vents, so it does not meet the code (IRC R806.3).`
-    : `Below the code minimum: ${formatNumber(provided.totalSqIn)} sq in of vent area provided, ${formatNumber(requirement.totalSqIn)} sq in required at 1/${requirement.ratio}.`;
+      ? `Meets the code minimum: ${providedText} sq in of vent area provided, ${requiredText} sq in required at 1/${requirement.ratio}.`
+      : `Enough vent area on paper (${providedText} of ${requiredText} sq in at 1/${requirement.ratio}), but insulation blocks the soffit vents, so it does not meet the code (IRC R806.3).`
+    : `Below the code minimum: ${providedText} sq in of vent area provided, ${requiredText} sq in required at 1/${requirement.ratio}.`;
 
   return {
     floorAreaSqFt,

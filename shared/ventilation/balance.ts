@@ -12,8 +12,12 @@ export interface ProvidedNfa {
   intakeSqIn: number;
   /** Passive NFA of high (exhaust) vents, sq in. */
   exhaustSqIn: number;
-  /** intake + exhaust, sq in. Powered fans add nothing. */
+  /** intake + exhaust, sq in, rounded to 0.01 for display. Powered fans add nothing. */
   totalSqIn: number;
+  /** Unrounded sums: what the code checks compare with the exact requirement. */
+  exactIntakeSqIn: number;
+  exactExhaustSqIn: number;
+  exactTotalSqIn: number;
   /** intake ÷ total, 0–1; null when there is no passive vent area. */
   intakeShare: number | null;
   /** Installed powered-fan airflow, cfm. */
@@ -24,18 +28,31 @@ export interface ProvidedNfa {
 /**
  * @example
  * providedNfa([
- *   { ventId: "s", kind: "soffit-continuous", location: "lower", isPowered: false, nfaSqIn: 720, airflowCfm: 0, explanation: "" },
- *   { ventId: "r", kind: "ridge", location: "upper", isPowered: false, nfaSqIn: 480, airflowCfm: 0, explanation: "" },
+ *   { ventId: "s", kind: "soffit-continuous", location: "lower", isPowered: false, nfaSqIn: 720, exactNfaSqIn: 720, airflowCfm: 0, explanation: "" },
+ *   { ventId: "r", kind: "ridge", location: "upper", isPowered: false, nfaSqIn: 480, exactNfaSqIn: 480, airflowCfm: 0, explanation: "" },
  * ]) // { intakeSqIn: 720, exhaustSqIn: 480, totalSqIn: 1200, intakeShare: 0.6, … }
  */
+/**
+ * Does the provided area meet a required area? "Not less than" (IRC R806.2): exact figures are
+ * compared; the only allowance is for binary floating-point noise (a relative 1e-12), never a
+ * rounding of either side.
+ *
+ * @example
+ * meetsRequiredArea(1185.5, 1185.12) // true, though 1,185.5 < the 1,186 sq in bought
+ * meetsRequiredArea(1185.119, 1185.12) // false
+ */
+export function meetsRequiredArea(providedSqIn: number, requiredSqIn: number): boolean {
+  return providedSqIn >= requiredSqIn - Math.abs(requiredSqIn) * 1e-12;
+}
+
 export function providedNfa(perVent: VentNfa[]): ProvidedNfa {
   let intake = 0;
   let exhaust = 0;
   let poweredCfm = 0;
   for (const v of perVent) {
     if (v.isPowered) poweredCfm += v.airflowCfm;
-    else if (v.location === "lower") intake += v.nfaSqIn;
-    else exhaust += v.nfaSqIn;
+    else if (v.location === "lower") intake += v.exactNfaSqIn;
+    else exhaust += v.exactNfaSqIn;
   }
   const intakeSqIn = roundTo(intake, 2);
   const exhaustSqIn = roundTo(exhaust, 2);
@@ -44,6 +61,9 @@ export function providedNfa(perVent: VentNfa[]): ProvidedNfa {
     intakeSqIn,
     exhaustSqIn,
     totalSqIn,
+    exactIntakeSqIn: intake,
+    exactExhaustSqIn: exhaust,
+    exactTotalSqIn: intake + exhaust,
     intakeShare: totalSqIn > 0 ? intakeSqIn / totalSqIn : null,
     poweredCfm,
     perVent,

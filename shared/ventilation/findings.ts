@@ -4,7 +4,7 @@
  */
 import { ATTIC_SAFETY_CAUTION, COMBUSTION_SAFETY_CAUTION, FAN_SAFETY_CAUTION, ROOF_SAFETY_CAUTION } from "../diagnostics/cautions";
 import { formatNumber, formatPercent } from "../units/format";
-import type { ProvidedNfa } from "./balance";
+import { meetsRequiredArea, type ProvidedNfa } from "./balance";
 import { FAN_OVERSIZED_ABOVE, FAN_UNDERSIZED_BELOW } from "./fan-sizing";
 import type { Requirement } from "./requirement";
 import type { Site, Vent } from "./schema";
@@ -14,6 +14,7 @@ import type { VentNfa } from "./vent-nfa";
 export const FINDING_CODES = [
   // ventilation (DESIGN.md §4)
   "below-minimum",
+  "meets-minimum-narrowly",
   "no-intake",
   "no-exhaust",
   "exhaust-exceeds-intake",
@@ -34,11 +35,21 @@ export const FINDING_CODES = [
   "appliance-exhaust-into-attic",
   "powered-fan-depressurization",
   "upper-vent-position-unknown",
+  "upper-share-reading",
+  "vent-height-impossible",
   "vent-location-unusual",
   // fan diagnostics (shared/diagnostics)
   "fan-power-not-verified",
   "fan-power-verified",
+  "fan-lockout-missing",
+  "fan-tester-not-proven",
+  "fan-safety-steps-not-recorded",
   "fan-winding-open",
+  "fan-winding-shorted",
+  "fan-winding-grounded",
+  "fan-ground-ok",
+  "fan-capacitor-failed",
+  "fan-capacitor-ok",
   "fan-winding-suspect",
   "fan-winding-ok",
   "fan-bearings-seized",
@@ -88,6 +99,8 @@ export interface FindingContext {
   fan: FanSummary | null;
   site: Site;
   required300SqIn: number;
+  /** Vents whose recorded height or drop is above the highest rise of the space. */
+  impossibleHeights?: ReadonlyArray<{ vent: Vent; riseFt: number }>;
 }
 
 const PASSIVE_EXHAUST_KINDS: ReadonlySet<VentKind> = new Set<VentKind>(["ridge", "box", "turbine", "off-ridge", "cupola", "gable-louver"]);
@@ -105,18 +118,30 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
   const passiveLower = passive.filter((v) => v.location === "lower" && v.nfaSqIn > 0);
   const ids = (items: ReadonlyArray<VentNfa>) => items.map((v) => v.ventId);
 
-  // IRC R806.2 minimum.
-  if (provided.totalSqIn < requirement.totalSqIn) {
-    const shortSqIn = requirement.totalSqIn - provided.totalSqIn;
+  // IRC R806.2 minimum: "not less than" — exact figures, never rounded [SOURCES.md S1, S7].
+  const meetsArea = meetsRequiredArea(provided.exactTotalSqIn, requirement.exactSqIn);
+  if (!meetsArea) {
+    const shortSqIn = requirement.exactSqIn - provided.exactTotalSqIn;
     findings.push({
       code: "below-minimum",
       severity: "critical",
       title: "Less vent area than the code minimum",
       detail:
-        `The attic has ${formatNumber(provided.totalSqIn)} sq in of net free vent area; at 1/${requirement.ratio} it needs ${formatNumber(requirement.totalSqIn)} sq in, ` +
-        `${formatNumber(shortSqIn)} sq in short. Add vent area — intake at the eaves first, then exhaust high on the roof — keeping intake at least equal to exhaust.`,
+        `The attic has ${formatNumber(provided.exactTotalSqIn)} sq in of net free vent area; at 1/${requirement.ratio} it needs ${formatNumber(requirement.exactSqIn)} sq in, ` +
+        `${formatNumber(shortSqIn, { maxFractionDigits: shortSqIn < 1 ? 3 : 2 })} sq in short. Add vent area — intake at the eaves first, then exhaust high on the roof — keeping intake at least equal to exhaust.`,
       ventIds: ids(passive),
       caution: ROOF_SAFETY_CAUTION,
+    });
+  } else if (provided.exactTotalSqIn < requirement.totalSqIn) {
+    // Meets the exact figure but not the whole number a buyer rounds up to: say so plainly.
+    findings.push({
+      code: "meets-minimum-narrowly",
+      severity: "info",
+      title: "Meets the minimum by less than 1 sq in",
+      detail:
+        `The ${formatNumber(provided.exactTotalSqIn)} sq in provided is not less than the exact ${formatNumber(requirement.exactSqIn)} sq in the code asks for at 1/${requirement.ratio}, so it meets the minimum. ` +
+        `Figures shown and bought are rounded up to ${formatNumber(requirement.totalSqIn)} sq in; any vent that closes up (paint, insulation, a nest) would put this attic below the minimum.`,
+      ventIds: [],
     });
   }
 
@@ -281,8 +306,8 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
   }
 
   // Exception and upper-vent position (IRC R806.2, per edition).
-  if (requirement.exception.isAvailable && requirement.ratio === 150 && provided.totalSqIn < requirement.totalSqIn) {
-    const wouldPass = provided.totalSqIn >= Math.ceil(ctx.required300SqIn - 1e-6);
+  if (requirement.exception.isAvailable && requirement.ratio === 150 && !meetsArea) {
+    const wouldPass = meetsRequiredArea(provided.exactTotalSqIn, ctx.required300SqIn);
     const failed = requirement.exception.conditions.filter((c) => c.status === "not-met").map((c) => c.reason);
     findings.push({
       code: "exception-not-met",
@@ -290,10 +315,36 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
       title: "The 1/300 exception does not apply",
       detail:
         (wouldPass
-          ? `The ${formatNumber(provided.totalSqIn)} sq in provided would meet 1/300 (${formatNumber(Math.ceil(ctx.required300SqIn - 1e-6))} sq in), but the exception's conditions are not met, so 1/150 applies. `
+          ? `The ${formatNumber(provided.totalSqIn)} sq in provided would meet 1/300 (${formatNumber(ctx.required300SqIn)} sq in), but the exception's conditions are not met, so 1/150 applies. `
           : "Even the 1/300 route would need more vent area than is provided. ") +
         `What falls short: ${failed.join(" ")} To use 1/300, place 40–50 % of the vent area (50–80 % under IRC 2009) high near the ridge and the balance at the eaves, or meet the vapor-retarder condition where it applies.`,
       ventIds: [],
+    });
+  }
+  if (requirement.otherReading !== null) {
+    const other = requirement.otherReading;
+    const chosenIsLiteral = requirement.upperShareBase === "required";
+    findings.push({
+      code: "upper-share-reading",
+      severity: "info",
+      title: chosenIsLiteral ? "Another reading of the 40–50 % rule" : "This company reads the 40–50 % rule locally",
+      detail: chosenIsLiteral
+        ? `The code text takes the upper-vent share as a percentage of the required area, and that is what Eavesight checks. Your building department may read it as a share of the vent area provided; under that reading the 1/300 route ${other.wouldBeMet ? "would be met" : "would not be met"}. ${other.reason} Ask the building department which reading it uses.`
+        : `This company's setting takes the upper-vent share as a percentage of the vent area provided. Under the literal text (a percentage of the required area) the 1/300 route ${other.wouldBeMet ? "would be met" : "would not be met"}. ${other.reason}`,
+      ventIds: [],
+    });
+  }
+  for (const { vent, riseFt } of ctx.impossibleHeights ?? []) {
+    const recorded =
+      vent.heightAboveEaveFt !== undefined && vent.heightAboveEaveFt > riseFt
+        ? `recorded ${formatNumber(vent.heightAboveEaveFt)} ft above the eaves`
+        : `recorded ${formatNumber(vent.dropBelowRidgeFt ?? 0)} ft below the ridge`;
+    findings.push({
+      code: "vent-height-impossible",
+      severity: "warning",
+      title: "A vent's recorded height can't be right",
+      detail: `${ventListPhrase([vent])} is ${recorded}, but the highest point of this space is only ${formatNumber(riseFt)} ft above the eaves (from the roof pitch and span). Check the measurement or the pitch; until then the vent is not counted as an upper vent for the 1/300 route.`,
+      ventIds: [vent.id],
     });
   }
   if (requirement.tooLowUpperVentIds.length > 0) {

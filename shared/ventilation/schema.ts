@@ -13,9 +13,16 @@ export const VaporRetarderSchema = z.enum(["none", "class-I", "class-II", "class
 export const RoofColorSchema = z.enum(["light", "medium", "dark"]);
 export const RoofFormSchema = z.enum(["gable", "hip", "shed"]);
 export const VentKindSchema = z.enum(VENT_KINDS);
+/**
+ * Which area the 1/300 route's 40–50 % (2009: 50–80 %) upper-vent share is taken of: "required"
+ * is the literal text [SOURCES.md S4]; "provided" is a local reading a company may choose.
+ */
+export const UpperShareBaseSchema = z.enum(["required", "provided"]);
 export const VentLocationSchema = z.enum(["upper", "lower"]);
 export const MeshSizeSchema = z.enum(["1/4", "1/8", "1/16"]);
-export const CoveringSchema = z.object({ mesh: MeshSizeSchema, louvers: z.boolean() });
+export const LouverMaterialSchema = z.enum(["wood", "metal"]);
+/** louverMaterial is optional so surveys stored before it existed stay valid (DEVELOPERS.md decision 8). */
+export const CoveringSchema = z.object({ mesh: MeshSizeSchema, louvers: z.boolean(), louverMaterial: LouverMaterialSchema.optional() });
 
 /** Limits: generous for any house, small enough that sums stay finite. */
 export const LIMITS = {
@@ -188,6 +195,8 @@ export const AtticInputSchema = z
     climateZone: z.number().int("Climate zone is a whole number 1–8.").min(1, "Climate zone is 1–8.").max(8, "Climate zone is 1–8."),
     ceilingVaporRetarder: VaporRetarderSchema,
     roofColor: RoofColorSchema,
+    /** The company's reading of the upper-vent share; the literal "required" when absent. */
+    upperShareBase: UpperShareBaseSchema.optional(),
     sections: z.array(SectionSchema).min(1, "Add at least one section of attic floor.").max(LIMITS.maxSections),
     vents: z.array(VentSchema).max(LIMITS.maxVents),
     site: SiteSchema.optional(),
@@ -211,6 +220,7 @@ export const AtticInputSchema = z
 
 export type CodeBasis = z.infer<typeof CodeBasisSchema>;
 export type VaporRetarder = z.infer<typeof VaporRetarderSchema>;
+export type UpperShareBase = z.infer<typeof UpperShareBaseSchema>;
 export type RoofColor = z.infer<typeof RoofColorSchema>;
 export type VentLocation = z.infer<typeof VentLocationSchema>;
 export type Section = z.infer<typeof SectionSchema>;

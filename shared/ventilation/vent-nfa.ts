@@ -15,8 +15,10 @@ export interface VentNfa {
   kind: VentKind;
   location: VentLocation;
   isPowered: boolean;
-  /** Net free area of the whole entry (all units), sq in, rounded to 0.01; 0 for powered fans. */
+  /** Net free area of the whole entry (all units), sq in, rounded to 0.01 for display; 0 for powered fans. */
   nfaSqIn: number;
+  /** The same, unrounded: the figure the code checks compare (a verdict is never rounded). */
+  exactNfaSqIn: number;
   /** Rated airflow of the whole entry (all units), cfm; 0 for passive vents. */
   airflowCfm: number;
   /** The arithmetic in words, e.g. "40 ft × 18 sq in per ft = 720 sq in". */
@@ -39,6 +41,7 @@ export function ventNfa(vent: Vent): VentNfa {
       ...base,
       isPowered: true,
       nfaSqIn: 0,
+      exactNfaSqIn: 0,
       airflowCfm,
       explanation: `${qtyText(`${formatNumber(vent.cfm ?? 0)} cfm`)}${quantity > 1 ? ` = ${formatNumber(airflowCfm)} cfm` : ""}; a powered fan is mechanical and adds no net free area`,
     };
@@ -68,5 +71,5 @@ export function ventNfa(vent: Vent): VentNfa {
     explanation = "no size recorded";
   }
   const nfaSqIn = roundTo(exactSqIn, 2);
-  return { ...base, isPowered: false, nfaSqIn, airflowCfm: 0, explanation: `${explanation} = ${formatNumber(nfaSqIn)} sq in` };
+  return { ...base, isPowered: false, nfaSqIn, exactNfaSqIn: exactSqIn, airflowCfm: 0, explanation: `${explanation} = ${formatNumber(nfaSqIn)} sq in` };
 }
