@@ -702,6 +702,11 @@ export function generateOptions(input: GenerateOptionsInput): GenerateOptionsRes
     const reason = `The survey can't be analysed yet: ${tried.issues.map((i) => `${i.path || "attic"}: ${i.message}`).join("; ")}`;
     return { baseline: null, options: [], skipped: OPTION_TYPES.map((type) => ({ type, reason: clip(reason) })) };
   }
+  if (tried.analysis.assembly === "unvented") {
+    // IRC R806.5: a sealed attic gets no vents — adding them is the harm this check exists to prevent.
+    const reason = "This attic is an unvented (sealed) roof assembly under IRC R806.5: Eavesight never proposes vents into it. See its findings for the R806.5 conditions to check instead.";
+    return { baseline: tried.analysis, options: [], skipped: OPTION_TYPES.map((type) => ({ type, reason })) };
+  }
   const ctx = buildContext(input, tried.analysis);
   const options: GeneratedOption[] = [];
   const skipped: SkippedOption[] = [];

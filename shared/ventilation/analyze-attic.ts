@@ -7,8 +7,9 @@ import { sectionGeometry } from "./attic-volume";
 import { meetsRequiredArea, providedNfa, type ProvidedNfa } from "./balance";
 import { fanIntakeNeededSqIn, recommendFanCfm, STEEP_PITCH_IN_12 } from "./fan-sizing";
 import { describeSectionArea, sectionAreaSqFt } from "./floor-area";
-import { sortFindings, ventilationFindings, type Finding } from "./findings";
-import { requiredNfa, type Requirement } from "./requirement";
+import { sortFindings, unventedFindings, ventilationFindings, type Finding } from "./findings";
+import { requiredNfa, unventedRequirement, type Requirement } from "./requirement";
+import { checkUnventedAssembly, type UnventedCheck } from "./unvented";
 import { AtticInputSchema, type AtticInput } from "./schema";
 import { ventNfa } from "./vent-nfa";
 import { riseLookup, ventPosition } from "./vent-position";
@@ -56,6 +57,10 @@ export interface AtticAnalysis {
    * vents are not blocked by insulation (IRC R806.3).
    */
   compliant: boolean;
+  /** "unvented" for a sealed attic (IRC R806.5): no vent area is required or recommended. */
+  assembly: "vented" | "unvented";
+  /** The R806.5 conditions of an unvented attic, or null for a vented one. */
+  unvented: UnventedCheck | null;
   /** One plain sentence a homeowner can read. */
   summary: string;
   /** Critical first, then warnings, then notes. */
@@ -103,7 +108,9 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     label: vent.label,
   }));
   const provided = providedNfa(vents.map((v) => v.nfa));
-  const requirement = requiredNfa({
+  const isUnvented = attic.assembly === "unvented" && attic.unvented !== undefined;
+  const unvented = isUnvented ? checkUnventedAssembly(attic.unvented!, attic.climateZone, attic.moistureRegime, attic.ceilingVaporRetarder) : null;
+  const requirement = isUnvented ? unventedRequirement(attic.codeBasis) : requiredNfa({
     floorAreaSqFt,
     codeBasis: attic.codeBasis,
     climateZone: attic.climateZone,
@@ -113,7 +120,7 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
   });
 
   let fan: FanAnalysis | null = null;
-  if (provided.poweredCfm > 0) {
+  if (provided.poweredCfm > 0 && !isUnvented) {
     const isSteep = attic.sections.some((s) => s.pitchIn12 !== undefined && s.pitchIn12 >= STEEP_PITCH_IN_12);
     const sizing = recommendFanCfm({
       floorAreaSqFt,
@@ -141,7 +148,7 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     };
   }
 
-  const findings = ventilationFindings({
+  const findings = (isUnvented ? unventedFindings : ventilationFindings)({
     floorAreaSqFt,
     vents: attic.vents,
     perVent: provided.perVent,
@@ -151,6 +158,7 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     site,
     required300SqIn: (floorAreaSqFt * SQ_IN_PER_SQ_FT) / 300,
     impossibleHeights: vents.filter((v) => v.position.isHeightImpossible).map((v) => ({ vent: v.vent, riseFt: v.position.riseFt ?? 0 })),
+    unvented,
   });
   for (const vent of attic.vents) {
     if (vent.diagnostics) findings.push(...diagnoseFan(vent.diagnostics, vent.id));
@@ -158,16 +166,32 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
 
   // "Not less than" (IRC R806.2): the exact figures, never rounded [SOURCES.md S1, S7].
   const meetsArea = meetsRequiredArea(provided.exactTotalSqIn, requirement.exactSqIn);
-  const compliant = meetsArea && site.soffitsBlocked !== true;
-  // Enough digits that two different figures never print alike ("1,185.119 of 1,185.12").
-  const digits = Math.abs(provided.exactTotalSqIn - requirement.exactSqIn) < 0.01 ? 3 : 2;
-  const providedText = formatNumber(provided.exactTotalSqIn, { maxFractionDigits: digits });
-  const requiredText = formatNumber(requirement.exactSqIn, { maxFractionDigits: digits });
-  const summary = meetsArea
-    ? compliant
-      ? `Meets the code minimum: ${providedText} sq in of vent area provided, ${requiredText} sq in required at 1/${requirement.ratio}.`
-      : `Enough vent area on paper (${providedText} of ${requiredText} sq in at 1/${requirement.ratio}), but insulation blocks the soffit vents, so it does not meet the code (IRC R806.3).`
-    : `Below the code minimum: ${providedText} sq in of vent area provided, ${requiredText} sq in required at 1/${requirement.ratio}.`;
+  let compliant: boolean;
+  let summary: string;
+  if (unvented) {
+    const openings = attic.vents.length;
+    compliant = unvented.isMet && openings === 0;
+    const open = unvented.conditions.filter((c) => c.status === "not-met").length;
+    const unknown = unvented.conditions.filter((c) => c.status === "unknown").length;
+    summary =
+      "Unvented (sealed) attic: under IRC R806.5 it needs no vent area, and none should be added. " +
+      (unvented.isMet
+        ? openings === 0
+          ? "The conditions recorded are met."
+          : "The conditions recorded are met, but vents or fans open it to the outside."
+        : `${open > 0 ? `${open} of its conditions ${open === 1 ? "is" : "are"} not met` : ""}${open > 0 && unknown > 0 ? " and " : ""}${unknown > 0 ? `${unknown} ${unknown === 1 ? "is" : "are"} not recorded` : ""}.`);
+  } else {
+    compliant = meetsArea && site.soffitsBlocked !== true;
+    // Enough digits that two different figures never print alike ("1,185.119 of 1,185.12").
+    const digits = Math.abs(provided.exactTotalSqIn - requirement.exactSqIn) < 0.01 ? 3 : 2;
+    const providedText = formatNumber(provided.exactTotalSqIn, { maxFractionDigits: digits });
+    const requiredText = formatNumber(requirement.exactSqIn, { maxFractionDigits: digits });
+    summary = meetsArea
+      ? compliant
+        ? `Meets the code minimum: ${providedText} sq in of vent area provided, ${requiredText} sq in required at 1/${requirement.ratio}.`
+        : `Enough vent area on paper (${providedText} of ${requiredText} sq in at 1/${requirement.ratio}), but insulation blocks the soffit vents, so it does not meet the code (IRC R806.3).`
+      : `Below the code minimum: ${providedText} sq in of vent area provided, ${requiredText} sq in required at 1/${requirement.ratio}.`;
+  }
 
   return {
     floorAreaSqFt,
@@ -177,6 +201,8 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     provided,
     fan,
     compliant,
+    assembly: isUnvented ? "unvented" : "vented",
+    unvented,
     summary,
     findings: sortFindings(findings),
   };

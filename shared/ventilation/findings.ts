@@ -9,6 +9,7 @@ import { FAN_OVERSIZED_ABOVE, FAN_UNDERSIZED_BELOW } from "./fan-sizing";
 import type { Requirement } from "./requirement";
 import type { Site, Vent } from "./schema";
 import { EAVE_KINDS, VENT_KIND_LABELS, ventListPhrase, type VentKind } from "./vent-kinds";
+import type { UnventedCheck } from "./unvented";
 import type { VentNfa } from "./vent-nfa";
 
 export const FINDING_CODES = [
@@ -37,6 +38,11 @@ export const FINDING_CODES = [
   "upper-vent-position-unknown",
   "upper-share-reading",
   "vent-height-impossible",
+  // unvented attics (IRC R806.5)
+  "unvented-assembly",
+  "unvented-condition-not-met",
+  "unvented-condition-unknown",
+  "vents-in-unvented-attic",
   "vent-location-unusual",
   // fan diagnostics (shared/diagnostics)
   "fan-power-not-verified",
@@ -99,6 +105,8 @@ export interface FindingContext {
   fan: FanSummary | null;
   site: Site;
   required300SqIn: number;
+  /** The R806.5 check of an unvented attic; null or absent for a vented one. */
+  unvented?: UnventedCheck | null;
   /** Vents whose recorded height or drop is above the highest rise of the space. */
   impossibleHeights?: ReadonlyArray<{ vent: Vent; riseFt: number }>;
 }
@@ -430,4 +438,55 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
     });
   }
   return findings;
+}
+
+/** Site findings that hold whatever the assembly (moisture sources, fans and combustion safety). */
+const ASSEMBLY_NEUTRAL_CODES: ReadonlySet<FindingCode> = new Set<FindingCode>(["bath-fan-into-attic", "appliance-exhaust-into-attic", "backdraft-risk", "powered-fan-depressurization"]);
+
+/**
+ * Findings for an unvented (sealed) attic, IRC R806.5 [SOURCES.md S7, S25]. Never "add vents": the
+ * R806.5 conditions are checked instead, vents already open to the outside are flagged, and the
+ * moisture and combustion findings that hold for any attic are kept.
+ */
+export function unventedFindings(ctx: FindingContext): Finding[] {
+  const check = ctx.unvented;
+  const findings: Finding[] = [];
+  findings.push({
+    code: "unvented-assembly",
+    severity: "info",
+    title: "Sealed (unvented) attic: no vents needed",
+    detail:
+      "The insulation is at the roof line, so this attic is meant to be sealed, not vented (IRC R806.5). It needs no vent area, and vents must not be added: outdoor air let into it would reach the cool side of the insulation and can condense there.",
+    ventIds: [],
+  });
+  for (const condition of check?.conditions ?? []) {
+    if (condition.status === "not-met") {
+      findings.push({
+        code: "unvented-condition-not-met",
+        severity: "warning",
+        title: "A sealed-attic condition is not met",
+        detail: `${condition.reason} The fix is to the insulation or air barrier, not more vents: have the insulation contractor and the building department confirm it.`,
+        ventIds: [],
+        caution: ATTIC_SAFETY_CAUTION,
+      });
+    } else if (condition.status === "unknown") {
+      findings.push({ code: "unvented-condition-unknown", severity: "info", title: "A sealed-attic condition was not recorded", detail: `${condition.reason} Record it so the check can be completed.`, ventIds: [] });
+    }
+  }
+  const openings = ctx.vents;
+  if (openings.length > 0) {
+    findings.push({
+      code: "vents-in-unvented-attic",
+      severity: "warning",
+      title: "Vents or fans open a sealed attic to the outside",
+      detail: `${ventListPhrase(openings)} ${openings.length === 1 ? "opens" : "open"} this sealed attic to outdoor air, which works against the insulation at the roof line. Don't add more. Whether to close ${openings.length === 1 ? "it" : "them"} off is a decision for the insulation contractor and the building department; a fan here pulls conditioned air out of the house.`,
+      ventIds: openings.map((v) => v.id),
+      caution: ROOF_SAFETY_CAUTION,
+    });
+  }
+  // Combustion safety holds for a fan in any attic; sizing figures are not used by the neutral codes.
+  const installedCfm = ctx.perVent.reduce((acc, v) => acc + (v.isPowered ? v.airflowCfm : 0), 0);
+  const fan = ctx.fan ?? (installedCfm > 0 ? { installedCfm, recommendedCfm: installedCfm, intakeNeededSqIn: 0, intakeProvidedSqIn: 0 } : null);
+  const neutral = ventilationFindings({ ...ctx, fan, unvented: null }).filter((f) => ASSEMBLY_NEUTRAL_CODES.has(f.code));
+  return [...findings, ...neutral];
 }

@@ -386,3 +386,27 @@ export function requiredNfa(input: RequirementInput): Requirement {
     reasons,
   };
 }
+
+/**
+ * The requirement of an unvented attic (IRC R806.5): no net free area at all. Shaped like any
+ * requirement so screens and the PDF show "0 sq in required" with the reason.
+ */
+export function unventedRequirement(codeBasis: CodeBasis): Requirement {
+  return {
+    codeBasis,
+    ratio: 150,
+    exactSqIn: 0,
+    totalSqIn: 0,
+    totalSqFt: 0,
+    split: { isCodeRule: false, upperShareMin: 0, upperShareMax: 0, upperMinSqIn: 0, upperMaxSqIn: 0, lowerMinSqIn: 0, lowerMaxSqIn: 0, basis: "An unvented attic has no vents, so there is no split." },
+    exception: { isAvailable: false, isMet: false, connector: null, conditions: [] },
+    qualifyingUpperVentIds: [],
+    tooLowUpperVentIds: [],
+    unknownPositionVentIds: [],
+    upperShareBase: "required",
+    otherReading: null,
+    reasons: [
+      "This is an unvented (sealed) attic: IRC R806.5 lets an attic go without vents when the insulation is at the roof line and its conditions are met, so no net free area is required and none should be added.",
+    ],
+  };
+}

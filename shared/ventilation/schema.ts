@@ -172,6 +172,23 @@ export const VentSchema = z
     }
   });
 
+/** IECC moisture regime: A moist, B dry, C marine; zones 7 and 8 carry none [SOURCES.md S20, S21]. */
+export const MoistureRegimeSchema = z.enum(["A", "B", "C"]);
+export const AtticAssemblySchema = z.enum(["vented", "unvented"]);
+/** How an unvented (sealed) roof assembly is built — what IRC R806.5 checks [SOURCES.md S7, S25]. */
+export const UnventedAssemblySchema = z.object({
+  insulation: z.enum(["air-impermeable-only", "air-impermeable-and-air-permeable", "rigid-above-deck-and-air-permeable", "air-permeable-only"]),
+  /** R-value of the spray foam against the deck, or of the rigid board above it. */
+  airImpermeableRValue: z.number().min(0).max(100).optional(),
+  /** The foam is itself a Class II vapor retarder (closed-cell at normal thickness) or is coated with one. */
+  foamIsClassII: z.boolean().optional(),
+  /** The insulated roof line and air barrier enclose the whole attic (it is inside the thermal envelope). */
+  isInsideThermalEnvelope: z.boolean().optional(),
+  roofCovering: z.enum(["asphalt-shingles", "wood-shingles-or-shakes", "tile-or-metal", "other"]).optional(),
+  /** For wood shingles or shakes: a 1/4 in vented air space under them. */
+  hasVentedGapUnderShakes: z.boolean().optional(),
+});
+
 export const SiteSchema = z.object({
   /** A natural-draft (atmospheric) gas or oil appliance in the house: water heater, furnace, boiler. */
   atmosphericCombustionAppliance: z.boolean().optional(),
@@ -195,6 +212,11 @@ export const AtticInputSchema = z
     climateZone: z.number().int("Climate zone is a whole number 1–8.").min(1, "Climate zone is 1–8.").max(8, "Climate zone is 1–8."),
     ceilingVaporRetarder: VaporRetarderSchema,
     roofColor: RoofColorSchema,
+    /** IECC moisture letter with the zone (4C marine …); zones 7–8 have none. Optional for older surveys. */
+    moistureRegime: MoistureRegimeSchema.nullable().optional(),
+    /** "unvented" for a sealed attic (IRC R806.5); vented when absent. */
+    assembly: AtticAssemblySchema.optional(),
+    unvented: UnventedAssemblySchema.optional(),
     /** The company's reading of the upper-vent share; the literal "required" when absent. */
     upperShareBase: UpperShareBaseSchema.optional(),
     sections: z.array(SectionSchema).min(1, "Add at least one section of attic floor.").max(LIMITS.maxSections),
@@ -202,6 +224,9 @@ export const AtticInputSchema = z
     site: SiteSchema.optional(),
   })
   .superRefine((input, ctx) => {
+    if (input.assembly === "unvented" && input.unvented === undefined) {
+      ctx.addIssue({ code: "custom", path: ["unvented"], message: "Say how the unvented roof is insulated (spray foam, rigid board above the deck, or batts only)." });
+    }
     const sectionIds = new Set<string>();
     input.sections.forEach((section, index) => {
       if (section.id === undefined) return;
@@ -221,6 +246,8 @@ export const AtticInputSchema = z
 export type CodeBasis = z.infer<typeof CodeBasisSchema>;
 export type VaporRetarder = z.infer<typeof VaporRetarderSchema>;
 export type UpperShareBase = z.infer<typeof UpperShareBaseSchema>;
+export type MoistureRegime = z.infer<typeof MoistureRegimeSchema>;
+export type UnventedAssembly = z.infer<typeof UnventedAssemblySchema>;
 export type RoofColor = z.infer<typeof RoofColorSchema>;
 export type VentLocation = z.infer<typeof VentLocationSchema>;
 export type Section = z.infer<typeof SectionSchema>;
