@@ -157,6 +157,7 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     fan,
     site,
     required300SqIn: (floorAreaSqFt * SQ_IN_PER_SQ_FT) / 300,
+    climateZone: attic.climateZone,
     impossibleHeights: vents.filter((v) => v.position.isHeightImpossible).map((v) => ({ vent: v.vent, riseFt: v.position.riseFt ?? 0 })),
     unvented,
   });

@@ -20,16 +20,18 @@ export interface ProvidedNfa {
   exactTotalSqIn: number;
   /** intake ÷ total, 0–1; null when there is no passive vent area. */
   intakeShare: number | null;
-  /** Installed powered-fan airflow, cfm. */
+  /** Installed powered attic-fan airflow, cfm. */
   poweredCfm: number;
+  /** Installed whole-house fan airflow, cfm (blown INTO the attic). */
+  wholeHouseFanCfm: number;
   perVent: VentNfa[];
 }
 
 /**
  * @example
  * providedNfa([
- *   { ventId: "s", kind: "soffit-continuous", location: "lower", isPowered: false, nfaSqIn: 720, exactNfaSqIn: 720, airflowCfm: 0, explanation: "" },
- *   { ventId: "r", kind: "ridge", location: "upper", isPowered: false, nfaSqIn: 480, exactNfaSqIn: 480, airflowCfm: 0, explanation: "" },
+ *   { ventId: "s", kind: "soffit-continuous", location: "lower", isPowered: false, isWholeHouseFan: false, nfaSqIn: 720, exactNfaSqIn: 720, airflowCfm: 0, explanation: "" },
+ *   { ventId: "r", kind: "ridge", location: "upper", isPowered: false, isWholeHouseFan: false, nfaSqIn: 480, exactNfaSqIn: 480, airflowCfm: 0, explanation: "" },
  * ]) // { intakeSqIn: 720, exhaustSqIn: 480, totalSqIn: 1200, intakeShare: 0.6, … }
  */
 /**
@@ -49,8 +51,10 @@ export function providedNfa(perVent: VentNfa[]): ProvidedNfa {
   let intake = 0;
   let exhaust = 0;
   let poweredCfm = 0;
+  let wholeHouseFanCfm = 0;
   for (const v of perVent) {
-    if (v.isPowered) poweredCfm += v.airflowCfm;
+    if (v.isWholeHouseFan) wholeHouseFanCfm += v.airflowCfm;
+    else if (v.isPowered) poweredCfm += v.airflowCfm;
     else if (v.location === "lower") intake += v.exactNfaSqIn;
     else exhaust += v.exactNfaSqIn;
   }
@@ -66,6 +70,7 @@ export function providedNfa(perVent: VentNfa[]): ProvidedNfa {
     exactTotalSqIn: intake + exhaust,
     intakeShare: totalSqIn > 0 ? intakeSqIn / totalSqIn : null,
     poweredCfm,
+    wholeHouseFanCfm,
     perVent,
   };
 }

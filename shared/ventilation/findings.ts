@@ -10,6 +10,7 @@ import type { Requirement } from "./requirement";
 import type { Site, Vent } from "./schema";
 import { EAVE_KINDS, VENT_KIND_LABELS, ventListPhrase, type VentKind } from "./vent-kinds";
 import type { UnventedCheck } from "./unvented";
+import { wholeHouseFanFindings } from "./whole-house-fan";
 import type { VentNfa } from "./vent-nfa";
 
 export const FINDING_CODES = [
@@ -38,6 +39,9 @@ export const FINDING_CODES = [
   "upper-vent-position-unknown",
   "upper-share-reading",
   "vent-height-impossible",
+  // whole-house fans
+  "whole-house-fan-outlet-short",
+  "whole-house-fan-operation",
   // unvented attics (IRC R806.5)
   "unvented-assembly",
   "unvented-condition-not-met",
@@ -105,6 +109,8 @@ export interface FindingContext {
   fan: FanSummary | null;
   site: Site;
   required300SqIn: number;
+  /** IECC climate zone 1–8 (cold-climate advice). */
+  climateZone?: number;
   /** The R806.5 check of an unvented attic; null or absent for a vented one. */
   unvented?: UnventedCheck | null;
   /** Vents whose recorded height or drop is above the highest rise of the space. */
@@ -120,7 +126,7 @@ const plural = (n: number, one: string, many: string) => (n === 1 ? one : many);
 export function ventilationFindings(ctx: FindingContext): Finding[] {
   const findings: Finding[] = [];
   const { provided, requirement, site } = ctx;
-  const passive = ctx.perVent.filter((v) => !v.isPowered);
+  const passive = ctx.perVent.filter((v) => !v.isPowered && !v.isWholeHouseFan);
   const powered = ctx.perVent.filter((v) => v.isPowered);
   const passiveUpper = passive.filter((v) => v.location === "upper" && v.nfaSqIn > 0);
   const passiveLower = passive.filter((v) => v.location === "lower" && v.nfaSqIn > 0);
@@ -427,6 +433,16 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
     });
   }
 
+  findings.push(
+    ...wholeHouseFanFindings({
+      wholeHouseFanCfm: provided.wholeHouseFanCfm,
+      fanIds: ctx.perVent.filter((v) => v.isWholeHouseFan).map((v) => v.ventId),
+      atticNfaSqIn: provided.exactTotalSqIn,
+      hasAtmosphericAppliance: site.atmosphericCombustionAppliance,
+      climateZone: ctx.climateZone ?? 4,
+    }),
+  );
+
   const oddLocation = passive.filter((v) => (EAVE_KINDS.has(v.kind) && v.location === "upper") || ((v.kind === "ridge" || v.kind === "off-ridge" || v.kind === "cupola" || v.kind === "turbine") && v.location === "lower"));
   if (oddLocation.length > 0) {
     findings.push({
@@ -441,7 +457,7 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
 }
 
 /** Site findings that hold whatever the assembly (moisture sources, fans and combustion safety). */
-const ASSEMBLY_NEUTRAL_CODES: ReadonlySet<FindingCode> = new Set<FindingCode>(["bath-fan-into-attic", "appliance-exhaust-into-attic", "backdraft-risk", "powered-fan-depressurization"]);
+const ASSEMBLY_NEUTRAL_CODES: ReadonlySet<FindingCode> = new Set<FindingCode>(["bath-fan-into-attic", "appliance-exhaust-into-attic", "backdraft-risk", "powered-fan-depressurization", "whole-house-fan-operation"]);
 
 /**
  * Findings for an unvented (sealed) attic, IRC R806.5 [SOURCES.md S7, S25]. Never "add vents": the

@@ -5,7 +5,7 @@
 import { z } from "zod";
 import { FanDiagnosticsSchema } from "../diagnostics/schema";
 import { polygonProblem, shoelaceAreaSqFt } from "./floor-area";
-import { isPoweredKind, VENT_KINDS } from "./vent-kinds";
+import { isMechanicalKind, VENT_KINDS } from "./vent-kinds";
 
 export const CODE_BASES = ["irc-2018", "irc-2012", "irc-2009", "strict-150"] as const;
 export const CodeBasisSchema = z.enum(CODE_BASES);
@@ -127,7 +127,7 @@ export const VentSchema = z
   })
   .superRefine((vent, ctx) => {
     const nfaFields = ["nfaSqIn", "nfaSqInPerUnit", "lengthFt", "nfaSqInPerFt", "grossWidthIn", "grossHeightIn", "covering"] as const;
-    if (isPoweredKind(vent.kind)) {
+    if (isMechanicalKind(vent.kind)) {
       if (vent.cfm === undefined) {
         ctx.addIssue({ code: "custom", path: ["cfm"], message: "A powered fan needs its rated airflow in cfm." });
       }

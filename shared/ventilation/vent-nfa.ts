@@ -6,7 +6,7 @@
 import { formatNumber, roundTo } from "../units/format";
 import { coveringFactor, describeCovering } from "./covering-factors";
 import type { Vent, VentLocation } from "./schema";
-import { isPoweredKind, type VentKind } from "./vent-kinds";
+import { isPoweredKind, isWholeHouseFanKind, type VentKind } from "./vent-kinds";
 
 export interface VentNfa {
   ventId: string;
@@ -14,7 +14,10 @@ export interface VentNfa {
   label?: string;
   kind: VentKind;
   location: VentLocation;
+  /** A powered attic fan (not a whole-house fan). */
   isPowered: boolean;
+  /** A whole-house fan: it blows house air into the attic; no net free area. */
+  isWholeHouseFan: boolean;
   /** Net free area of the whole entry (all units), sq in, rounded to 0.01 for display; 0 for powered fans. */
   nfaSqIn: number;
   /** The same, unrounded: the figure the code checks compare (a verdict is never rounded). */
@@ -35,11 +38,24 @@ export function ventNfa(vent: Vent): VentNfa {
   const base = { ventId: vent.id, kind: vent.kind, location: vent.location, ...(vent.label ? { label: vent.label } : {}) };
   const qtyText = (each: string) => (quantity > 1 ? `${formatNumber(quantity)} × ${each}` : each);
 
+  if (isWholeHouseFanKind(vent.kind)) {
+    const airflowCfm = quantity * (vent.cfm ?? 0);
+    return {
+      ...base,
+      isPowered: false,
+      isWholeHouseFan: true,
+      nfaSqIn: 0,
+      exactNfaSqIn: 0,
+      airflowCfm,
+      explanation: `${qtyText(`${formatNumber(vent.cfm ?? 0)} cfm`)}${quantity > 1 ? ` = ${formatNumber(airflowCfm)} cfm` : ""}; a whole-house fan blows house air into the attic and adds no net free area`,
+    };
+  }
   if (isPoweredKind(vent.kind)) {
     const airflowCfm = quantity * (vent.cfm ?? 0);
     return {
       ...base,
       isPowered: true,
+      isWholeHouseFan: false,
       nfaSqIn: 0,
       exactNfaSqIn: 0,
       airflowCfm,
@@ -71,5 +87,5 @@ export function ventNfa(vent: Vent): VentNfa {
     explanation = "no size recorded";
   }
   const nfaSqIn = roundTo(exactSqIn, 2);
-  return { ...base, isPowered: false, nfaSqIn, exactNfaSqIn: exactSqIn, airflowCfm: 0, explanation: `${explanation} = ${formatNumber(nfaSqIn)} sq in` };
+  return { ...base, isPowered: false, isWholeHouseFan: false, nfaSqIn, exactNfaSqIn: exactSqIn, airflowCfm: 0, explanation: `${explanation} = ${formatNumber(nfaSqIn)} sq in` };
 }
