@@ -56,8 +56,24 @@ const passiveSize = fc.oneof(
     .map(([grossWidthIn, grossHeightIn, mesh, louvers, louverMaterial]) => ({ grossWidthIn, grossHeightIn, covering: clean({ mesh, louvers, louverMaterial }) })),
 );
 
+const conditionArb = fc.oneof(
+  fc.constant({}),
+  fc.constantFrom({ condition: "open" as const }, { condition: "blocked" as const }, { condition: "painted-over" as const }, { condition: "damaged" as const }),
+  fc.double({ min: 0, max: 1, noNaN: true }).map((blockedShare) => ({ condition: "partly-blocked" as const, blockedShare })),
+);
+
 export const passiveVentArb = (id: string): fc.Arbitrary<Vent> =>
-  fc.tuple(fc.constantFrom(...passiveKinds), placement, passiveSize).map(([kind, p, size]) => ({ id, kind, ...clean(p), ...size }));
+  fc
+    .tuple(fc.constantFrom(...passiveKinds), placement, passiveSize, conditionArb, fc.nat())
+    .map(([kind, p, size, condition, n]) => {
+      const vent = { id, kind, ...clean(p), ...size, ...condition } as Vent;
+      // Now and then "k of quantity" blocked instead of a share.
+      if (vent.condition === "partly-blocked" && n % 2 === 0) {
+        delete vent.blockedShare;
+        vent.blockedQuantity = n % ((vent.quantity ?? 1) + 1);
+      }
+      return vent;
+    });
 
 const diagnosticsArb = fc.record(
   {

@@ -39,6 +39,9 @@ export const FINDING_CODES = [
   "upper-vent-position-unknown",
   "upper-share-reading",
   "vent-height-impossible",
+  // vent condition
+  "vents-blocked",
+  "vent-damaged",
   // whole-house fans
   "whole-house-fan-outlet-short",
   "whole-house-fan-operation",
@@ -400,6 +403,38 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
       caution: ATTIC_SAFETY_CAUTION,
     });
   }
+  // Vent condition: what is blocked counts for nothing; the finding says how much area is lost.
+  const blockedVents = passive.filter((v) => v.openShare < 1);
+  if (blockedVents.length > 0) {
+    const lostSqIn = blockedVents.reduce((acc, v) => acc + (v.fullNfaSqIn - v.nfaSqIn), 0);
+    const parts = blockedVents.map((v) => `${ventListPhrase([v])}: ${v.explanation.split("; ").slice(-1)[0]}`);
+    const byInsulation = ctx.vents.some((v) => blockedVents.some((b) => b.ventId === v.id) && v.blockedBy === "insulation");
+    findings.push({
+      code: "vents-blocked",
+      severity: "warning",
+      title: "Some vents are blocked",
+      detail:
+        `${parts.join(". ")}. Blocked openings pass no air, so ${formatNumber(lostSqIn)} sq in of vent area is not counted. ` +
+        (byInsulation
+          ? "Pull the insulation back from the vents and fit baffles so it can't slide back (IRC R806.3 asks for at least 1 in of air space at the eaves)."
+          : "Clear them (paint can usually be cut out of the slots; replace a vent that can't be opened)."),
+      ventIds: blockedVents.map((v) => v.ventId),
+      caution: ATTIC_SAFETY_CAUTION,
+    });
+  }
+  const damaged = ctx.vents.filter((v) => v.condition === "damaged");
+  if (damaged.length > 0) {
+    findings.push({
+      code: "vent-damaged",
+      severity: "warning",
+      title: "Damaged vents",
+      detail:
+        `${ventListPhrase(damaged)} ${damaged.length === 1 ? "is" : "are"} damaged. A broken vent or torn screen lets rain, snow, birds and insects in; vent openings must keep them out (IRC R806.1: openings 1/16 to 1/4 in). Repair or replace ${damaged.length === 1 ? "it" : "them"}.`,
+      ventIds: damaged.map((v) => v.id),
+      caution: ROOF_SAFETY_CAUTION,
+    });
+  }
+
   if (site.bafflesPresent === false && eaveVents.length > 0 && site.soffitsBlocked !== true) {
     findings.push({
       code: "baffles-missing",

@@ -20,6 +20,9 @@ export const VentKindSchema = z.enum(VENT_KINDS);
 export const UpperShareBaseSchema = z.enum(["required", "provided"]);
 export const VentLocationSchema = z.enum(["upper", "lower"]);
 export const MeshSizeSchema = z.enum(["1/4", "1/8", "1/16"]);
+/** What the estimator found: open, partly blocked (with how much), blocked, painted over, damaged. */
+export const VentConditionSchema = z.enum(["open", "partly-blocked", "blocked", "painted-over", "damaged"]);
+export const BlockedBySchema = z.enum(["insulation", "paint", "debris", "nest", "other"]);
 export const LouverMaterialSchema = z.enum(["wood", "metal"]);
 /** louverMaterial is optional so surveys stored before it existed stay valid (DEVELOPERS.md decision 8). */
 export const CoveringSchema = z.object({ mesh: MeshSizeSchema, louvers: z.boolean(), louverMaterial: LouverMaterialSchema.optional() });
@@ -124,8 +127,31 @@ export const VentSchema = z
     /** A gable fan: is it sealed to its opening (shroud or baffle) so it can't recirculate attic air? */
     sealedToOpening: z.boolean().optional(),
     diagnostics: FanDiagnosticsSchema.optional(),
+    /** Condition found on site; open when absent (older surveys). */
+    condition: VentConditionSchema.optional(),
+    /** Partly blocked: how many of the `quantity` units are blocked ("4 of 10 soffit vents"). */
+    blockedQuantity: z.number().int("Blocked count must be a whole number.").min(0).max(LIMITS.maxQuantity).optional(),
+    /** Partly blocked: the share of the vent's area that is blocked, 0–1 (e.g. half a continuous soffit). */
+    blockedShare: z.number().min(0, "Blocked share is 0–100 %.").max(1, "Blocked share is 0–100 %.").optional(),
+    blockedBy: BlockedBySchema.optional(),
   })
   .superRefine((vent, ctx) => {
+    if (vent.condition === "partly-blocked") {
+      if (vent.blockedQuantity === undefined && vent.blockedShare === undefined) {
+        ctx.addIssue({ code: "custom", path: ["blockedQuantity"], message: "Say how many are blocked (e.g. 4 of 10) or what share of the vent is blocked." });
+      }
+      if (vent.blockedQuantity !== undefined && vent.blockedShare !== undefined) {
+        ctx.addIssue({ code: "custom", path: ["blockedShare"], message: "Give either how many are blocked or the share blocked, not both." });
+      }
+      if (vent.blockedQuantity !== undefined && vent.blockedQuantity > (vent.quantity ?? 1)) {
+        ctx.addIssue({ code: "custom", path: ["blockedQuantity"], message: `At most ${vent.quantity ?? 1} can be blocked (the quantity recorded).` });
+      }
+    } else if (vent.blockedQuantity !== undefined || vent.blockedShare !== undefined) {
+      ctx.addIssue({ code: "custom", path: ["condition"], message: "A blocked count or share goes with the condition \"partly blocked\"." });
+    }
+    if (isMechanicalKind(vent.kind) && vent.condition !== undefined && vent.condition !== "open" && vent.condition !== "damaged") {
+      ctx.addIssue({ code: "custom", path: ["condition"], message: "A fan is recorded as open or damaged; check it with the fan checks." });
+    }
     const nfaFields = ["nfaSqIn", "nfaSqInPerUnit", "lengthFt", "nfaSqInPerFt", "grossWidthIn", "grossHeightIn", "covering"] as const;
     if (isMechanicalKind(vent.kind)) {
       if (vent.cfm === undefined) {
@@ -246,6 +272,7 @@ export const AtticInputSchema = z
 export type CodeBasis = z.infer<typeof CodeBasisSchema>;
 export type VaporRetarder = z.infer<typeof VaporRetarderSchema>;
 export type UpperShareBase = z.infer<typeof UpperShareBaseSchema>;
+export type VentCondition = z.infer<typeof VentConditionSchema>;
 export type MoistureRegime = z.infer<typeof MoistureRegimeSchema>;
 export type UnventedAssembly = z.infer<typeof UnventedAssemblySchema>;
 export type RoofColor = z.infer<typeof RoofColorSchema>;
