@@ -64,6 +64,7 @@ import {
   type RoofConstraints,
 } from "./roof-constraints";
 import { sizeVentItem, type SizeResult, type VentRoom } from "./size-vent-item";
+import { codeBasisRule } from "../ventilation/requirement";
 
 export const OPTION_TYPES = ["ridge-and-continuous-soffit", "static-vents-and-individual-soffit", "remove-fan-passive"] as const;
 export type OptionType = (typeof OPTION_TYPES)[number];
@@ -184,7 +185,7 @@ function buildContext(input: GenerateOptionsInput, baseline: AtticAnalysis): Con
   if (project.codeBasis === "strict-150") {
     ratios = [150];
     ratioNote = "This project uses strict 1/150 with no exceptions.";
-  } else if (project.codeBasis === "irc-2018" && project.climateZone >= 6 && project.ceilingVaporRetarder !== "class-I" && project.ceilingVaporRetarder !== "class-II") {
+  } else if (codeBasisRule(project.codeBasis) === "irc-2018" && project.climateZone >= 6 && project.ceilingVaporRetarder !== "class-I" && project.ceilingVaporRetarder !== "class-II") {
     ratios = [150];
     ratioNote = `Under the 2018/2021/2024 text, 1/300 in climate zone ${project.climateZone} also needs a Class I or II ceiling vapor retarder, which is not recorded, so the design is sized at 1/150 (IRC R806.2 exception).`;
   }
@@ -347,7 +348,7 @@ class IdMaker {
 }
 
 function upperShareMin(ctx: Context, ratio: Ratio): number {
-  return ratio === 300 && ctx.input.project.codeBasis === "irc-2009" ? 0.5 : 0.4;
+  return ratio === 300 && codeBasisRule(ctx.input.project.codeBasis) === "irc-2009" ? 0.5 : 0.4;
 }
 
 /** The most passive exhaust the 1/300 route allows, sq in: 50 % (2009: 80 %) of the exact required area under the literal reading; unlimited otherwise. */
@@ -357,7 +358,7 @@ function exhaustCapSqIn(ctx: Context, ratio: Ratio, areaSqFt: number): number {
 }
 
 function upperShareMax(ctx: Context): number {
-  return ctx.input.project.codeBasis === "irc-2009" ? 0.8 : 0.5;
+  return codeBasisRule(ctx.input.project.codeBasis) === "irc-2009" ? 0.8 : 0.5;
 }
 
 /** The smallest bought quantity of `item` giving at least `minSqIn` and at most `maxSqIn`, or null. */
@@ -393,7 +394,7 @@ function designAt(ctx: Context, plan: Plan, ratio: Ratio): Design | { failure: s
   rationale.push(clip(`Required at 1/${ratio}: ${ratioArithmetic(areaSqFt, ratio)}.`));
   if (ratio === 300) {
     rationale.push(
-      ctx.input.project.codeBasis === "irc-2009"
+      codeBasisRule(ctx.input.project.codeBasis) === "irc-2009"
         ? "Aiming for 1/300 by vent placement (IRC 2009 R806.2): 50–80 % of the area in upper vents at least 3 ft above the eave vents, the rest at the eaves; here exhaust is held to 50 % so intake is never smaller."
         : "Aiming for 1/300 by vent placement (IRC R806.2 exception): 40–50 % of the area in exhaust no more than 3 ft below the ridge, measured vertically, the balance low at the eaves.",
     );
@@ -406,7 +407,7 @@ function designAt(ctx: Context, plan: Plan, ratio: Ratio): Design | { failure: s
   const reusedNfaEach = plan.exhaustItem?.unit === "each" ? (plan.exhaustItem.nfaSqInPerUnit ?? 0) : 0;
   const reusedSqIn = reusedUnits * reusedNfaEach;
   const reusedQualifyingSqIn =
-    ratio === 300 && ctx.input.project.codeBasis !== "irc-2009"
+    ratio === 300 && codeBasisRule(ctx.input.project.codeBasis) !== "irc-2009"
       ? plan.reusedFanOpenings.filter((v) => v.dropBelowRidgeFt !== undefined && v.dropBelowRidgeFt <= 3).reduce((acc, v) => acc + unitsOf(v) * reusedNfaEach, 0)
       : ratio === 150
         ? reusedSqIn

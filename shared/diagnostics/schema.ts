@@ -41,6 +41,8 @@ export const FanDiagnosticsSchema = z.object({
   hasCapacitor: z.boolean().optional(),
   capacitor: CapacitorReadingSchema.optional(),
   thermostatTest: ThermostatTestSchema.optional(),
+  /** Dial turned below the attic temperature (or the override switch used): did the fan start? */
+  overrideTest: z.enum(["runs", "does-not-run"]).optional(),
   /** Power off, the blade turned by hand: does it spin freely and coast? */
   isBladeFreeToSpin: z.boolean().optional(),
 });

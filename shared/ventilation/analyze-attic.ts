@@ -1,6 +1,7 @@
 /**
  * analyzeAttic: one attic space in, one explained analysis out. Pure: no I/O, no clock.
  */
+import { fanControlFindings } from "../diagnostics/fan-controls";
 import { diagnoseFan } from "../diagnostics/fan-diagnostics";
 import { formatNumber, roundTo, SQ_IN_PER_SQ_FT } from "../units/format";
 import { sectionGeometry } from "./attic-volume";
@@ -11,6 +12,7 @@ import { sortFindings, unventedFindings, ventilationFindings, type Finding } fro
 import { requiredNfa, unventedRequirement, type Requirement } from "./requirement";
 import { checkUnventedAssembly, type UnventedCheck } from "./unvented";
 import { AtticInputSchema, type AtticInput } from "./schema";
+import { isPoweredKind } from "./vent-kinds";
 import { ventNfa } from "./vent-nfa";
 import { riseLookup, ventPosition } from "./vent-position";
 
@@ -163,6 +165,7 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
   });
   for (const vent of attic.vents) {
     if (vent.diagnostics) findings.push(...diagnoseFan(vent.diagnostics, vent.id));
+    if (isPoweredKind(vent.kind)) findings.push(...fanControlFindings(vent, attic.climateZone));
   }
 
   // "Not less than" (IRC R806.2): the exact figures, never rounded [SOURCES.md S1, S7].

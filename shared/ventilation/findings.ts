@@ -6,7 +6,7 @@ import { ATTIC_SAFETY_CAUTION, COMBUSTION_SAFETY_CAUTION, FAN_SAFETY_CAUTION, RO
 import { formatNumber, formatPercent } from "../units/format";
 import { meetsRequiredArea, type ProvidedNfa } from "./balance";
 import { FAN_OVERSIZED_ABOVE, FAN_UNDERSIZED_BELOW } from "./fan-sizing";
-import type { Requirement } from "./requirement";
+import { codeBasisRule, type Requirement } from "./requirement";
 import type { Site, Vent } from "./schema";
 import { EAVE_KINDS, VENT_KIND_LABELS, ventListPhrase, type VentKind } from "./vent-kinds";
 import type { UnventedCheck } from "./unvented";
@@ -70,6 +70,10 @@ export const FINDING_CODES = [
   "fan-thermostat-failed",
   "fan-thermostat-inconclusive",
   "fan-thermostat-ok",
+  "fan-control-cold-climate",
+  "fan-set-point-unusual",
+  "fan-override-untested",
+  "fan-override-failed",
 ] as const;
 
 export type FindingCode = (typeof FINDING_CODES)[number];
@@ -365,7 +369,7 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
     });
   }
   if (requirement.tooLowUpperVentIds.length > 0) {
-    const isIrc2009 = requirement.codeBasis === "irc-2009";
+    const isIrc2009 = codeBasisRule(requirement.codeBasis) === "irc-2009";
     findings.push({
       code: "upper-vent-too-low",
       severity: requirement.exception.isMet ? "info" : "warning",

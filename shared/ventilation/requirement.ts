@@ -102,7 +102,20 @@ export interface RequirementInput {
   vents: ReadonlyArray<{ nfa: VentNfa; position: VentPosition; label?: string | undefined }>;
 }
 
-const CODE_BASIS_NAMES: Record<CodeBasis, string> = {
+/** The R806.2 rule an edition shares (its text as read here) [SOURCES.md S5; 2021 and 2024 from memory, S26]. */
+export type CodeBasisRule = "irc-2018" | "irc-2012" | "irc-2009" | "strict-150";
+
+/**
+ * @example
+ * codeBasisRule("irc-2024") // "irc-2018": the 2021 and 2024 editions keep the 2018 R806.2 text
+ */
+export function codeBasisRule(codeBasis: CodeBasis): CodeBasisRule {
+  return codeBasis === "irc-2024" || codeBasis === "irc-2021" ? "irc-2018" : codeBasis;
+}
+
+export const CODE_BASIS_NAMES: Record<CodeBasis, string> = {
+  "irc-2024": "IRC 2024, section R806.2 (the same rule as the 2018 and 2021 text: both conditions for 1/300)",
+  "irc-2021": "IRC 2021, section R806.2 (the same rule as the 2018 text: both conditions for 1/300)",
   "irc-2018": "IRC 2018/2021/2024 text, section R806.2",
   "irc-2012": "IRC 2012/2015 text, section R806.2",
   "irc-2009": "IRC 2009, section R806.2",
@@ -265,6 +278,7 @@ function retarderName(retarder: VaporRetarder): string {
  */
 export function requiredNfa(input: RequirementInput): Requirement {
   const { floorAreaSqFt, codeBasis, climateZone, ceilingVaporRetarder } = input;
+  const rule = codeBasisRule(codeBasis);
   const upperShareBase: UpperShareBase = input.upperShareBase ?? "required";
   let otherIsMet = false;
   const exact300 = (floorAreaSqFt * SQ_IN_PER_SQ_FT) / 300;
@@ -280,7 +294,7 @@ export function requiredNfa(input: RequirementInput): Requirement {
   const inColdZone = climateZone >= 6;
   const hasRetarder = isClassIorII(ceilingVaporRetarder);
 
-  if (codeBasis === "irc-2009") {
+  if (rule === "irc-2009") {
     connector = "either";
     placement = checkPlacement(input, "2009", exact300, upperShareBase);
     conditions.push({
@@ -297,8 +311,8 @@ export function requiredNfa(input: RequirementInput): Requirement {
     otherIsMet = placement.otherIsMet || hasRetarder;
     if (placement.isMet) splitByPlacement = { min: 0.5, max: 0.8 };
     reasons.push("IRC 2009 allows 1/300 when either of two alternatives is met.");
-  } else if (codeBasis === "irc-2012" || codeBasis === "irc-2018") {
-    const edition = codeBasis === "irc-2012" ? "2012" : "2018";
+  } else if (rule === "irc-2012" || rule === "irc-2018") {
+    const edition = rule === "irc-2012" ? "2012" : "2018";
     connector = edition === "2012" ? "one-or-more" : "both";
     let retarderCondition: ExceptionCondition;
     if (!inColdZone) {

@@ -7,7 +7,11 @@ import { FanDiagnosticsSchema } from "../diagnostics/schema";
 import { polygonProblem, shoelaceAreaSqFt } from "./floor-area";
 import { isMechanicalKind, VENT_KINDS } from "./vent-kinds";
 
-export const CODE_BASES = ["irc-2018", "irc-2012", "irc-2009", "strict-150"] as const;
+/**
+ * Code editions a project can name. 2021 and 2024 are named explicitly and share the 2018 text's
+ * rule (`codeBasisRule`); 2015 shares the 2012 text's. Older values stay valid for stored projects.
+ */
+export const CODE_BASES = ["irc-2024", "irc-2021", "irc-2018", "irc-2012", "irc-2009", "strict-150"] as const;
 export const CodeBasisSchema = z.enum(CODE_BASES);
 export const VaporRetarderSchema = z.enum(["none", "class-I", "class-II", "class-III"]);
 export const RoofColorSchema = z.enum(["light", "medium", "dark"]);
