@@ -10,6 +10,7 @@ import { fanIntakeNeededSqIn, recommendFanCfm, STEEP_PITCH_IN_12 } from "./fan-s
 import { describeSectionArea, sectionAreaSqFt } from "./floor-area";
 import { sortFindings, unventedFindings, ventilationFindings, type Finding } from "./findings";
 import { requiredNfa, unventedRequirement, type Requirement } from "./requirement";
+import { aboveMinimum, type Recommendation } from "./recommendations";
 import { checkUnventedAssembly, type UnventedCheck } from "./unvented";
 import { AtticInputSchema, type AtticInput } from "./schema";
 import { isPoweredKind } from "./vent-kinds";
@@ -63,6 +64,8 @@ export interface AtticAnalysis {
   assembly: "vented" | "unvented";
   /** The R806.5 conditions of an unvented attic, or null for a vented one. */
   unvented: UnventedCheck | null;
+  /** Above the minimum: common-practice recommendations with their sources, clearly not code. */
+  recommendations: Recommendation[];
   /** One plain sentence a homeowner can read. */
   summary: string;
   /** Critical first, then warnings, then notes. */
@@ -206,6 +209,13 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     fan,
     compliant,
     assembly: isUnvented ? "unvented" : "vented",
+    recommendations: aboveMinimum({
+      requiredExactSqIn: requirement.exactSqIn,
+      maxPitchIn12: attic.sections.reduce<number | null>((max, s) => (s.pitchIn12 === undefined ? max : Math.max(max ?? 0, s.pitchIn12)), null),
+      wholeHouseFanCfm: provided.wholeHouseFanCfm,
+      ceilingAirSealed: site.ceilingAirSealed,
+      isUnvented,
+    }),
     unvented,
     summary,
     findings: sortFindings(findings),

@@ -61,3 +61,5 @@ export {
 } from "../diagnostics/cautions";
 export { FanDiagnosticsSchema } from "../diagnostics/schema";
 export type { FanDiagnostics } from "../diagnostics/schema";
+export { aboveMinimum } from "./recommendations";
+export type { Recommendation } from "./recommendations";
