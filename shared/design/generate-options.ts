@@ -7,13 +7,13 @@
  * - "ridge-and-continuous-soffit": a ridge vent with continuous soffit intake. Every other
  *   exhaust — box vents, turbines, gable louvers, powered fans — is removed and its opening
  *   patched or sealed: a fan or gable louver beside a ridge vent short-circuits it (common
- *   practice; TRADE-REFERENCES §5.4, SRC 19).
+ *   practice; SOURCES.md §5.4, S19).
  * - "static-vents-and-individual-soffit": static (box) vents in a row under the ridge with
  *   individual soffit vents; all other exhaust removed. For hip roofs with short ridges.
  * - "remove-fan-passive" (only when the survey has a powered fan): the fan is disconnected and
  *   removed, its roof opening reused for a static vent or patched (a gable fan's opening sealed),
  *   and the passive exhaust already there is kept and topped up with the same kind, with intake of
- *   the kind already there. Powered fans can depressurize the house (TRADE-REFERENCES §5.1–5.2).
+ *   the kind already there. Powered fans can depressurize the house (SOURCES.md §5.1–5.2).
  *
  * Sizing (IRC R806.2, per the project's code basis — the core decides, the generator aims):
  * - First aim for 1/300 when the code basis offers it: half the required area in exhaust within
@@ -21,7 +21,7 @@
  *   Fall back to 1/150 when 1/300 is not available or the core does not confirm it.
  * - Exhaust aims at 50 % of the required area and may go down to the rule's minimum share (40 %)
  *   when the roof has no room for more; intake is at least the exhaust and at least the balance
- *   (intake ≥ exhaust always: TRADE-REFERENCES §5.3, BC Housing SRC 18).
+ *   (intake ≥ exhaust always: SOURCES.md §5.3, BC Housing S18).
  * - Quantities are what is bought: whole vents, linear vents in whole pieces where they fit.
  * - Every proposal is checked by analyzeAttic on the attic as it would be after the work; only
  *   compliant proposals with one exhaust type, intake ≥ exhaust and no powered fan are returned.
@@ -552,7 +552,7 @@ function designAt(ctx: Context, plan: Plan, ratio: Ratio): Design | { failure: s
     }
   }
 
-  // Soffits blocked or without baffles: pull insulation back and baffle every bay (IRC R806.3; NREL SWS, SRC 9).
+  // Soffits blocked or without baffles: pull insulation back and baffle every bay (IRC R806.3; NREL SWS, S9).
   const site = space.site;
   const needsBaffles = site.soffitsBlocked === true || site.bafflesPresent === false;
   let clearsBlockedSoffits = false;

@@ -5,9 +5,9 @@ import { atticArb, passiveVentArb } from "./arbitraries.test-helpers";
 import { AtticInputSchema } from "./schema";
 import { attic, ridge, roofFan, soffit } from "./test-helpers";
 
-// Worked examples E1–E8, TRADE-REFERENCES §8, each checked end to end with its arithmetic.
-describe("worked examples (TRADE-REFERENCES §8)", () => {
-  it("E1: when a 1,500 sq ft attic is at 1/150, then 1,500 ÷ 150 = 10 sq ft = 1,440 sq in, and 720/720 is an allowed split [IRC R806.2 base rule; SRC 1, 2, 7]", () => {
+// Worked examples E1–E8, SOURCES.md §8, each checked end to end with its arithmetic.
+describe("worked examples (SOURCES.md §8)", () => {
+  it("E1: when a 1,500 sq ft attic is at 1/150, then 1,500 ÷ 150 = 10 sq ft = 1,440 sq in, and 720/720 is an allowed split [IRC R806.2 base rule; S1, 2, 7]", () => {
     const a = analyzeAttic(attic({ codeBasis: "strict-150", vents: [soffit("s", 720), ridge("r", 720)] }));
     expect(a.floorAreaSqFt).toBe(1500);
     expect(a.requirement.totalSqFt).toBe(1500 / 150);
@@ -19,7 +19,7 @@ describe("worked examples (TRADE-REFERENCES §8)", () => {
     expect(a.floorAreaSqFt * 0.09290304).toBeCloseTo(139.35, 2);
   });
 
-  it("E2: when the same attic meets the 2018 exception, then 1,500 ÷ 300 = 5 sq ft = 720 sq in; upper 288–360, lower 360–432; 360/360 passes [IRC 2018 R806.2 exception; MEM + SRC 5]", () => {
+  it("E2: when the same attic meets the 2018 exception, then 1,500 ÷ 300 = 5 sq ft = 720 sq in; upper 288–360, lower 360–432; 360/360 passes [IRC 2018 R806.2 exception; from memory + S5]", () => {
     const a = analyzeAttic(attic({ codeBasis: "irc-2018", climateZone: 4, vents: [soffit("s", 360), ridge("r", 360)] }));
     expect(a.requirement.ratio).toBe(300);
     expect(a.requirement.totalSqIn).toBe((1500 / 300) * 144);

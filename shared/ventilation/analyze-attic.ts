@@ -77,7 +77,7 @@ export interface AtticAnalysis {
  * throws the ZodError (use `tryAnalyzeAttic` for a result instead).
  *
  * @example
- * // TRADE-REFERENCES §8 E1: 1,500 sq ft at 1/150 → 10 sq ft = 1,440 sq in
+ * // SOURCES.md §8 E1: 1,500 sq ft at 1/150 → 10 sq ft = 1,440 sq in
  * const a = analyzeAttic({ codeBasis: "strict-150", climateZone: 4, ceilingVaporRetarder: "none", roofColor: "medium",
  *   sections: [{ kind: "area", areaSqFt: 1500 }], vents: [] });
  * a.requirement.totalSqIn // 1440

@@ -1,8 +1,8 @@
 /**
  * Provided net free area split into intake (low) and exhaust (high), and the balance as the
  * intake share of the total. Keeping intake ≥ exhaust is the aim: the 2012+ 1/300 route caps
- * upper vents at 50 % [TRADE-REFERENCES §1], BC Housing advises more at the soffit than the ridge
- * when venting can't be balanced [SRC 18], and HVI asks for inlet area for fans [SRC 6].
+ * upper vents at 50 % [SOURCES.md §1], BC Housing advises more at the soffit than the ridge
+ * when venting can't be balanced [S18], and HVI asks for inlet area for fans [S6].
  */
 import { roundTo } from "../units/format";
 import type { VentNfa } from "./vent-nfa";

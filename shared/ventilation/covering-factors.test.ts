@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { coveringFactor, describeCovering, netFreeAreaFromGrossSqIn } from "./covering-factors";
 
 describe("coveringFactor", () => {
-  // JLC field guide multiplier table [SRC 11] / USDA-FPL free-area table (AIB 373, AH 73) [from memory].
+  // JLC field guide multiplier table [S11] / USDA-FPL free-area table (AIB 373, AH 73) [from memory].
   it.each([
     ["1/4", false, 1.0],
     ["1/4", true, 2.0],
@@ -16,7 +16,7 @@ describe("coveringFactor", () => {
 });
 
 describe("netFreeAreaFromGrossSqIn", () => {
-  it("when a 14 × 24 in louver has louvers and 1/8 in mesh, then NFA = 336 ÷ 2.25 = 149.33 sq in (TRADE-REFERENCES §8 E7)", () => {
+  it("when a 14 × 24 in louver has louvers and 1/8 in mesh, then NFA = 336 ÷ 2.25 = 149.33 sq in (SOURCES.md §8 E7)", () => {
     expect(netFreeAreaFromGrossSqIn(14 * 24, { mesh: "1/8", louvers: true })).toBeCloseTo(149.33, 2);
     // ≈ 963 cm² (× 6.4516, NIST SP 811 App. B)
     expect(netFreeAreaFromGrossSqIn(336, { mesh: "1/8", louvers: true }) * 6.4516).toBeCloseTo(963.4, 1);
@@ -28,7 +28,7 @@ describe("netFreeAreaFromGrossSqIn", () => {
     expect(netFreeAreaFromGrossSqIn(336, { mesh: "1/16", louvers: true })).toBeCloseTo(112, 9);
   });
 
-  it("when E2's 360 sq in upper share is to come from those louvers, then 360 ÷ 149.33 = 2.41 → 3 louvers (TRADE-REFERENCES §8 E7)", () => {
+  it("when E2's 360 sq in upper share is to come from those louvers, then 360 ÷ 149.33 = 2.41 → 3 louvers (SOURCES.md §8 E7)", () => {
     const each = netFreeAreaFromGrossSqIn(336, { mesh: "1/8", louvers: true });
     expect(Math.ceil(360 / each)).toBe(3);
   });

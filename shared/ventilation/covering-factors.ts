@@ -1,8 +1,8 @@
 /**
  * Free-area factors for site-built or unlabeled vent openings: NFA = gross opening ÷ factor.
- * Source: JLC "Roof Ventilation Field Guide" multiplier table [TRADE-REFERENCES §4, SRC 11]; the
+ * Source: JLC "Roof Ventilation Field Guide" multiplier table [SOURCES.md §4, S11]; the
  * same numbers appear, from memory, in the classic USDA Forest Products Laboratory / FHA table
- * (AIB 373, AH 73) [MEM — not retrieved]. Labeled products state their own NFA, which wins.
+ * (AIB 373, AH 73) [from memory — not retrieved]. Labeled products state their own NFA, which wins.
  */
 
 export type MeshSize = "1/4" | "1/8" | "1/16";
@@ -56,7 +56,7 @@ export function describeCovering(covering: Covering): string {
  * Net free area of a gross opening behind a covering.
  *
  * @example
- * // TRADE-REFERENCES §8 E7: 14 × 24 in louver, louvers + 1/8 in mesh → 336 ÷ 2.25 = 149.33 sq in
+ * // SOURCES.md §8 E7: 14 × 24 in louver, louvers + 1/8 in mesh → 336 ÷ 2.25 = 149.33 sq in
  * netFreeAreaFromGrossSqIn(14 * 24, { mesh: "1/8", louvers: true }) // 149.333…
  */
 export function netFreeAreaFromGrossSqIn(grossSqIn: number, covering: Covering): number {

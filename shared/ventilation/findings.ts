@@ -201,7 +201,7 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
     });
   }
 
-  // Short-circuiting [PRACTICE; TRADE-REFERENCES §5.4, SRC 19].
+  // Short-circuiting [PRACTICE; SOURCES.md §5.4, S19].
   const highOpenings = passive.filter((v) => v.location === "upper" && PASSIVE_EXHAUST_KINDS.has(v.kind));
   if (powered.length > 0 && highOpenings.length > 0) {
     findings.push({
@@ -248,7 +248,7 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
     });
   }
 
-  // Powered fans [HVI, SRC 6; cautions TRADE-REFERENCES §5].
+  // Powered fans [HVI, S6; cautions SOURCES.md §5].
   if (ctx.fan && powered.length > 0) {
     const fan = ctx.fan;
     if (fan.intakeProvidedSqIn < fan.intakeNeededSqIn) {
@@ -393,7 +393,7 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
     });
   }
 
-  // Insulation at the eaves: IRC R806.3 (1 in air space) [SRC 1, SRC 2]; baffles per NREL SWS [SRC 9].
+  // Insulation at the eaves: IRC R806.3 (1 in air space) [S1, S2]; baffles per NREL SWS [S9].
   const eaveVents = passiveLower.filter((v) => EAVE_KINDS.has(v.kind));
   if (site.soffitsBlocked === true) {
     findings.push({

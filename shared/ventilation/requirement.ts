@@ -1,19 +1,19 @@
 /**
  * Required net free area by code basis — IRC R806.2, each edition's own rule
- * [TRADE-REFERENCES §1; issue 3].
+ * [SOURCES.md §1; issue 3].
  *
- * - Every edition: NFA ≥ 1/150 of the vented floor area (IRC R806.2 base rule; SRC 1, SRC 2, SRC 7).
+ * - Every edition: NFA ≥ 1/150 of the vented floor area (IRC R806.2 base rule; S1, S2, S7).
  * - `strict-150`: always 1/150 (a local or company choice).
  * - `irc-2009`: 1/300 when EITHER (a) 50–80 % of the required area is in upper vents at least 3 ft
- *   above the eave vents, the balance in eave vents [SRC 3; MEM for exact wording], OR (b) a
- *   Class I or II vapor retarder is on the warm-in-winter side of the ceiling [MEM].
+ *   above the eave vents, the balance in eave vents [S3; from memory for exact wording], OR (b) a
+ *   Class I or II vapor retarder is on the warm-in-winter side of the ceiling [from memory].
  * - `irc-2012` (2012/2015 text): 1/300 when ONE OR MORE of (1) climate zones 6–8 with a Class I/II
  *   ceiling vapor retarder; (2) 40–50 % of the required area in upper vents not more than 3 ft
- *   below the ridge, the balance in eave vents [SRC 4 quotes condition 2; "one or more" is MEM].
+ *   below the ridge, the balance in eave vents [S4 quotes condition 2; "one or more" is from memory].
  * - `irc-2018` (2018/2021/2024 text): 1/300 only when BOTH (1) in climate zones 6–8 a Class I/II
  *   ceiling vapor retarder — in zones 1–5 this condition does not apply [PRACTICE: the common
  *   reading, confirm with the AHJ] — and (2) 40–50 % in upper vents ≤ 3 ft below the ridge, the
- *   balance in the bottom third of the attic [MEM + SRC 5; 2024 unverified, TRADE-REFERENCES §1].
+ *   balance in the bottom third of the attic [from memory + S5; 2024 unverified, SOURCES.md §1].
  *
  * How Eavesight reads the percentages (stated in the reasons): with R the 1/300 area, the
  * qualifying upper vents must give at least the low share (40 % or 50 %) of R; the qualifying low
@@ -272,7 +272,7 @@ function retarderName(retarder: VaporRetarder): string {
  * The required NFA for one attic space, with the reasons.
  *
  * @example
- * // TRADE-REFERENCES §8 E1: 1,500 sq ft at 1/150
+ * // SOURCES.md §8 E1: 1,500 sq ft at 1/150
  * requiredNfa({ floorAreaSqFt: 1500, codeBasis: "strict-150", climateZone: 5, ceilingVaporRetarder: "none", vents: [] })
  * // { ratio: 150, totalSqIn: 1440, reasons: ["… 1,500 sq ft ÷ 150 = 10 sq ft = 1,440 sq in …"], … }
  */

@@ -5,7 +5,7 @@ import { attic, ridge, soffit } from "./test-helpers";
 // IRC 2012/2015 and 2018+ R806.2 condition 2: "not less than 40 percent and not more than 50 percent
 // of the required ventilating area" in upper vents [SOURCES.md S4 quotes it]. The literal base is
 // the REQUIRED area (1/300 of the floor); reading it as a share of the area PROVIDED is a local
-// reading a company may choose. 1,500 sq ft → 720 sq in at 1/300; 50 % = 360 sq in (TRADE-REFERENCES §8 E2).
+// reading a company may choose. 1,500 sq ft → 720 sq in at 1/300; 50 % = 360 sq in (SOURCES.md §8 E2).
 const heavyRidge = [soffit("s", 800), ridge("r", 400)]; // 400 > 360 = 50 % of required; but 400/1,200 = 33 % of provided
 
 describe("the 40–50 % base", () => {

@@ -43,7 +43,7 @@ describe("vent condition", () => {
   });
 
   it("when blocked vents take the attic below the minimum, then the verdict follows the open area", () => {
-    // 1,500 sq ft at 1/150 = 1,440 sq in (TRADE-REFERENCES §8 E1); strict basis
+    // 1,500 sq ft at 1/150 = 1,440 sq in (SOURCES.md §8 E1); strict basis
     const ok = analyzeAttic(attic({ codeBasis: "strict-150", vents: [soffit("s", 800), ridge("r", 700)] }));
     const short = analyzeAttic(attic({ codeBasis: "strict-150", vents: [soffit("s", 800, { condition: "partly-blocked", blockedShare: 0.1 }), ridge("r", 700)] }));
     expect(ok.compliant).toBe(true);

@@ -1,7 +1,7 @@
 /**
  * Net free area of each recorded vent. NFA is the open area air can pass through after screens,
  * louvers and baffles (the figure R806.2 counts). Powered fans are mechanical: they are rated in
- * cfm and contribute no NFA here [issue 3; HVI treats them separately, SRC 6].
+ * cfm and contribute no NFA here [issue 3; HVI treats them separately, S6].
  */
 import { formatNumber, roundTo } from "../units/format";
 import { coveringFactor, describeCovering } from "./covering-factors";

@@ -1,7 +1,7 @@
 /**
  * Where each passive vent sits, as far as the survey tells: its drop below the ridge, its height
  * above the eave vents, and whether it is an eave vent in the bottom third of the attic. The
- * 1/300 exceptions of IRC R806.2 depend on these [TRADE-REFERENCES §1].
+ * 1/300 exceptions of IRC R806.2 depend on these [SOURCES.md §1].
  *
  * Assumptions, stated in the reasons whenever they are used:
  * - ridge, off-ridge and cupola vents sit at the ridge (drop 0 ft) unless a drop was recorded;

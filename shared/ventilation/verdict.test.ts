@@ -5,7 +5,7 @@ import { attic, ridge, soffit } from "./test-helpers";
 
 // IRC R806.2 (every edition): net free area "not less than 1/150" of the vented floor area
 // [SOURCES.md S1, S2, S7]. The comparison is with the exact requirement; rounding up is for what
-// is bought and what is shown (TRADE-REFERENCES §8 E3: 1,234.5 sq ft → 1,185.12 sq in, buy 1,186).
+// is bought and what is shown (SOURCES.md §8 E3: 1,234.5 sq ft → 1,185.12 sq in, buy 1,186).
 const e3 = (vents: Vent[]) => analyzeAttic(attic({ codeBasis: "strict-150", sections: [{ kind: "area", areaSqFt: 1234.5 }], vents }));
 
 describe("the code-minimum verdict is never rounded (IRC R806.2 'not less than 1/150')", () => {
@@ -42,7 +42,7 @@ describe("the code-minimum verdict is never rounded (IRC R806.2 'not less than 1
   });
 
   it("when the 1/300 route is not met but the provided area clears the exact 1/300 figure by a fraction, then the exception note says it would pass at 1/300", () => {
-    // 1,234.5 sq ft at 1/300 = 592.56 sq in exactly (TRADE-REFERENCES §8 E3); soffits only, so no upper vents
+    // 1,234.5 sq ft at 1/300 = 592.56 sq in exactly (SOURCES.md §8 E3); soffits only, so no upper vents
     const a = analyzeAttic(attic({ codeBasis: "irc-2018", climateZone: 4, sections: [{ kind: "area", areaSqFt: 1234.5 }], vents: [soffit("s", 592.7)] }));
     expect(a.requirement.ratio).toBe(150);
     expect(a.findings.find((f) => f.code === "exception-not-met")?.severity).toBe("warning");

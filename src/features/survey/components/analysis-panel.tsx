@@ -115,6 +115,18 @@ export const AnalysisPanel = memo(function AnalysisPanel({ spaceName, input, res
             ))}
           </ul>
         </details>
+        {a.recommendations.length > 0 ? (
+          <details className="rounded-md border border-ink-200 bg-white px-3 py-2">
+            <summary className="min-h-touch cursor-pointer py-2 font-medium text-ink-900 md:min-h-0">Above the minimum: recommended, not code</summary>
+            <ul className="list-disc space-y-1.5 pt-1 pb-2 pl-5 text-base text-ink-800">
+              {a.recommendations.map((r) => (
+                <li key={r.id}>
+                  <span className="font-medium">{r.title}.</span> {r.detail} <span className="text-ink-600">Source: {r.source}.</span>
+                </li>
+              ))}
+            </ul>
+          </details>
+        ) : null}
         {a.provided.perVent.length > 0 ? (
           <details className="rounded-md border border-ink-200 bg-white px-3 py-2">
             <summary className="min-h-touch cursor-pointer py-2 font-medium text-ink-900 md:min-h-0">Each vent</summary>
