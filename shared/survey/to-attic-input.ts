@@ -9,7 +9,7 @@ export interface ProjectBasis {
   ceilingVaporRetarder: VaporRetarder;
   roofColor: RoofColor;
   /** The company's reading of the 1/300 upper-vent share (its profile setting); literal when absent. */
-  upperShareBase?: UpperShareBase | undefined;
+  upperShareBase?: UpperShareBase | null | undefined;
 }
 
 /**
@@ -30,7 +30,7 @@ export function toAtticInput(project: ProjectBasis, space: SpaceSurvey): AtticIn
     climateZone: project.climateZone,
     ceilingVaporRetarder: project.ceilingVaporRetarder,
     roofColor: project.roofColor,
-    ...(project.upperShareBase !== undefined ? { upperShareBase: project.upperShareBase } : {}),
+    ...(project.upperShareBase != null ? { upperShareBase: project.upperShareBase } : {}),
     ...(project.moistureRegime !== undefined ? { moistureRegime: project.moistureRegime } : {}),
     ...(space.roof.assembly !== undefined ? { assembly: space.roof.assembly } : {}),
     ...(space.roof.unvented !== undefined ? { unvented: space.roof.unvented } : {}),
