@@ -220,7 +220,7 @@ describe("generateOptions: property tests over random reasonable attics", () => 
       }),
       { numRuns: 150 },
     );
-  });
+  }, 30_000); // many random attics: correctness, not a timing check
 
   it("when a one-section gable up to 1,500 sq ft has its ridge and eaves recorded, then at least one option is proposed", () => {
     const gableArb = fc.record({ lengthFt: fc.integer({ min: 24, max: 60 }), widthFt: fc.integer({ min: 16, max: 25 }), pitchIn12: fc.integer({ min: 3, max: 12 }) });
@@ -240,5 +240,5 @@ describe("generateOptions: property tests over random reasonable attics", () => 
       }),
       { numRuns: 100 },
     );
-  });
+  }, 30_000); // many random attics: correctness, not a timing check
 });

@@ -133,7 +133,7 @@ describe("properties", () => {
       }),
       { numRuns: 300 },
     );
-  });
+  }, 30_000); // many random attics: correctness, not a timing check
 
   it("when the floor area grows (vents and geometry fixed), then the required NFA never decreases", () => {
     fc.assert(
@@ -144,7 +144,7 @@ describe("properties", () => {
       }),
       { numRuns: 300 },
     );
-  });
+  }, 30_000); // many random attics: correctness, not a timing check
 
   it("when a rectangle gets longer along its ridge (rise unchanged), then the required NFA never decreases", () => {
     fc.assert(
@@ -157,7 +157,7 @@ describe("properties", () => {
       }),
       { numRuns: 300 },
     );
-  });
+  }, 30_000); // many random attics: correctness, not a timing check
 
   it("when a passive vent is added, then the provided NFA never goes down", () => {
     fc.assert(
@@ -170,7 +170,7 @@ describe("properties", () => {
       }),
       { numRuns: 300 },
     );
-  });
+  }, 30_000); // many random attics: correctness, not a timing check
 
   it("when input is broken anywhere, then it is rejected with a message and never yields NaN", () => {
     const breakers: Array<(x: Record<string, unknown>) => unknown> = [
@@ -200,7 +200,7 @@ describe("properties", () => {
       }),
       { numRuns: 200 },
     );
-  });
+  }, 30_000); // many random attics: correctness, not a timing check
 });
 
 describe("summary", () => {

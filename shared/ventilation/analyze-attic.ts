@@ -10,6 +10,7 @@ import { fanIntakeNeededSqIn, recommendFanCfm, STEEP_PITCH_IN_12 } from "./fan-s
 import { describeSectionArea, sectionAreaSqFt } from "./floor-area";
 import { sortFindings, unventedFindings, ventilationFindings, type Finding } from "./findings";
 import { requiredNfa, unventedRequirement, type Requirement } from "./requirement";
+import { checkRafterBays, type RafterBayCheck } from "./rafter-bays";
 import { aboveMinimum, type Recommendation } from "./recommendations";
 import { checkUnventedAssembly, type UnventedCheck } from "./unvented";
 import { AtticInputSchema, type AtticInput } from "./schema";
@@ -64,6 +65,8 @@ export interface AtticAnalysis {
   assembly: "vented" | "unvented";
   /** The R806.5 conditions of an unvented attic, or null for a vented one. */
   unvented: UnventedCheck | null;
+  /** Per-bay check of a space of enclosed rafter bays, or null. */
+  rafterBays: RafterBayCheck | null;
   /** Above the minimum: common-practice recommendations with their sources, clearly not code. */
   recommendations: Recommendation[];
   /** One plain sentence a homeowner can read. */
@@ -153,6 +156,10 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     };
   }
 
+  const rafterBays =
+    attic.enclosedRafterBays && !isUnvented
+      ? checkRafterBays(attic.enclosedRafterBays, floorAreaSqFt, requirement.ratio, vents.map((v) => ({ vent: v.vent, nfa: v.nfa })))
+      : null;
   const findings = (isUnvented ? unventedFindings : ventilationFindings)({
     floorAreaSqFt,
     vents: attic.vents,
@@ -166,6 +173,20 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     impossibleHeights: vents.filter((v) => v.position.isHeightImpossible).map((v) => ({ vent: v.vent, riseFt: v.position.riseFt ?? 0 })),
     unvented,
   });
+  if (rafterBays && !rafterBays.isMet) {
+    const unvented = rafterBays.bayCount - Math.min(rafterBays.baysWithIntake, rafterBays.baysWithExhaust);
+    findings.push({
+      code: "rafter-bays-not-vented",
+      severity: "critical",
+      title: unvented > 0 ? "Some rafter bays are not cross-ventilated" : "Rafter bays short of vent area",
+      detail:
+        `${rafterBays.reasons.join(" ")} ` +
+        (unvented > 0
+          ? `Each bay is closed off from the next, so every bay needs its own intake at the eave and exhaust at the top (IRC R806.1); ${formatNumber(unvented)} of ${formatNumber(rafterBays.bayCount)} lack one or both. Continuous soffit and ridge vents across every bay are the usual fix.`
+          : `Each bay needs ${formatNumber(rafterBays.requiredPerBaySqIn)} sq in; the least-vented gets ${formatNumber(rafterBays.leastPerBaySqIn)} sq in.`),
+      ventIds: attic.vents.map((v) => v.id),
+    });
+  }
   for (const vent of attic.vents) {
     if (vent.diagnostics) findings.push(...diagnoseFan(vent.diagnostics, vent.id));
     if (isPoweredKind(vent.kind)) findings.push(...fanControlFindings(vent, attic.climateZone));
@@ -186,9 +207,9 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
         ? openings === 0
           ? "The conditions recorded are met."
           : "The conditions recorded are met, but vents or fans open it to the outside."
-        : `${open > 0 ? `${open} of its conditions ${open === 1 ? "is" : "are"} not met` : ""}${open > 0 && unknown > 0 ? " and " : ""}${unknown > 0 ? `${unknown} ${unknown === 1 ? "is" : "are"} not recorded` : ""}.`);
+        : `${open > 0 ? `${open} of its conditions ${open === 1 ? "is" : "are"} not met` : ""}${open > 0 && unknown > 0 ? " and " : ""}${unknown > 0 ? `${unknown} ${unknown === 1 ? "condition is" : "conditions are"} not recorded` : ""}.`);
   } else {
-    compliant = meetsArea && site.soffitsBlocked !== true;
+    compliant = meetsArea && site.soffitsBlocked !== true && (rafterBays === null || rafterBays.isMet);
     // Enough digits that two different figures never print alike ("1,185.119 of 1,185.12").
     const digits = Math.abs(provided.exactTotalSqIn - requirement.exactSqIn) < 0.01 ? 3 : 2;
     const providedText = formatNumber(provided.exactTotalSqIn, { maxFractionDigits: digits });
@@ -209,6 +230,7 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     fan,
     compliant,
     assembly: isUnvented ? "unvented" : "vented",
+    rafterBays,
     recommendations: aboveMinimum({
       requiredExactSqIn: requirement.exactSqIn,
       maxPitchIn12: attic.sections.reduce<number | null>((max, s) => (s.pitchIn12 === undefined ? max : Math.max(max ?? 0, s.pitchIn12)), null),

@@ -125,6 +125,7 @@ const laterFields = fc.record(
     upperShareBase: fc.constantFrom("required" as const, "provided" as const),
     moistureRegime: fc.constantFrom("A" as const, "B" as const, "C" as const, null),
     sealed: fc.tuple(fc.constant("unvented" as const), unventedArb),
+    enclosedRafterBays: fc.record({ bayCount: fc.integer({ min: 1, max: 500 }), baySpacingIn: fc.double({ min: 8, max: 96, noNaN: true }) }),
   },
   { requiredKeys: [] },
 );
@@ -135,6 +136,7 @@ export const atticArb = (maxVents = 12): fc.Arbitrary<AtticInput> =>
     ...(later.upperShareBase !== undefined ? { upperShareBase: later.upperShareBase } : {}),
     ...(later.moistureRegime !== undefined ? { moistureRegime: later.moistureRegime } : {}),
     ...(later.sealed !== undefined ? { assembly: later.sealed[0], unvented: later.sealed[1] } : {}),
+    ...(later.enclosedRafterBays !== undefined ? { enclosedRafterBays: later.enclosedRafterBays } : {}),
   }));
 
 const baseAtticArb = (maxVents: number): fc.Arbitrary<AtticInput> =>

@@ -39,6 +39,8 @@ export const FINDING_CODES = [
   "upper-vent-position-unknown",
   "upper-share-reading",
   "vent-height-impossible",
+  // enclosed rafter bays (IRC R806.1)
+  "rafter-bays-not-vented",
   // vent condition
   "vents-blocked",
   "vent-damaged",
@@ -128,6 +130,7 @@ const PASSIVE_EXHAUST_KINDS: ReadonlySet<VentKind> = new Set<VentKind>(["ridge",
 
 const kindLabel = (kind: VentKind) => VENT_KIND_LABELS[kind];
 const plural = (n: number, one: string, many: string) => (n === 1 ? one : many);
+const capitalize = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
 
 /** Every ventilation finding for one attic space (fan diagnostics are added by the caller). */
 export function ventilationFindings(ctx: FindingContext): Finding[] {
@@ -364,7 +367,7 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
       code: "vent-height-impossible",
       severity: "warning",
       title: "A vent's recorded height can't be right",
-      detail: `${ventListPhrase([vent])} is ${recorded}, but the highest point of this space is only ${formatNumber(riseFt)} ft above the eaves (from the roof pitch and span). Check the measurement or the pitch; until then the vent is not counted as an upper vent for the 1/300 route.`,
+      detail: `${capitalize(ventListPhrase([vent]))} is ${recorded}, but the highest point of this space is only ${formatNumber(riseFt)} ft above the eaves (from the roof pitch and span). Check the measurement or the pitch; until then the vent is not counted as an upper vent for the 1/300 route.`,
       ventIds: [vent.id],
     });
   }
@@ -411,7 +414,7 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
   const blockedVents = passive.filter((v) => v.openShare < 1);
   if (blockedVents.length > 0) {
     const lostSqIn = blockedVents.reduce((acc, v) => acc + (v.fullNfaSqIn - v.nfaSqIn), 0);
-    const parts = blockedVents.map((v) => `${ventListPhrase([v])}: ${v.explanation.split("; ").slice(-1)[0]}`);
+    const parts = blockedVents.map((v) => `${capitalize(ventListPhrase([v]))}: ${v.explanation.split("; ").slice(-1)[0]}`);
     const byInsulation = ctx.vents.some((v) => blockedVents.some((b) => b.ventId === v.id) && v.blockedBy === "insulation");
     findings.push({
       code: "vents-blocked",
@@ -433,7 +436,7 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
       severity: "warning",
       title: "Damaged vents",
       detail:
-        `${ventListPhrase(damaged)} ${damaged.length === 1 ? "is" : "are"} damaged. A broken vent or torn screen lets rain, snow, birds and insects in; vent openings must keep them out (IRC R806.1: openings 1/16 to 1/4 in). Repair or replace ${damaged.length === 1 ? "it" : "them"}.`,
+        `${capitalize(ventListPhrase(damaged))} ${damaged.length === 1 ? "is" : "are"} damaged. A broken vent or torn screen lets rain, snow, birds and insects in; vent openings must keep them out (IRC R806.1: openings 1/16 to 1/4 in). Repair or replace ${damaged.length === 1 ? "it" : "them"}.`,
       ventIds: damaged.map((v) => v.id),
       caution: ROOF_SAFETY_CAUTION,
     });
@@ -534,7 +537,7 @@ export function unventedFindings(ctx: FindingContext): Finding[] {
       code: "vents-in-unvented-attic",
       severity: "warning",
       title: "Vents or fans open a sealed attic to the outside",
-      detail: `${ventListPhrase(openings)} ${openings.length === 1 ? "opens" : "open"} this sealed attic to outdoor air, which works against the insulation at the roof line. Don't add more. Whether to close ${openings.length === 1 ? "it" : "them"} off is a decision for the insulation contractor and the building department; a fan here pulls conditioned air out of the house.`,
+      detail: `${capitalize(ventListPhrase(openings))} ${openings.length === 1 ? "opens" : "open"} this sealed attic to outdoor air, which works against the insulation at the roof line. Don't add more. Whether to close ${openings.length === 1 ? "it" : "them"} off is a decision for the insulation contractor and the building department; a fan here pulls conditioned air out of the house.`,
       ventIds: openings.map((v) => v.id),
       caution: ROOF_SAFETY_CAUTION,
     });

@@ -244,6 +244,13 @@ export const AtticInputSchema = z
     roofColor: RoofColorSchema,
     /** IECC moisture letter with the zone (4C marine …); zones 7–8 have none. Optional for older surveys. */
     moistureRegime: MoistureRegimeSchema.nullable().optional(),
+    /** A space of enclosed rafter bays (cathedral ceiling): each bay is vented on its own (IRC R806.1). */
+    enclosedRafterBays: z
+      .object({
+        bayCount: z.number().int("Bays are counted in whole numbers.").min(1, "At least one bay.").max(500),
+        baySpacingIn: z.number().min(8, "Rafter spacing is at least 8 in.").max(96, "Rafter spacing is at most 96 in."),
+      })
+      .optional(),
     /** "unvented" for a sealed attic (IRC R806.5); vented when absent. */
     assembly: AtticAssemblySchema.optional(),
     unvented: UnventedAssemblySchema.optional(),

@@ -62,6 +62,9 @@ function Figure({ label, value, sub, isShort }: { label: string; value: string; 
 
 /** Required against provided, intake and exhaust, and the balance, in words and figures. */
 export function VentAreaFigures({ analysis: a, unitSystem }: { analysis: AtticAnalysis; unitSystem: UnitSystem }) {
+  if (a.assembly === "unvented") {
+    return <p className="text-base text-ink-800">Sealed (unvented) attic under IRC R806.5: no vent area is required, and none should be added.</p>;
+  }
   // A ✓ only beside a value inside its range; the verdict on the total compares exact figures (never rounded).
   const meetsTotal = meetsRequiredArea(a.provided.exactTotalSqIn, a.requirement.exactSqIn);
   const isIntakeShort = a.provided.intakeSqIn < a.requirement.split.lowerMinSqIn;
