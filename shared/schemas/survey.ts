@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { AtticAssemblySchema, RoofFormSchema, SectionSchema, SiteSchema, UnventedAssemblySchema, VentSchema } from "../ventilation/schema.ts";
+import { AtticAssemblySchema, EnclosedRafterBaysSchema, RoofFormSchema, SectionSchema, SiteSchema, UnventedAssemblySchema, VentSchema } from "../ventilation/schema.ts";
 
 /**
  * One separately vented attic space as the estimator records it. Sections and vents use the
@@ -20,6 +20,8 @@ export const SpaceRoofSchema = z.object({
    */
   assembly: AtticAssemblySchema.optional(),
   unvented: UnventedAssemblySchema.optional(),
+  /** Cathedral ceiling or ceiling on the rafters: each bay is vented on its own (IRC R806.1). */
+  enclosedRafterBays: EnclosedRafterBaysSchema.optional(),
 });
 
 /** The site checklist: the core's site flags plus observations it does not compute with. */

@@ -34,6 +34,7 @@ export function toAtticInput(project: ProjectBasis, space: SpaceSurvey): AtticIn
     ...(project.moistureRegime !== undefined ? { moistureRegime: project.moistureRegime } : {}),
     ...(space.roof.assembly !== undefined ? { assembly: space.roof.assembly } : {}),
     ...(space.roof.unvented !== undefined ? { unvented: space.roof.unvented } : {}),
+    ...(space.roof.enclosedRafterBays !== undefined ? { enclosedRafterBays: space.roof.enclosedRafterBays } : {}),
     sections: space.sections.map((s) => ({ ...s, roofForm: s.roofForm ?? space.roof.form, pitchIn12: s.pitchIn12 ?? space.roof.pitchIn12 })),
     vents: space.vents,
     site,

@@ -204,6 +204,11 @@ export const VentSchema = z
 
 /** IECC moisture regime: A moist, B dry, C marine; zones 7 and 8 carry none [SOURCES.md S20, S21]. */
 export const MoistureRegimeSchema = z.enum(["A", "B", "C"]);
+/** A space of enclosed rafter bays: how many bays, and the rafter spacing. */
+export const EnclosedRafterBaysSchema = z.object({
+  bayCount: z.number().int("Bays are counted in whole numbers.").min(1, "At least one bay.").max(500),
+  baySpacingIn: z.number().min(8, "Rafter spacing is at least 8 in.").max(96, "Rafter spacing is at most 96 in."),
+});
 export const AtticAssemblySchema = z.enum(["vented", "unvented"]);
 /** How an unvented (sealed) roof assembly is built — what IRC R806.5 checks [SOURCES.md S7, S25]. */
 export const UnventedAssemblySchema = z.object({
@@ -245,12 +250,7 @@ export const AtticInputSchema = z
     /** IECC moisture letter with the zone (4C marine …); zones 7–8 have none. Optional for older surveys. */
     moistureRegime: MoistureRegimeSchema.nullable().optional(),
     /** A space of enclosed rafter bays (cathedral ceiling): each bay is vented on its own (IRC R806.1). */
-    enclosedRafterBays: z
-      .object({
-        bayCount: z.number().int("Bays are counted in whole numbers.").min(1, "At least one bay.").max(500),
-        baySpacingIn: z.number().min(8, "Rafter spacing is at least 8 in.").max(96, "Rafter spacing is at most 96 in."),
-      })
-      .optional(),
+    enclosedRafterBays: EnclosedRafterBaysSchema.optional(),
     /** "unvented" for a sealed attic (IRC R806.5); vented when absent. */
     assembly: AtticAssemblySchema.optional(),
     unvented: UnventedAssemblySchema.optional(),

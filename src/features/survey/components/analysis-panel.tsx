@@ -142,6 +142,16 @@ export const AnalysisPanel = memo(function AnalysisPanel({ spaceName, input, res
             ))}
           </ul>
         </details>
+        {a.rafterBays ? (
+          <div className="rounded-md border border-ink-200 bg-white px-3 py-2 text-base text-ink-800">
+            <p className="font-medium text-ink-900">
+              {a.rafterBays.isMet ? "✓ Every rafter bay is vented" : "! Not every rafter bay is vented enough"} (IRC R806.1, per bay)
+            </p>
+            {a.rafterBays.reasons.map((r) => (
+              <p key={r}>{r}</p>
+            ))}
+          </div>
+        ) : null}
         {a.recommendations.length > 0 ? (
           <details className="rounded-md border border-ink-200 bg-white px-3 py-2">
             <summary className="min-h-touch cursor-pointer py-2 font-medium text-ink-900 md:min-h-0">Above the minimum: recommended, not code</summary>

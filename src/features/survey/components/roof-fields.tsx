@@ -52,6 +52,27 @@ export const RoofFields = memo(function RoofFields({ roof, onChange, unitSystem 
         entry={roof.eaveLength}
         onText={(text) => onChange({ ...roof, eaveLength: lengthEntry(text, { system: unitSystem }) })}
       />
+      <EntryField
+        label="Enclosed rafter bays"
+        hint="Cathedral ceiling or ceiling on the rafters: each bay is vented on its own. Leave empty for an open attic."
+        isOptional
+        inputMode="numeric"
+        suffix="bays"
+        showUnderstood={false}
+        entry={roof.bayCount}
+        onText={(text) => onChange({ ...roof, bayCount: numberEntry(text, { isWhole: true, min: 1, max: 500 }) })}
+      />
+      {roof.bayCount.value !== null || roof.baySpacing.text !== "" ? (
+        <EntryField
+          label="Rafter spacing"
+          hint="On centre, e.g. 16 or 24."
+          inputMode="decimal"
+          suffix="in"
+          showUnderstood={false}
+          entry={roof.baySpacing}
+          onText={(text) => onChange({ ...roof, baySpacing: numberEntry(text, { min: 8, max: 96, unit: "inches" }) })}
+        />
+      ) : null}
       <Select
         label="Attic type"
         hint="Sealed: spray foam or rigid board at the roof line, no vents (IRC R806.5)."

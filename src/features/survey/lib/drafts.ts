@@ -116,6 +116,9 @@ export interface RoofDraft {
   insideEnvelope: "" | "yes" | "no";
   roofCovering: "" | RoofCovering;
   shakeGap: "" | "yes" | "no";
+  /** Enclosed rafter bays (cathedral ceiling): bay count and spacing; empty for an open attic. */
+  bayCount: EntryDraft;
+  baySpacing: EntryDraft;
 }
 
 export interface SpaceDraft {
@@ -312,6 +315,8 @@ export function spaceFromServer(space: Pick<SpaceRecord, "id" | "name" | "roof" 
       insideEnvelope: yesNo(space.roof.unvented?.isInsideThermalEnvelope),
       roofCovering: space.roof.unvented?.roofCovering ?? "",
       shakeGap: yesNo(space.roof.unvented?.hasVentedGapUnderShakes),
+      bayCount: entryFromNumber(space.roof.enclosedRafterBays?.bayCount),
+      baySpacing: entryFromNumber(space.roof.enclosedRafterBays?.baySpacingIn),
     },
     sections: space.sections.map((s) => sectionFromServer(s, system)),
     vents: space.vents.map((v) => ventFromServer(v, system)),
@@ -515,8 +520,12 @@ export function buildRoof(draft: RoofDraft): { roof: SpaceRoof; problems: Proble
       sealed = { assembly: "unvented", unvented };
     }
   }
+  const bayCount = need(draft.bayCount, "Rafter bays", problems, false);
+  const baySpacing = need(draft.baySpacing, "Rafter spacing", problems, false);
+  if ((bayCount === undefined) !== (baySpacing === undefined)) problems.push("Rafter bays: enter both the number of bays and the rafter spacing.");
+  const bays = bayCount !== undefined && baySpacing !== undefined ? { enclosedRafterBays: { bayCount, baySpacingIn: baySpacing } } : {};
   return {
-    roof: { form: draft.form, pitchIn12: pitch ?? 6, ridgeLengthFt: ridge ?? null, eaveLengthFt: eave ?? null, ...sealed },
+    roof: { form: draft.form, pitchIn12: pitch ?? 6, ridgeLengthFt: ridge ?? null, eaveLengthFt: eave ?? null, ...sealed, ...bays },
     problems: problems.map((message) => ({ where: "Roof", message })),
   };
 }
