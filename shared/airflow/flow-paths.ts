@@ -1,6 +1,6 @@
 /**
  * Airflow arrows: the intended path (in at the eaves, up under the deck, out at the top), blocked
- * paths, and the short-circuit paths the analysis found [TRADE-REFERENCES §5.4: a fan or a second
+ * paths, and the short-circuit paths the analysis found [SOURCES.md §5.4: a fan or a second
  * kind of exhaust draws from the nearest, easiest opening instead of the soffits].
  */
 import type { AtticAnalysis, Finding, FindingCode } from "../ventilation";

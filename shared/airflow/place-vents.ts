@@ -7,7 +7,7 @@
  *   vertical slot or a round fan near the top.
  */
 import type { AtticAnalysis, AtticInput, Vent, VentKind } from "../ventilation";
-import { EAVE_KINDS, formatNumber, isPoweredKind, VENT_KIND_LABELS } from "../ventilation";
+import { EAVE_KINDS, formatNumber, isMechanicalKind, isPoweredKind, VENT_KIND_LABELS } from "../ventilation";
 import { add, clamp, placeLocal, scale } from "./geometry";
 import { deckYAt, type RoofFrame, type SlopeSide, slopeLengthFt, slopePoint } from "./roof-frame";
 import type { DrawPointFt, PictureShape, PictureText, Primitive } from "./types";
@@ -62,6 +62,7 @@ const SHORT_NAMES: Record<VentKind, [one: string, many: string]> = {
   "powered-roof": ["Roof fan", "Roof fans"],
   "powered-gable": ["Gable fan", "Gable fans"],
   "solar-powered": ["Solar fan", "Solar fans"],
+  "whole-house-fan": ["Whole-house fan", "Whole-house fans"],
 };
 
 /** Default spot on a slope when no drop was recorded: near the top, as these vents usually are. */
@@ -89,7 +90,7 @@ function isGableMounted(vent: Vent): boolean {
 
 /** Figure shown under a vent's name: net free area, or airflow for a fan. */
 function figureText(vent: Vent, nfaSqIn: number, airflowCfm: number): string {
-  return isPoweredKind(vent.kind) ? `${formatNumber(airflowCfm)} cfm` : `${formatNumber(nfaSqIn)} sq in`;
+  return isMechanicalKind(vent.kind) ? `${formatNumber(airflowCfm)} cfm` : `${formatNumber(nfaSqIn)} sq in`;
 }
 
 interface Ctx {
@@ -215,6 +216,12 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
   const elsewhere = input.vents.length - inSection.length;
   if (elsewhere > 0) notes.push(`${elsewhere} vent${elsewhere === 1 ? "" : "s"} serving other sections ${elsewhere === 1 ? "is" : "are"} not drawn.`);
   const isSoffitBlocked = input.site?.soffitsBlocked === true;
+  if (inSection.some((v) => v.kind === "whole-house-fan")) {
+    notes.push("The whole-house fan sits in the ceiling: it blows house air up into the attic, and every vent — ridge and soffits alike — lets that air out. It runs with windows open.");
+  }
+  if (input.assembly === "unvented") {
+    notes.push("Sealed (unvented) attic: the insulation is at the roof line and no outside air is meant to pass through it (IRC R806.5).");
+  }
 
   // Eave intake.
   const eaveVents = inSection.filter((v) => EAVE_KINDS.has(v.kind) && v.location === "lower");
@@ -377,7 +384,7 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
       }
       const { nfaSqIn, airflowCfm } = ventFigures(analysis, [vent]);
       const quantity = vent.quantity ?? 1;
-      const isFan = isPoweredKind(vent.kind);
+      const isFan = isMechanicalKind(vent.kind);
       const id = `vent-${vent.id}`;
       const role = vent.location === "lower" ? "intake" : "exhaust";
       ctx.shapes.push({
@@ -432,7 +439,7 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
     : [...louvers.slice(0, half).map((vent, i) => ({ vent, x: sideX(i, -1) })), ...fans.slice(0, half).map((vent, i) => ({ vent, x: sideX(i, 1) }))];
   const unplacedGable = gableVents.filter((v) => !gableItems.some((g) => g.vent === v)).map((v) => v.id);
   for (const [itemIndex, { vent, x }] of gableItems.entries()) {
-    const isFan = isPoweredKind(vent.kind);
+    const isFan = isMechanicalKind(vent.kind);
     const radiusFt = isFan ? 1.25 * u : 1.5 * u;
     const fallback = vent.location === "lower" ? DEFAULT_LOWER_FRACTION : 0.5;
     const { fraction } = slopeFraction(frame, vent, fallback);

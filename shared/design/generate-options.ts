@@ -7,13 +7,13 @@
  * - "ridge-and-continuous-soffit": a ridge vent with continuous soffit intake. Every other
  *   exhaust — box vents, turbines, gable louvers, powered fans — is removed and its opening
  *   patched or sealed: a fan or gable louver beside a ridge vent short-circuits it (common
- *   practice; TRADE-REFERENCES §5.4, SRC 19).
+ *   practice; SOURCES.md §5.4, S19).
  * - "static-vents-and-individual-soffit": static (box) vents in a row under the ridge with
  *   individual soffit vents; all other exhaust removed. For hip roofs with short ridges.
  * - "remove-fan-passive" (only when the survey has a powered fan): the fan is disconnected and
  *   removed, its roof opening reused for a static vent or patched (a gable fan's opening sealed),
  *   and the passive exhaust already there is kept and topped up with the same kind, with intake of
- *   the kind already there. Powered fans can depressurize the house (TRADE-REFERENCES §5.1–5.2).
+ *   the kind already there. Powered fans can depressurize the house (SOURCES.md §5.1–5.2).
  *
  * Sizing (IRC R806.2, per the project's code basis — the core decides, the generator aims):
  * - First aim for 1/300 when the code basis offers it: half the required area in exhaust within
@@ -21,7 +21,7 @@
  *   Fall back to 1/150 when 1/300 is not available or the core does not confirm it.
  * - Exhaust aims at 50 % of the required area and may go down to the rule's minimum share (40 %)
  *   when the roof has no room for more; intake is at least the exhaust and at least the balance
- *   (intake ≥ exhaust always: TRADE-REFERENCES §5.3, BC Housing SRC 18).
+ *   (intake ≥ exhaust always: SOURCES.md §5.3, BC Housing S18).
  * - Quantities are what is bought: whole vents, linear vents in whole pieces where they fit.
  * - Every proposal is checked by analyzeAttic on the attic as it would be after the work; only
  *   compliant proposals with one exhaust type, intake ≥ exhaust and no powered fan are returned.
@@ -38,6 +38,7 @@ import {
   COMBUSTION_SAFETY_CAUTION,
   EAVE_KINDS,
   FAN_SAFETY_CAUTION,
+  isMechanicalKind,
   isPoweredKind,
   ratioArithmetic,
   ROOF_SAFETY_CAUTION,
@@ -62,7 +63,8 @@ import {
   usableRidgeFt,
   type RoofConstraints,
 } from "./roof-constraints";
-import { sizeVentItem, type VentRoom } from "./size-vent-item";
+import { sizeVentItem, type SizeResult, type VentRoom } from "./size-vent-item";
+import { codeBasisRule } from "../ventilation/requirement";
 
 export const OPTION_TYPES = ["ridge-and-continuous-soffit", "static-vents-and-individual-soffit", "remove-fan-passive"] as const;
 export type OptionType = (typeof OPTION_TYPES)[number];
@@ -183,7 +185,7 @@ function buildContext(input: GenerateOptionsInput, baseline: AtticAnalysis): Con
   if (project.codeBasis === "strict-150") {
     ratios = [150];
     ratioNote = "This project uses strict 1/150 with no exceptions.";
-  } else if (project.codeBasis === "irc-2018" && project.climateZone >= 6 && project.ceilingVaporRetarder !== "class-I" && project.ceilingVaporRetarder !== "class-II") {
+  } else if (codeBasisRule(project.codeBasis) === "irc-2018" && project.climateZone >= 6 && project.ceilingVaporRetarder !== "class-I" && project.ceilingVaporRetarder !== "class-II") {
     ratios = [150];
     ratioNote = `Under the 2018/2021/2024 text, 1/300 in climate zone ${project.climateZone} also needs a Class I or II ceiling vapor retarder, which is not recorded, so the design is sized at 1/150 (IRC R806.2 exception).`;
   }
@@ -195,8 +197,9 @@ function buildContext(input: GenerateOptionsInput, baseline: AtticAnalysis): Con
     nfaById: new Map(baseline.provided.perVent.map((v) => [v.ventId, v.nfaSqIn])),
     qualifyingIds: new Set(baseline.requirement.qualifyingUpperVentIds),
     fans: space.vents.filter((v) => isPoweredKind(v.kind)),
-    passiveExhaust: space.vents.filter((v) => !isPoweredKind(v.kind) && (v.location === "upper" || v.kind === "gable-louver")),
-    intake: space.vents.filter((v) => !isPoweredKind(v.kind) && v.location === "lower" && v.kind !== "gable-louver"),
+    // A whole-house fan is neither: it stays as it is, and its outlet is every attic vent.
+    passiveExhaust: space.vents.filter((v) => !isMechanicalKind(v.kind) && (v.location === "upper" || v.kind === "gable-louver")),
+    intake: space.vents.filter((v) => !isMechanicalKind(v.kind) && v.location === "lower" && v.kind !== "gable-louver"),
     minRiseFt,
     ratios,
     ratioNote,
@@ -345,7 +348,33 @@ class IdMaker {
 }
 
 function upperShareMin(ctx: Context, ratio: Ratio): number {
-  return ratio === 300 && ctx.input.project.codeBasis === "irc-2009" ? 0.5 : 0.4;
+  return ratio === 300 && codeBasisRule(ctx.input.project.codeBasis) === "irc-2009" ? 0.5 : 0.4;
+}
+
+/** The most passive exhaust the 1/300 route allows, sq in: 50 % (2009: 80 %) of the exact required area under the literal reading; unlimited otherwise. */
+function exhaustCapSqIn(ctx: Context, ratio: Ratio, areaSqFt: number): number {
+  if (ratio !== 300 || (ctx.input.project.upperShareBase ?? "required") !== "required") return Infinity;
+  return ((areaSqFt * 144) / 300) * upperShareMax(ctx);
+}
+
+function upperShareMax(ctx: Context): number {
+  return codeBasisRule(ctx.input.project.codeBasis) === "irc-2009" ? 0.8 : 0.5;
+}
+
+/** The smallest bought quantity of `item` giving at least `minSqIn` and at most `maxSqIn`, or null. */
+function sizeWithinCap(item: CatalogItem, minSqIn: number, maxSqIn: number, room: VentRoom): Extract<SizeResult, { fits: true }> | null {
+  const atMin = sizeVentItem(item, minSqIn, room);
+  if (atMin.fits && atMin.nfaSqIn <= maxSqIn + 1e-9) return atMin;
+  if (item.unit !== "linear-ft" || item.nfaSqInPerFt === null) return null;
+  const perFt = item.nfaSqInPerFt;
+  const feet = Math.ceil(minSqIn / perFt - 1e-9);
+  if (feet * perFt > maxSqIn + 1e-9 || feet > room.amount + 1e-9) return null;
+  return {
+    fits: true,
+    quantity: feet,
+    nfaSqIn: feet * perFt,
+    explanation: `${item.name} gives ${fmt(perFt)} sq in per ft: ${fmt(minSqIn)} ÷ ${fmt(perFt)} → ${fmt(feet)} ft, the last piece cut so the exhaust stays within the 50 % limit. ${fmt(feet)} ft × ${fmt(perFt)} = ${fmt(feet * perFt)} sq in.`,
+  };
 }
 
 function staticDropFt(ctx: Context): number {
@@ -365,7 +394,7 @@ function designAt(ctx: Context, plan: Plan, ratio: Ratio): Design | { failure: s
   rationale.push(clip(`Required at 1/${ratio}: ${ratioArithmetic(areaSqFt, ratio)}.`));
   if (ratio === 300) {
     rationale.push(
-      ctx.input.project.codeBasis === "irc-2009"
+      codeBasisRule(ctx.input.project.codeBasis) === "irc-2009"
         ? "Aiming for 1/300 by vent placement (IRC 2009 R806.2): 50–80 % of the area in upper vents at least 3 ft above the eave vents, the rest at the eaves; here exhaust is held to 50 % so intake is never smaller."
         : "Aiming for 1/300 by vent placement (IRC R806.2 exception): 40–50 % of the area in exhaust no more than 3 ft below the ridge, measured vertically, the balance low at the eaves.",
     );
@@ -378,7 +407,7 @@ function designAt(ctx: Context, plan: Plan, ratio: Ratio): Design | { failure: s
   const reusedNfaEach = plan.exhaustItem?.unit === "each" ? (plan.exhaustItem.nfaSqInPerUnit ?? 0) : 0;
   const reusedSqIn = reusedUnits * reusedNfaEach;
   const reusedQualifyingSqIn =
-    ratio === 300 && ctx.input.project.codeBasis !== "irc-2009"
+    ratio === 300 && codeBasisRule(ctx.input.project.codeBasis) !== "irc-2009"
       ? plan.reusedFanOpenings.filter((v) => v.dropBelowRidgeFt !== undefined && v.dropBelowRidgeFt <= 3).reduce((acc, v) => acc + unitsOf(v) * reusedNfaEach, 0)
       : ratio === 150
         ? reusedSqIn
@@ -405,6 +434,18 @@ function designAt(ctx: Context, plan: Plan, ratio: Ratio): Design | { failure: s
       }
       aimWords = `Exhaust: half of ${fmt(requiredSqIn)} sq in does not fit (${sized.reason}) so the exhaust is held to the minimum share, ${fmt(shareMin * 100)} % = ${fmt(minSqIn)} sq in${haveSqIn > 0 ? `, less ${fmt(haveSqIn)} already counted` : ""}.`;
       sized = fallback;
+    }
+    // IRC 2012+ R806.2 condition 2, literal reading: upper vents at most 50 % of the REQUIRED area
+    // [SOURCES.md S4]. Whole pieces can overshoot it; then aim at the minimum share, then cut the
+    // last piece of a linear vent to whole feet; if even that overshoots, 1/300 is not offered.
+    const capSqIn = exhaustCapSqIn(ctx, ratio, areaSqFt) - keptAllSqIn - reusedSqIn;
+    if (sized.nfaSqIn > capSqIn + 1e-9) {
+      const within = sizeWithinCap(plan.exhaustItem, Math.max(0, minSqIn - haveSqIn), capSqIn, plan.exhaustRoom);
+      if (!within) {
+        return { failure: `At 1/${ratio} the exhaust must stay within ${fmt(shareMin * 100)}–${fmt(upperShareMax(ctx) * 100)} % of the ${fmt((areaSqFt * 144) / ratio)} sq in required (IRC R806.2), and ${plan.exhaustItem.name} can't be bought in a quantity that lands there.` };
+      }
+      aimWords = `${aimWords} Held to at most ${fmt(upperShareMax(ctx) * 100)} % of the required area (IRC R806.2: "not more than ${upperShareMax(ctx) === 0.8 ? "80" : "50"} percent of the required ventilating area").`;
+      sized = within;
     }
     rationale.push(clip(aimWords));
     if (sized.quantity > 0) {
@@ -511,7 +552,7 @@ function designAt(ctx: Context, plan: Plan, ratio: Ratio): Design | { failure: s
     }
   }
 
-  // Soffits blocked or without baffles: pull insulation back and baffle every bay (IRC R806.3; NREL SWS, SRC 9).
+  // Soffits blocked or without baffles: pull insulation back and baffle every bay (IRC R806.3; NREL SWS, S9).
   const site = space.site;
   const needsBaffles = site.soffitsBlocked === true || site.bafflesPresent === false;
   let clearsBlockedSoffits = false;
@@ -663,6 +704,11 @@ export function generateOptions(input: GenerateOptionsInput): GenerateOptionsRes
   if (!tried.ok) {
     const reason = `The survey can't be analysed yet: ${tried.issues.map((i) => `${i.path || "attic"}: ${i.message}`).join("; ")}`;
     return { baseline: null, options: [], skipped: OPTION_TYPES.map((type) => ({ type, reason: clip(reason) })) };
+  }
+  if (tried.analysis.assembly === "unvented") {
+    // IRC R806.5: a sealed attic gets no vents — adding them is the harm this check exists to prevent.
+    const reason = "This attic is an unvented (sealed) roof assembly under IRC R806.5: Eavesight never proposes vents into it. See its findings for the R806.5 conditions to check instead.";
+    return { baseline: tried.analysis, options: [], skipped: OPTION_TYPES.map((type) => ({ type, reason })) };
   }
   const ctx = buildContext(input, tried.analysis);
   const options: GeneratedOption[] = [];

@@ -1,7 +1,7 @@
 /**
  * How much of one catalog vent gives a needed net free area, in what is bought: a linear vent in
  * whole pieces where the roof has room (else whole feet up to the room there is), an "each" vent
- * in whole units. Needed areas are always rounded up (TRADE-REFERENCES §8 E3).
+ * in whole units. Needed areas are always rounded up (SOURCES.md §8 E3).
  */
 import type { CatalogItem } from "../schemas/catalog";
 import { formatNumber } from "../units/format";

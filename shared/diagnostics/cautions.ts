@@ -5,7 +5,7 @@
 
 /** For any check or repair on a powered attic fan, its thermostat or its wiring. */
 export const FAN_SAFETY_CAUTION =
-  "Safety: switch the fan's circuit off at the breaker and confirm it is dead with a voltage tester before touching the fan, its thermostat or any wire. " +
+  "Safety: switch the fan's circuit off at the breaker, lock or tag the breaker off so nobody switches it back on, and confirm the circuit is dead with a voltage tester that you prove on a known live source just before and just after (live-dead-live) before touching the fan, its thermostat or any wire. " +
   "Any wiring repair or replacement is work for a licensed electrician. " +
   "Attics get dangerously hot: work early in the day, bring water and limit your time up there. " +
   "Walk only on the framing (joists or truss chords), never on drywall or insulation between them. " +
@@ -27,3 +27,7 @@ export const COMBUSTION_SAFETY_CAUTION =
 /** For the thermostat switching test, which is taken on a live circuit. */
 export const LIVE_VOLTAGE_TEST_CAUTION =
   "The switching test is a live-voltage test: only a qualified person should do it, with a rated meter and insulated probes, touching no bare conductor; switch the breaker off again before disconnecting anything.";
+
+/** For a motor run capacitor, which can hold a charge after the power is off. */
+export const CAPACITOR_CAUTION =
+  "A capacitor can hold a charge after the power is off: discharge it safely (a rated resistor across the terminals, never a screwdriver) before touching or measuring it.";

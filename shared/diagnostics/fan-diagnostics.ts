@@ -2,16 +2,27 @@
  * Powered attic fan diagnostics as pure functions: each field reading becomes a Finding (the same
  * type the ventilation core returns), always carrying FAN_SAFETY_CAUTION.
  *
- * Thresholds are field practice, not code: a fan motor winding reads from near 0 to some tens of
- * ohms; an open winding reads OL (no continuity) or megohms [common practice, from memory].
+ * Thresholds are field practice, not code [common practice, from memory; SOURCES.md S30]: a small
+ * fan motor winding reads from about an ohm to some tens of ohms; below 1 ohm it is shorted (or the
+ * meter is across shorted leads); an open winding reads OL (no continuity) or megohms; winding to
+ * frame should read OL or at least 1 megohm (the usual floor for low-voltage motor insulation); a
+ * run capacitor should read within the tolerance printed on it (±6 % is common).
+ * Lock-out and the tester proof follow OSHA 29 CFR 1910.147 and 1910.333 and NFPA 70E's
+ * live-dead-live test [SOURCES.md S31, S32; from memory].
  * A line-voltage attic fan thermostat passes about 120 V to the motor when it calls and about 0 V
  * when it does not; set points are typically around 90 °F [common practice].
  */
 import type { Finding } from "../ventilation/findings";
 import { formatNumber } from "../units/format";
-import { FAN_SAFETY_CAUTION, LIVE_VOLTAGE_TEST_CAUTION } from "./cautions";
-import type { FanDiagnostics, ThermostatTest } from "./schema";
+import { CAPACITOR_CAUTION, FAN_SAFETY_CAUTION, LIVE_VOLTAGE_TEST_CAUTION } from "./cautions";
+import type { CapacitorReading, FanDiagnostics, ThermostatTest } from "./schema";
 
+/** Below this a winding reads as shorted (ohms) [common practice, from memory]. */
+export const WINDING_SHORT_BELOW_OHMS = 1;
+/** Winding to frame at or above this (ohms) is healthy insulation [common practice, from memory]. */
+export const GROUND_INSULATION_MIN_OHMS = 1_000_000;
+/** Capacitor tolerance when the label's is not recorded, ± % [common practice, from memory]. */
+export const DEFAULT_CAPACITOR_TOLERANCE_PERCENT = 6;
 /** Highest winding resistance read as a plausible, intact winding (ohms) [common practice, from memory]. */
 export const WINDING_PLAUSIBLE_MAX_OHMS = 100;
 /** From this resistance up (ohms) the winding is taken as open [common practice]. */
@@ -76,12 +87,21 @@ export function interpretWindingResistance(reading: number | "open", ventIds: st
       ventIds,
     });
   }
+  if (reading < WINDING_SHORT_BELOW_OHMS) {
+    return withCaution({
+      code: "fan-winding-shorted",
+      severity: "critical",
+      title: "Fan motor winding reads as a short",
+      detail: `The winding reads ${formatNumber(reading, { maxFractionDigits: 3 })} ohms: a motor winding reads at least about an ohm, so this is a shorted winding or the meter is across shorted leads. Disconnect the motor leads and measure again at the motor; if it still reads under 1 ohm, replace the motor. Do not switch it back on.`,
+      ventIds,
+    });
+  }
   if (reading <= WINDING_PLAUSIBLE_MAX_OHMS) {
     return withCaution({
       code: "fan-winding-ok",
       severity: "info",
       title: "Fan motor winding reads normally",
-      detail: `The winding reads ${formatNumber(reading)} ohms, in the usual range (near 0 to some tens of ohms). If the fan still won't run, test the thermostat and the blade next.`,
+      detail: `The winding reads ${formatNumber(reading)} ohms, in the usual range (about 1 to some tens of ohms). If the fan still won't run, test the thermostat and the blade next.`,
       ventIds,
     });
   }
@@ -92,6 +112,56 @@ export function interpretWindingResistance(reading: number | "open", ventIds: st
     detail: `The winding reads ${formatNumber(reading)} ohms, higher than a fan winding usually reads. Check that the meter leads are on the motor leads with the motor disconnected, compare with the motor's data, and replace the motor if it is confirmed high.`,
     ventIds,
   });
+}
+
+/**
+ * Winding to frame (ground): healthy insulation reads OL or megohms.
+ *
+ * @example
+ * interpretWindingToGround("open", ["fan1"]).code // "fan-ground-ok"
+ * interpretWindingToGround(2_000, ["fan1"]).code // "fan-winding-grounded"
+ */
+export function interpretWindingToGround(reading: number | "open", ventIds: string[] = []): Finding {
+  if (reading === "open" || reading >= GROUND_INSULATION_MIN_OHMS) {
+    return withCaution({
+      code: "fan-ground-ok",
+      severity: "info",
+      title: "No leak from the winding to the motor frame",
+      detail: `Winding to frame reads ${reading === "open" ? "open (OL)" : `${formatNumber(reading / 1_000_000)} megohms`}, as it should. An ordinary meter can't show marginal insulation; an insulation tester (megohmmeter) can.`,
+      ventIds,
+    });
+  }
+  return withCaution({
+    code: "fan-winding-grounded",
+    severity: "critical",
+    title: "Fan motor winding leaks to its frame",
+    detail: `Winding to frame reads ${formatNumber(reading)} ohms; it should read open (OL) or at least 1 megohm. The insulation has failed and the motor frame can become live. Do not switch it back on: replace the motor, and have a licensed electrician check the circuit's grounding.`,
+    ventIds,
+  });
+}
+
+/**
+ * Run capacitor against its label; only for motors that have one (shaded-pole motors have none).
+ *
+ * @example
+ * interpretCapacitor({ ratedMicrofarads: 5, measuredMicrofarads: 4.6 }, ["fan1"]).code // "fan-capacitor-failed" (outside 4.7–5.3 µF)
+ */
+export function interpretCapacitor(reading: CapacitorReading, ventIds: string[] = []): Finding {
+  const tolerance = (reading.tolerancePercent ?? DEFAULT_CAPACITOR_TOLERANCE_PERCENT) / 100;
+  const lowUf = reading.ratedMicrofarads * (1 - tolerance);
+  const highUf = reading.ratedMicrofarads * (1 + tolerance);
+  const range = `${formatNumber(lowUf)}–${formatNumber(highUf)} µF (${formatNumber(reading.ratedMicrofarads)} µF ± ${formatNumber(tolerance * 100)} %${reading.tolerancePercent === undefined ? ", a common tolerance; use the one printed on it" : ""})`;
+  const caution = `${CAPACITOR_CAUTION} ${FAN_SAFETY_CAUTION}`;
+  if (reading.measuredMicrofarads >= lowUf - 1e-9 && reading.measuredMicrofarads <= highUf + 1e-9) {
+    return withCaution({ code: "fan-capacitor-ok", severity: "info", title: "Capacitor reads within its rating", detail: `The capacitor reads ${formatNumber(reading.measuredMicrofarads)} µF, within ${range}.`, ventIds }, caution);
+  }
+  return withCaution({
+    code: "fan-capacitor-failed",
+    severity: "warning",
+    title: "Capacitor out of its rating",
+    detail: `The capacitor reads ${formatNumber(reading.measuredMicrofarads)} µF; it should read ${range}. A weak capacitor makes the motor hum, start slowly or overheat: replace it with one of the same µF and voltage rating.`,
+    ventIds,
+  }, caution);
 }
 
 /**
@@ -186,15 +256,38 @@ export function interpretBladeSpin(isBladeFreeToSpin: boolean, ventIds: string[]
 export function diagnoseFan(diagnostics: FanDiagnostics, ventId: string): Finding[] {
   const ventIds = [ventId];
   const findings: Finding[] = [];
-  const hasHandsOn = diagnostics.windingResistanceOhms !== undefined || diagnostics.isBladeFreeToSpin !== undefined;
+  const hasHandsOn =
+    diagnostics.windingResistanceOhms !== undefined ||
+    diagnostics.isBladeFreeToSpin !== undefined ||
+    diagnostics.windingToGroundOhms !== undefined ||
+    diagnostics.capacitor !== undefined;
   if (diagnostics.isPowerVerifiedOff === false || (hasHandsOn && diagnostics.isPowerVerifiedOff === undefined)) {
     findings.push(checkPowerVerifiedOff(false, ventIds));
+  } else if (diagnostics.isLockedOut === false) {
+    findings.push(stopFinding("fan-lockout-missing", "Breaker not locked off", "Stop: the breaker was not locked or tagged off, so someone could switch the fan back on during the checks. Lock or tag it off, then repeat the checks; the readings recorded are not interpreted.", ventIds));
+  } else if (diagnostics.isTesterProven === false) {
+    findings.push(stopFinding("fan-tester-not-proven", "Tester not proven on a known live source", "Stop: a tester that was not proven on a known live source before and after (live-dead-live) may show \"dead\" on a live circuit. Prove it, test again, then repeat the checks; the readings recorded are not interpreted.", ventIds));
   } else {
     if (diagnostics.isPowerVerifiedOff === true) findings.push(checkPowerVerifiedOff(true, ventIds));
+    if (hasHandsOn && (diagnostics.isLockedOut === undefined || diagnostics.isTesterProven === undefined)) {
+      findings.push(withCaution({
+        code: "fan-safety-steps-not-recorded",
+        severity: "warning",
+        title: "Lock-out and tester proof not recorded",
+        detail: "The survey does not say whether the breaker was locked or tagged off and whether the tester was proven on a known live source before and after the dead test. Record both next time; they are what makes a \"dead\" reading safe to trust.",
+        ventIds,
+      }));
+    }
     if (diagnostics.isBladeFreeToSpin !== undefined) findings.push(interpretBladeSpin(diagnostics.isBladeFreeToSpin, ventIds));
     if (diagnostics.windingResistanceOhms !== undefined) findings.push(interpretWindingResistance(diagnostics.windingResistanceOhms, ventIds));
+    if (diagnostics.windingToGroundOhms !== undefined) findings.push(interpretWindingToGround(diagnostics.windingToGroundOhms, ventIds));
+    if (diagnostics.hasCapacitor !== false && diagnostics.capacitor !== undefined) findings.push(interpretCapacitor(diagnostics.capacitor, ventIds));
   }
   // The thermostat test is a live-voltage test, done with power on by someone qualified.
   if (diagnostics.thermostatTest !== undefined) findings.push(interpretThermostatTest(diagnostics.thermostatTest, ventIds));
   return findings;
+}
+
+function stopFinding(code: "fan-lockout-missing" | "fan-tester-not-proven", title: string, detail: string, ventIds: string[]): Finding {
+  return withCaution({ code, severity: "critical", title, detail, ventIds });
 }

@@ -79,6 +79,8 @@ export interface ProjectRecord {
   version: number;
   createdAt: string;
   updatedAt: string;
+  /** The company's reading of the 1/300 upper-vent share, applied to this project's analyses (read-only). */
+  upperShareBase?: "required" | "provided";
 }
 
 export type CustomerInput = z.infer<typeof CustomerInputSchema>;

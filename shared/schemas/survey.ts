@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { RoofFormSchema, SectionSchema, SiteSchema, VentSchema } from "../ventilation/schema.ts";
+import { AtticAssemblySchema, EnclosedRafterBaysSchema, RoofFormSchema, SectionSchema, SiteSchema, UnventedAssemblySchema, VentSchema } from "../ventilation/schema.ts";
 
 /**
  * One separately vented attic space as the estimator records it. Sections and vents use the
@@ -14,6 +14,14 @@ export const SpaceRoofSchema = z.object({
   ridgeLengthFt: z.number().positive("Ridge length must be more than 0.").max(1_000).nullable().default(null),
   /** Length of eave available for soffit intake, ft. */
   eaveLengthFt: z.number().positive("Eave length must be more than 0.").max(2_000).nullable().default(null),
+  /**
+   * Vented (the usual attic) or unvented (sealed, insulated at the roof line: IRC R806.5). Optional
+   * inside the roof's JSONB, so spaces stored before it existed read as vented (decision 8).
+   */
+  assembly: AtticAssemblySchema.optional(),
+  unvented: UnventedAssemblySchema.optional(),
+  /** Cathedral ceiling or ceiling on the rafters: each bay is vented on its own (IRC R806.1). */
+  enclosedRafterBays: EnclosedRafterBaysSchema.optional(),
 });
 
 /** The site checklist: the core's site flags plus observations it does not compute with. */

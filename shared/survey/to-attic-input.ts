@@ -1,11 +1,15 @@
-import type { AtticInput, CodeBasis, RoofColor, VaporRetarder } from "../ventilation/schema.ts";
+import type { AtticInput, CodeBasis, MoistureRegime, RoofColor, UpperShareBase, VaporRetarder } from "../ventilation/schema.ts";
 import type { SpaceSurvey } from "../schemas/survey.ts";
 
 export interface ProjectBasis {
   codeBasis: CodeBasis;
   climateZone: number;
+  /** IECC moisture letter (A, B, C) or null; zones 7–8 have none. */
+  moistureRegime?: MoistureRegime | null | undefined;
   ceilingVaporRetarder: VaporRetarder;
   roofColor: RoofColor;
+  /** The company's reading of the 1/300 upper-vent share (its profile setting); literal when absent. */
+  upperShareBase?: UpperShareBase | null | undefined;
 }
 
 /**
@@ -26,6 +30,11 @@ export function toAtticInput(project: ProjectBasis, space: SpaceSurvey): AtticIn
     climateZone: project.climateZone,
     ceilingVaporRetarder: project.ceilingVaporRetarder,
     roofColor: project.roofColor,
+    ...(project.upperShareBase != null ? { upperShareBase: project.upperShareBase } : {}),
+    ...(project.moistureRegime !== undefined ? { moistureRegime: project.moistureRegime } : {}),
+    ...(space.roof.assembly !== undefined ? { assembly: space.roof.assembly } : {}),
+    ...(space.roof.unvented !== undefined ? { unvented: space.roof.unvented } : {}),
+    ...(space.roof.enclosedRafterBays !== undefined ? { enclosedRafterBays: space.roof.enclosedRafterBays } : {}),
     sections: space.sections.map((s) => ({ ...s, roofForm: s.roofForm ?? space.roof.form, pitchIn12: s.pitchIn12 ?? space.roof.pitchIn12 })),
     vents: space.vents,
     site,

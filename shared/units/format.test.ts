@@ -29,7 +29,7 @@ describe("exact conversion factors", () => {
     expect(CU_M_PER_CU_FT).toBeCloseTo(0.3048 ** 3, 15); // NIST SP 811 App. B: 2.831685 E-02
   });
 
-  it("when a cfm is turned into L/s, then it is 0.4719474432 (TRADE-REFERENCES §7, NIST SP 811 App. B)", () => {
+  it("when a cfm is turned into L/s, then it is 0.4719474432 (SOURCES.md §7, NIST SP 811 App. B)", () => {
     expect(LPS_PER_CFM).toBeCloseTo(0.4719474432, 12);
     expect(cfmToLps(1)).toBeCloseTo(0.47194745, 7);
   });
@@ -57,7 +57,7 @@ describe("formatNumber", () => {
 });
 
 describe("ceilWhole", () => {
-  it("when a required area has float noise, then rounding up ignores the noise (TRADE-REFERENCES §8 E3 rounding rule)", () => {
+  it("when a required area has float noise, then rounding up ignores the noise (SOURCES.md §8 E3 rounding rule)", () => {
     expect(ceilWhole((1500 * 144) / 150)).toBe(1440);
     expect(ceilWhole(1440.0000000002)).toBe(1440);
     expect(ceilWhole(1185.12)).toBe(1186);
@@ -67,7 +67,7 @@ describe("ceilWhole", () => {
 
 describe("display helpers", () => {
   it("when metric is chosen, then each quantity converts with the exact factor", () => {
-    // TRADE-REFERENCES §8 E1: 1,500 sq ft = 139.35 m²; E5: 1,260 cfm = 594.65 L/s; E8: 4,500 cu ft.
+    // SOURCES.md §8 E1: 1,500 sq ft = 139.35 m²; E5: 1,260 cfm = 594.65 L/s; E8: 4,500 cu ft.
     expect(formatAreaSqFt(1500, "metric")).toBe("139.35 m²");
     expect(formatAreaSqFt(1500)).toBe("1,500 sq ft");
     expect(formatAirflowCfm(1260, "metric")).toBe("594.65 L/s");
@@ -79,7 +79,7 @@ describe("display helpers", () => {
     expect(formatPercent(0.4)).toBe("40 %");
   });
 
-  it("when E3's 1/150 NFA is shown in m², then it matches 114.689 m² ÷ 150 (TRADE-REFERENCES §8 E3)", () => {
+  it("when E3's 1/150 NFA is shown in m², then it matches 114.689 m² ÷ 150 (SOURCES.md §8 E3)", () => {
     expect(sqInToSqM(1185.12)).toBeCloseTo(0.7646, 4);
     expect(sqFtToSqM(1234.5)).toBeCloseTo(114.689, 3);
     expect(sqInToSqM(1185.12)).toBeCloseTo(sqFtToSqM(1234.5) / 150, 10);

@@ -1,7 +1,7 @@
 /**
  * Display helpers. The core works in feet, square feet, square inches and cfm; metric is for
  * display only (DESIGN.md §4). Every factor below is exact by definition
- * (1 in = 25.4 mm, 1 ft = 0.3048 m) — NIST SP 811 App. B [TRADE-REFERENCES §7, SRC 22].
+ * (1 in = 25.4 mm, 1 ft = 0.3048 m) — NIST SP 811 App. B [SOURCES.md §7, S22].
  */
 
 /** Metres in one foot, exact (NIST SP 811 App. B). */
@@ -66,7 +66,7 @@ export function roundTo(value: number, digits: number): number {
 /**
  * Rounds up to a whole number after discarding float noise below 1e-6, so that
  * 1,500 × 144 ÷ 150 stays 1,440 and never becomes 1,441. Required areas are always rounded up
- * [TRADE-REFERENCES §8 E3].
+ * [SOURCES.md §8 E3].
  *
  * @example
  * ceilWhole(1185.12) // 1186

@@ -54,7 +54,7 @@ describe("parseLengthFt", () => {
 });
 
 describe("parseAreaSqFt", () => {
-  it("when rectangles are added, then the area is their sum (TRADE-REFERENCES §8 E4: 1,200 + 240 = 1,440 sq ft)", () => {
+  it("when rectangles are added, then the area is their sum (SOURCES.md §8 E4: 1,200 + 240 = 1,440 sq ft)", () => {
     expect(areaOf("30 x 40 + 12 x 20")).toBe(30 * 40 + 12 * 20);
     expect(parseAreaSqFt("30 x 40 + 12 x 20")).toMatchObject({
       understood: "30 ft × 40 ft + 12 ft × 20 ft = 1,440 sq ft (plain numbers are read as feet)",

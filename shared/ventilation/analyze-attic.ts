@@ -1,15 +1,20 @@
 /**
  * analyzeAttic: one attic space in, one explained analysis out. Pure: no I/O, no clock.
  */
+import { fanControlFindings } from "../diagnostics/fan-controls";
 import { diagnoseFan } from "../diagnostics/fan-diagnostics";
 import { formatNumber, roundTo, SQ_IN_PER_SQ_FT } from "../units/format";
 import { sectionGeometry } from "./attic-volume";
-import { providedNfa, type ProvidedNfa } from "./balance";
+import { meetsRequiredArea, providedNfa, type ProvidedNfa } from "./balance";
 import { fanIntakeNeededSqIn, recommendFanCfm, STEEP_PITCH_IN_12 } from "./fan-sizing";
 import { describeSectionArea, sectionAreaSqFt } from "./floor-area";
-import { sortFindings, ventilationFindings, type Finding } from "./findings";
-import { requiredNfa, type Requirement } from "./requirement";
+import { sortFindings, unventedFindings, ventilationFindings, type Finding } from "./findings";
+import { requiredNfa, unventedRequirement, type Requirement } from "./requirement";
+import { checkRafterBays, type RafterBayCheck } from "./rafter-bays";
+import { aboveMinimum, type Recommendation } from "./recommendations";
+import { checkUnventedAssembly, type UnventedCheck } from "./unvented";
 import { AtticInputSchema, type AtticInput } from "./schema";
+import { isPoweredKind } from "./vent-kinds";
 import { ventNfa } from "./vent-nfa";
 import { riseLookup, ventPosition } from "./vent-position";
 
@@ -52,10 +57,18 @@ export interface AtticAnalysis {
   /** Powered-fan sizing, or null when the attic has no powered fan. */
   fan: FanAnalysis | null;
   /**
-   * Meets the code minimum: passive NFA provided ≥ the required NFA (IRC R806.2) and the eave
+   * Meets the code minimum: passive NFA provided ≥ the exact required NFA (IRC R806.2; never rounded) and the eave
    * vents are not blocked by insulation (IRC R806.3).
    */
   compliant: boolean;
+  /** "unvented" for a sealed attic (IRC R806.5): no vent area is required or recommended. */
+  assembly: "vented" | "unvented";
+  /** The R806.5 conditions of an unvented attic, or null for a vented one. */
+  unvented: UnventedCheck | null;
+  /** Per-bay check of a space of enclosed rafter bays, or null. */
+  rafterBays: RafterBayCheck | null;
+  /** Above the minimum: common-practice recommendations with their sources, clearly not code. */
+  recommendations: Recommendation[];
   /** One plain sentence a homeowner can read. */
   summary: string;
   /** Critical first, then warnings, then notes. */
@@ -67,7 +80,7 @@ export interface AtticAnalysis {
  * throws the ZodError (use `tryAnalyzeAttic` for a result instead).
  *
  * @example
- * // TRADE-REFERENCES §8 E1: 1,500 sq ft at 1/150 → 10 sq ft = 1,440 sq in
+ * // SOURCES.md §8 E1: 1,500 sq ft at 1/150 → 10 sq ft = 1,440 sq in
  * const a = analyzeAttic({ codeBasis: "strict-150", climateZone: 4, ceilingVaporRetarder: "none", roofColor: "medium",
  *   sections: [{ kind: "area", areaSqFt: 1500 }], vents: [] });
  * a.requirement.totalSqIn // 1440
@@ -103,16 +116,19 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     label: vent.label,
   }));
   const provided = providedNfa(vents.map((v) => v.nfa));
-  const requirement = requiredNfa({
+  const isUnvented = attic.assembly === "unvented" && attic.unvented !== undefined;
+  const unvented = isUnvented ? checkUnventedAssembly(attic.unvented!, attic.climateZone, attic.moistureRegime, attic.ceilingVaporRetarder) : null;
+  const requirement = isUnvented ? unventedRequirement(attic.codeBasis) : requiredNfa({
     floorAreaSqFt,
     codeBasis: attic.codeBasis,
     climateZone: attic.climateZone,
     ceilingVaporRetarder: attic.ceilingVaporRetarder,
+    upperShareBase: attic.upperShareBase,
     vents,
   });
 
   let fan: FanAnalysis | null = null;
-  if (provided.poweredCfm > 0) {
+  if (provided.poweredCfm > 0 && !isUnvented) {
     const isSteep = attic.sections.some((s) => s.pitchIn12 !== undefined && s.pitchIn12 >= STEEP_PITCH_IN_12);
     const sizing = recommendFanCfm({
       floorAreaSqFt,
@@ -140,7 +156,11 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     };
   }
 
-  const findings = ventilationFindings({
+  const rafterBays =
+    attic.enclosedRafterBays && !isUnvented
+      ? checkRafterBays(attic.enclosedRafterBays, floorAreaSqFt, requirement.ratio, vents.map((v) => ({ vent: v.vent, nfa: v.nfa })))
+      : null;
+  const findings = (isUnvented ? unventedFindings : ventilationFindings)({
     floorAreaSqFt,
     vents: attic.vents,
     perVent: provided.perVent,
@@ -149,18 +169,57 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     fan,
     site,
     required300SqIn: (floorAreaSqFt * SQ_IN_PER_SQ_FT) / 300,
+    climateZone: attic.climateZone,
+    impossibleHeights: vents.filter((v) => v.position.isHeightImpossible).map((v) => ({ vent: v.vent, riseFt: v.position.riseFt ?? 0 })),
+    unvented,
   });
+  if (rafterBays && !rafterBays.isMet) {
+    const unvented = rafterBays.bayCount - Math.min(rafterBays.baysWithIntake, rafterBays.baysWithExhaust);
+    findings.push({
+      code: "rafter-bays-not-vented",
+      severity: "critical",
+      title: unvented > 0 ? "Some rafter bays are not cross-ventilated" : "Rafter bays short of vent area",
+      detail:
+        `${rafterBays.reasons.join(" ")} ` +
+        (unvented > 0
+          ? `Each bay is closed off from the next, so every bay needs its own intake at the eave and exhaust at the top (IRC R806.1); ${formatNumber(unvented)} of ${formatNumber(rafterBays.bayCount)} lack one or both. Continuous soffit and ridge vents across every bay are the usual fix.`
+          : `Each bay needs ${formatNumber(rafterBays.requiredPerBaySqIn)} sq in; the least-vented gets ${formatNumber(rafterBays.leastPerBaySqIn)} sq in.`),
+      ventIds: attic.vents.map((v) => v.id),
+    });
+  }
   for (const vent of attic.vents) {
     if (vent.diagnostics) findings.push(...diagnoseFan(vent.diagnostics, vent.id));
+    if (isPoweredKind(vent.kind)) findings.push(...fanControlFindings(vent, attic.climateZone));
   }
 
-  const meetsArea = provided.totalSqIn >= requirement.totalSqIn;
-  const compliant = meetsArea && site.soffitsBlocked !== true;
-  const summary = meetsArea
-    ? compliant
-      ? `Meets the code minimum: ${formatNumber(provided.totalSqIn)} sq in of vent area provided, ${formatNumber(requirement.totalSqIn)} sq in required at 1/${requirement.ratio}.`
-      : `Enough vent area on paper (${formatNumber(provided.totalSqIn)} of ${formatNumber(requirement.totalSqIn)} sq in at 1/${requirement.ratio}), but insulation blocks the soffit vents, so it does not meet the code (IRC R806.3).`
-    : `Below the code minimum: ${formatNumber(provided.totalSqIn)} sq in of vent area provided, ${formatNumber(requirement.totalSqIn)} sq in required at 1/${requirement.ratio}.`;
+  // "Not less than" (IRC R806.2): the exact figures, never rounded [SOURCES.md S1, S7].
+  const meetsArea = meetsRequiredArea(provided.exactTotalSqIn, requirement.exactSqIn);
+  let compliant: boolean;
+  let summary: string;
+  if (unvented) {
+    const openings = attic.vents.length;
+    compliant = unvented.isMet && openings === 0;
+    const open = unvented.conditions.filter((c) => c.status === "not-met").length;
+    const unknown = unvented.conditions.filter((c) => c.status === "unknown").length;
+    summary =
+      "Unvented (sealed) attic: under IRC R806.5 it needs no vent area, and none should be added. " +
+      (unvented.isMet
+        ? openings === 0
+          ? "The conditions recorded are met."
+          : "The conditions recorded are met, but vents or fans open it to the outside."
+        : `${open > 0 ? `${open} of its conditions ${open === 1 ? "is" : "are"} not met` : ""}${open > 0 && unknown > 0 ? " and " : ""}${unknown > 0 ? `${unknown} ${unknown === 1 ? "condition is" : "conditions are"} not recorded` : ""}.`);
+  } else {
+    compliant = meetsArea && site.soffitsBlocked !== true && (rafterBays === null || rafterBays.isMet);
+    // Enough digits that two different figures never print alike ("1,185.119 of 1,185.12").
+    const digits = Math.abs(provided.exactTotalSqIn - requirement.exactSqIn) < 0.01 ? 3 : 2;
+    const providedText = formatNumber(provided.exactTotalSqIn, { maxFractionDigits: digits });
+    const requiredText = formatNumber(requirement.exactSqIn, { maxFractionDigits: digits });
+    summary = meetsArea
+      ? compliant
+        ? `Meets the code minimum: ${providedText} sq in of vent area provided, ${requiredText} sq in required at 1/${requirement.ratio}.`
+        : `Enough vent area on paper (${providedText} of ${requiredText} sq in at 1/${requirement.ratio}), but insulation blocks the soffit vents, so it does not meet the code (IRC R806.3).`
+      : `Below the code minimum: ${providedText} sq in of vent area provided, ${requiredText} sq in required at 1/${requirement.ratio}.`;
+  }
 
   return {
     floorAreaSqFt,
@@ -170,6 +229,16 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     provided,
     fan,
     compliant,
+    assembly: isUnvented ? "unvented" : "vented",
+    rafterBays,
+    recommendations: aboveMinimum({
+      requiredExactSqIn: requirement.exactSqIn,
+      maxPitchIn12: attic.sections.reduce<number | null>((max, s) => (s.pitchIn12 === undefined ? max : Math.max(max ?? 0, s.pitchIn12)), null),
+      wholeHouseFanCfm: provided.wholeHouseFanCfm,
+      ceilingAirSealed: site.ceilingAirSealed,
+      isUnvented,
+    }),
+    unvented,
     summary,
     findings: sortFindings(findings),
   };

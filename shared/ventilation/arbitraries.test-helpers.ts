@@ -2,7 +2,7 @@
 import fc from "fast-check";
 import type { AtticInput, Section, Vent } from "./schema";
 import { CODE_BASES, LIMITS } from "./schema";
-import { POWERED_KINDS, VENT_KINDS } from "./vent-kinds";
+import { isMechanicalKind, VENT_KINDS } from "./vent-kinds";
 
 const pos = (max: number) => fc.double({ min: 0.01, max, noNaN: true, noDefaultInfinity: true });
 const opt = <T>(arb: fc.Arbitrary<T>) => fc.option(arb, { nil: undefined });
@@ -33,8 +33,9 @@ function clean<T extends object>(value: T): T {
   return Object.fromEntries(Object.entries(value).filter(([, v]) => v !== undefined)) as T;
 }
 
-const passiveKinds = VENT_KINDS.filter((k) => !POWERED_KINDS.has(k));
-const poweredKinds = VENT_KINDS.filter((k) => POWERED_KINDS.has(k));
+const passiveKinds = VENT_KINDS.filter((k) => !isMechanicalKind(k));
+/** Attic fans and whole-house fans: rated in cfm. */
+const poweredKinds = VENT_KINDS.filter((k) => isMechanicalKind(k));
 
 const placement = fc.record(
   {
@@ -51,16 +52,37 @@ const passiveSize = fc.oneof(
   pos(LIMITS.maxNfaSqInPerUnit).map((nfaSqInPerUnit) => ({ nfaSqInPerUnit })),
   fc.tuple(pos(LIMITS.maxVentLengthFt), pos(LIMITS.maxNfaSqInPerFt)).map(([lengthFt, nfaSqInPerFt]) => ({ lengthFt, nfaSqInPerFt })),
   fc
-    .tuple(pos(LIMITS.maxGrossSideIn), pos(LIMITS.maxGrossSideIn), fc.constantFrom("1/4" as const, "1/8" as const, "1/16" as const), fc.boolean())
-    .map(([grossWidthIn, grossHeightIn, mesh, louvers]) => ({ grossWidthIn, grossHeightIn, covering: { mesh, louvers } })),
+    .tuple(pos(LIMITS.maxGrossSideIn), pos(LIMITS.maxGrossSideIn), fc.constantFrom("1/4" as const, "1/8" as const, "1/16" as const), fc.boolean(), opt(fc.constantFrom("wood" as const, "metal" as const)))
+    .map(([grossWidthIn, grossHeightIn, mesh, louvers, louverMaterial]) => ({ grossWidthIn, grossHeightIn, covering: clean({ mesh, louvers, louverMaterial }) })),
+);
+
+const conditionArb = fc.oneof(
+  fc.constant({}),
+  fc.constantFrom({ condition: "open" as const }, { condition: "blocked" as const }, { condition: "painted-over" as const }, { condition: "damaged" as const }),
+  fc.double({ min: 0, max: 1, noNaN: true }).map((blockedShare) => ({ condition: "partly-blocked" as const, blockedShare })),
 );
 
 export const passiveVentArb = (id: string): fc.Arbitrary<Vent> =>
-  fc.tuple(fc.constantFrom(...passiveKinds), placement, passiveSize).map(([kind, p, size]) => ({ id, kind, ...clean(p), ...size }));
+  fc
+    .tuple(fc.constantFrom(...passiveKinds), placement, passiveSize, conditionArb, fc.nat())
+    .map(([kind, p, size, condition, n]) => {
+      const vent = { id, kind, ...clean(p), ...size, ...condition } as Vent;
+      // Now and then "k of quantity" blocked instead of a share.
+      if (vent.condition === "partly-blocked" && n % 2 === 0) {
+        delete vent.blockedShare;
+        vent.blockedQuantity = n % ((vent.quantity ?? 1) + 1);
+      }
+      return vent;
+    });
 
 const diagnosticsArb = fc.record(
   {
     isPowerVerifiedOff: fc.boolean(),
+    isLockedOut: fc.boolean(),
+    isTesterProven: fc.boolean(),
+    windingToGroundOhms: fc.oneof(fc.constant("open" as const), fc.double({ min: 0, max: 1e12, noNaN: true })),
+    hasCapacitor: fc.boolean(),
+    capacitor: fc.record({ ratedMicrofarads: fc.double({ min: 0.1, max: 1000, noNaN: true }), measuredMicrofarads: fc.double({ min: 0, max: 2000, noNaN: true }) }),
     windingResistanceOhms: fc.oneof(fc.constant("open" as const), fc.double({ min: 0, max: 1e12, noNaN: true })),
     thermostatTest: fc.record({
       switchedLegVoltsDialBelow: fc.double({ min: 0, max: 300, noNaN: true }),
@@ -85,7 +107,39 @@ export const ventsArb = (maxVents = 12): fc.Arbitrary<Vent[]> =>
         : fc.tuple(...isPoweredList.map((isPowered, i) => (isPowered ? poweredVentArb(`v${i}`) : passiveVentArb(`v${i}`)))),
     );
 
+const unventedArb = fc.record(
+  {
+    insulation: fc.constantFrom("air-impermeable-only" as const, "air-impermeable-and-air-permeable" as const, "rigid-above-deck-and-air-permeable" as const, "air-permeable-only" as const),
+    airImpermeableRValue: fc.double({ min: 0, max: 100, noNaN: true }),
+    foamIsClassII: fc.boolean(),
+    isInsideThermalEnvelope: fc.boolean(),
+    roofCovering: fc.constantFrom("asphalt-shingles" as const, "wood-shingles-or-shakes" as const, "tile-or-metal" as const, "other" as const),
+    hasVentedGapUnderShakes: fc.boolean(),
+  },
+  { requiredKeys: ["insulation"] },
+);
+
+/** Optional fields added after the first release: absent, as in older surveys, or any valid value. */
+const laterFields = fc.record(
+  {
+    upperShareBase: fc.constantFrom("required" as const, "provided" as const),
+    moistureRegime: fc.constantFrom("A" as const, "B" as const, "C" as const, null),
+    sealed: fc.tuple(fc.constant("unvented" as const), unventedArb),
+    enclosedRafterBays: fc.record({ bayCount: fc.integer({ min: 1, max: 500 }), baySpacingIn: fc.double({ min: 8, max: 96, noNaN: true }) }),
+  },
+  { requiredKeys: [] },
+);
+
 export const atticArb = (maxVents = 12): fc.Arbitrary<AtticInput> =>
+  fc.tuple(baseAtticArb(maxVents), laterFields).map(([base, later]) => ({
+    ...base,
+    ...(later.upperShareBase !== undefined ? { upperShareBase: later.upperShareBase } : {}),
+    ...(later.moistureRegime !== undefined ? { moistureRegime: later.moistureRegime } : {}),
+    ...(later.sealed !== undefined ? { assembly: later.sealed[0], unvented: later.sealed[1] } : {}),
+    ...(later.enclosedRafterBays !== undefined ? { enclosedRafterBays: later.enclosedRafterBays } : {}),
+  }));
+
+const baseAtticArb = (maxVents: number): fc.Arbitrary<AtticInput> =>
   fc.record({
     codeBasis: fc.constantFrom(...CODE_BASES),
     climateZone: fc.integer({ min: 1, max: 8 }),

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { sectionGeometry, sectionRiseFt } from "./attic-volume";
 
 describe("sectionGeometry", () => {
-  it("when a 30 × 40 ft gable is at 6:12, then rise = 15 × 6/12 = 7.5 ft and volume = ½ × 30 × 7.5 × 40 = 4,500 cu ft (TRADE-REFERENCES §8 E8)", () => {
+  it("when a 30 × 40 ft gable is at 6:12, then rise = 15 × 6/12 = 7.5 ft and volume = ½ × 30 × 7.5 × 40 = 4,500 cu ft (SOURCES.md §8 E8)", () => {
     const g = sectionGeometry({ kind: "rect", lengthFt: 40, widthFt: 30, roofForm: "gable", pitchIn12: 6 });
     expect(g).toMatchObject({ isKnown: true, riseFt: (30 / 2) * (6 / 12), volumeCuFt: 0.5 * 30 * 7.5 * 40 });
   });

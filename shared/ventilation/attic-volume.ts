@@ -1,6 +1,6 @@
 /**
  * Attic air volume and rise from roof form and pitch, for the air-change method of fan sizing
- * (HVI: at least 10 air changes per hour [TRADE-REFERENCES §3, SRC 6]) and for the 2009 rule's
+ * (HVI: at least 10 air changes per hour [SOURCES.md §3, S6]) and for the 2009 rule's
  * "3 ft above the eave vents" test.
  *
  * Geometry (plan rectangle L along the ridge × W across it, pitch p inches of rise per 12 in of run):
@@ -61,7 +61,7 @@ export function sectionRiseFt(section: SectionWithRoof): number | null {
  * Volume of one section's attic space, or why it can't be known.
  *
  * @example
- * // TRADE-REFERENCES §8 E8: 30 × 40 ft gable at 6:12 → rise 7.5 ft, ½ × 30 × 7.5 × 40 = 4,500 cu ft
+ * // SOURCES.md §8 E8: 30 × 40 ft gable at 6:12 → rise 7.5 ft, ½ × 30 × 7.5 × 40 = 4,500 cu ft
  * sectionGeometry({ kind: "rect", lengthFt: 40, widthFt: 30, roofForm: "gable", pitchIn12: 6 })
  * // { isKnown: true, riseFt: 7.5, volumeCuFt: 4500, ... }
  */

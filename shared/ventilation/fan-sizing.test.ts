@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { fanIntakeNeededSqIn, recommendFanCfm } from "./fan-sizing";
 
 describe("recommendFanCfm", () => {
-  it("when the attic is 1,800 sq ft, then 1,800 × 0.7 = 1,260 cfm (HVI attic ventilation guidance; TRADE-REFERENCES §8 E5)", () => {
+  it("when the attic is 1,800 sq ft, then 1,800 × 0.7 = 1,260 cfm (HVI attic ventilation guidance; SOURCES.md §8 E5)", () => {
     const s = recommendFanCfm({ floorAreaSqFt: 1800, volumeCuFt: null, isDark: false, isSteep: false });
     expect(s.areaMethodCfm).toBe(1260);
     expect(s.airChangeMethodCfm).toBeNull();
@@ -18,7 +18,7 @@ describe("recommendFanCfm", () => {
     [1000, 700, 805],
     [2000, 1400, 1610],
     [3000, 2100, 2415],
-  ])("when the attic is %d sq ft, then HVI's table gives %d / %d cfm (HVI table, TRADE-REFERENCES §3)", (area, plain, dark) => {
+  ])("when the attic is %d sq ft, then HVI's table gives %d / %d cfm (HVI table, SOURCES.md §3)", (area, plain, dark) => {
     expect(recommendFanCfm({ floorAreaSqFt: area, volumeCuFt: null, isDark: false, isSteep: false }).recommendedCfm).toBe(plain);
     expect(recommendFanCfm({ floorAreaSqFt: area, volumeCuFt: null, isDark: true, isSteep: false }).recommendedCfm).toBe(dark);
   });
@@ -31,7 +31,7 @@ describe("recommendFanCfm", () => {
     expect(s.reasons.join(" ")).toContain("4,500 cu ft × 10 ÷ 60 minutes = 750 cfm");
   });
 
-  it("when the mean attic height is above 4.2 ft, then the air-change figure wins (0.7 × 60 ÷ 10 = 4.2 ft, TRADE-REFERENCES §3)", () => {
+  it("when the mean attic height is above 4.2 ft, then the air-change figure wins (0.7 × 60 ÷ 10 = 4.2 ft, SOURCES.md §3)", () => {
     const s = recommendFanCfm({ floorAreaSqFt: 1000, volumeCuFt: 1000 * 5, isDark: false, isSteep: false });
     expect(s.recommendedCfm).toBe(Math.ceil((5000 * 10) / 60));
   });
@@ -46,7 +46,7 @@ describe("fanIntakeNeededSqIn", () => {
   it("when the fan is 1,449 cfm, then 1,449 ÷ 300 × 144 = 695.52 → 696 sq in (E6)", () => {
     expect(fanIntakeNeededSqIn(1449)).toBe(696);
   });
-  it("when the fan is 805 cfm, then HVI's example inlet is 386 sq in (805 ÷ 300 × 144 = 386.4) (HVI, TRADE-REFERENCES §3)", () => {
+  it("when the fan is 805 cfm, then HVI's example inlet is 386 sq in (805 ÷ 300 × 144 = 386.4) (HVI, SOURCES.md §3)", () => {
     expect(fanIntakeNeededSqIn(805)).toBe(387); // rounded up from 386.4
   });
 });

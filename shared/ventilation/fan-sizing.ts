@@ -1,11 +1,11 @@
 /**
- * Powered attic fan sizing. Guidance only — the IRC sets no cfm requirement for attic fans [MEM].
+ * Powered attic fan sizing. Guidance only — the IRC sets no cfm requirement for attic fans [from memory].
  * - Area method: 0.7 cfm per sq ft of attic floor, 15 % more for a dark roof or a steep roof
- *   (Home Ventilating Institute attic ventilation guidance) [TRADE-REFERENCES §3, SRC 6].
- * - Air-change method: at least 10 air changes per hour of the attic volume (HVI) [SRC 6].
- * - Intake: at least 1 sq ft of net free inlet area per 300 cfm of fan (HVI) [SRC 6].
+ *   (Home Ventilating Institute attic ventilation guidance) [SOURCES.md §3, S6].
+ * - Air-change method: at least 10 air changes per hour of the attic volume (HVI) [S6].
+ * - Intake: at least 1 sq ft of net free inlet area per 300 cfm of fan (HVI) [S6].
  * Eavesight recommends the larger of the two methods, the conservative choice
- * [TRADE-REFERENCES §8 E8].
+ * [SOURCES.md §8 E8].
  */
 import { ceilWhole, formatNumber, SQ_IN_PER_SQ_FT } from "../units/format";
 
@@ -15,7 +15,7 @@ export const AIR_CHANGES_PER_HOUR = 10; // HVI
 export const CFM_PER_SQ_FT_OF_INTAKE = 300; // HVI: 1 sq ft of inlet per 300 cfm
 /**
  * "Steep" for the +15 %: pitch 7/12 or more. HVI does not define steep; 7/12 is where the JLC
- * field guide's pitch adjustment for passive vents begins [SRC 11]. Common practice, not a rule.
+ * field guide's pitch adjustment for passive vents begins [S11]. Common practice, not a rule.
  */
 export const STEEP_PITCH_IN_12 = 7;
 /**
@@ -41,7 +41,7 @@ export interface FanSizing {
  * Intake NFA a fan needs: cfm ÷ 300 sq ft, in sq in rounded up.
  *
  * @example
- * // TRADE-REFERENCES §8 E6: 1,200 cfm ÷ 300 = 4 sq ft = 576 sq in
+ * // SOURCES.md §8 E6: 1,200 cfm ÷ 300 = 4 sq ft = 576 sq in
  * fanIntakeNeededSqIn(1200) // 576
  */
 export function fanIntakeNeededSqIn(airflowCfm: number): number {
@@ -52,7 +52,7 @@ export function fanIntakeNeededSqIn(airflowCfm: number): number {
  * Recommended fan airflow for an attic.
  *
  * @example
- * // TRADE-REFERENCES §8 E5: 1,800 sq ft, dark roof → 1,800 × 0.7 = 1,260 cfm; × 1.15 = 1,449 cfm
+ * // SOURCES.md §8 E5: 1,800 sq ft, dark roof → 1,800 × 0.7 = 1,260 cfm; × 1.15 = 1,449 cfm
  * recommendFanCfm({ floorAreaSqFt: 1800, volumeCuFt: null, isDark: true, isSteep: false }).recommendedCfm // 1449
  */
 export function recommendFanCfm(input: {

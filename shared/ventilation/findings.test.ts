@@ -27,19 +27,19 @@ describe("ventilation findings", () => {
     expect(codes(a.findings)).not.toContain("no-exhaust");
   });
 
-  it("when exhaust exceeds intake, then exhaust-exceeds-intake is a warning [BC Housing SRC 18; IRC 2012+ 50 % cap]", () => {
+  it("when exhaust exceeds intake, then exhaust-exceeds-intake is a warning [BC Housing S18; IRC 2012+ 50 % cap]", () => {
     const a = analyzeAttic(attic({ vents: [soffit("s", 600), ridge("r", 900)] }));
     expect(find(a.findings, "exhaust-exceeds-intake")?.severity).toBe("warning");
   });
 
-  it("when a powered fan shares the attic with a ridge vent, then powered-with-passive-exhaust is critical and names both (common practice, SRC 19)", () => {
+  it("when a powered fan shares the attic with a ridge vent, then powered-with-passive-exhaust is critical and names both (common practice, S19)", () => {
     const a = analyzeAttic(attic({ vents: [soffit("s", 1500), ridge("r", 500), roofFan("f", 1000)] }));
     const f = find(a.findings, "powered-with-passive-exhaust");
     expect(f?.severity).toBe("critical");
     expect(f?.ventIds).toEqual(["f", "r"]);
   });
 
-  it("when a ridge vent and box vents are mixed, then mixed-exhaust is a warning (common practice, SRC 19)", () => {
+  it("when a ridge vent and box vents are mixed, then mixed-exhaust is a warning (common practice, S19)", () => {
     const a = analyzeAttic(attic({ vents: [soffit("s", 1500), ridge("r", 500), box("b", 200)] }));
     expect(find(a.findings, "mixed-exhaust")?.ventIds).toEqual(["r", "b"]);
   });
@@ -64,7 +64,7 @@ describe("ventilation findings", () => {
     expect(codes(analyzeAttic(attic({ vents: [soffit("s", 2000), roofFan("f", 1600)] })).findings)).toContain("fan-oversized");
   });
 
-  it("when a powered fan is in a house with an atmospheric appliance, then backdraft-risk is critical and asks for a combustion safety test [TRADE-REFERENCES §5.1: SRC 13 field study, SRC 14]", () => {
+  it("when a powered fan is in a house with an atmospheric appliance, then backdraft-risk is critical and asks for a combustion safety test [SOURCES.md §5.1: S13 field study, S14]", () => {
     const a = analyzeAttic(attic({ vents: [soffit("s", 2000), roofFan("f", 1000)], site: { atmosphericCombustionAppliance: true } }));
     const f = find(a.findings, "backdraft-risk");
     expect(f?.severity).toBe("critical");

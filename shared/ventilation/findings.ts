@@ -4,16 +4,19 @@
  */
 import { ATTIC_SAFETY_CAUTION, COMBUSTION_SAFETY_CAUTION, FAN_SAFETY_CAUTION, ROOF_SAFETY_CAUTION } from "../diagnostics/cautions";
 import { formatNumber, formatPercent } from "../units/format";
-import type { ProvidedNfa } from "./balance";
+import { meetsRequiredArea, type ProvidedNfa } from "./balance";
 import { FAN_OVERSIZED_ABOVE, FAN_UNDERSIZED_BELOW } from "./fan-sizing";
-import type { Requirement } from "./requirement";
+import { codeBasisRule, type Requirement } from "./requirement";
 import type { Site, Vent } from "./schema";
 import { EAVE_KINDS, VENT_KIND_LABELS, ventListPhrase, type VentKind } from "./vent-kinds";
+import type { UnventedCheck } from "./unvented";
+import { wholeHouseFanFindings } from "./whole-house-fan";
 import type { VentNfa } from "./vent-nfa";
 
 export const FINDING_CODES = [
   // ventilation (DESIGN.md §4)
   "below-minimum",
+  "meets-minimum-narrowly",
   "no-intake",
   "no-exhaust",
   "exhaust-exceeds-intake",
@@ -34,11 +37,34 @@ export const FINDING_CODES = [
   "appliance-exhaust-into-attic",
   "powered-fan-depressurization",
   "upper-vent-position-unknown",
+  "upper-share-reading",
+  "vent-height-impossible",
+  // enclosed rafter bays (IRC R806.1)
+  "rafter-bays-not-vented",
+  // vent condition
+  "vents-blocked",
+  "vent-damaged",
+  // whole-house fans
+  "whole-house-fan-outlet-short",
+  "whole-house-fan-operation",
+  // unvented attics (IRC R806.5)
+  "unvented-assembly",
+  "unvented-condition-not-met",
+  "unvented-condition-unknown",
+  "vents-in-unvented-attic",
   "vent-location-unusual",
   // fan diagnostics (shared/diagnostics)
   "fan-power-not-verified",
   "fan-power-verified",
+  "fan-lockout-missing",
+  "fan-tester-not-proven",
+  "fan-safety-steps-not-recorded",
   "fan-winding-open",
+  "fan-winding-shorted",
+  "fan-winding-grounded",
+  "fan-ground-ok",
+  "fan-capacitor-failed",
+  "fan-capacitor-ok",
   "fan-winding-suspect",
   "fan-winding-ok",
   "fan-bearings-seized",
@@ -46,6 +72,10 @@ export const FINDING_CODES = [
   "fan-thermostat-failed",
   "fan-thermostat-inconclusive",
   "fan-thermostat-ok",
+  "fan-control-cold-climate",
+  "fan-set-point-unusual",
+  "fan-override-untested",
+  "fan-override-failed",
 ] as const;
 
 export type FindingCode = (typeof FINDING_CODES)[number];
@@ -88,35 +118,54 @@ export interface FindingContext {
   fan: FanSummary | null;
   site: Site;
   required300SqIn: number;
+  /** IECC climate zone 1–8 (cold-climate advice). */
+  climateZone?: number;
+  /** The R806.5 check of an unvented attic; null or absent for a vented one. */
+  unvented?: UnventedCheck | null;
+  /** Vents whose recorded height or drop is above the highest rise of the space. */
+  impossibleHeights?: ReadonlyArray<{ vent: Vent; riseFt: number }>;
 }
 
 const PASSIVE_EXHAUST_KINDS: ReadonlySet<VentKind> = new Set<VentKind>(["ridge", "box", "turbine", "off-ridge", "cupola", "gable-louver"]);
 
 const kindLabel = (kind: VentKind) => VENT_KIND_LABELS[kind];
 const plural = (n: number, one: string, many: string) => (n === 1 ? one : many);
+const capitalize = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
 
 /** Every ventilation finding for one attic space (fan diagnostics are added by the caller). */
 export function ventilationFindings(ctx: FindingContext): Finding[] {
   const findings: Finding[] = [];
   const { provided, requirement, site } = ctx;
-  const passive = ctx.perVent.filter((v) => !v.isPowered);
+  const passive = ctx.perVent.filter((v) => !v.isPowered && !v.isWholeHouseFan);
   const powered = ctx.perVent.filter((v) => v.isPowered);
   const passiveUpper = passive.filter((v) => v.location === "upper" && v.nfaSqIn > 0);
   const passiveLower = passive.filter((v) => v.location === "lower" && v.nfaSqIn > 0);
   const ids = (items: ReadonlyArray<VentNfa>) => items.map((v) => v.ventId);
 
-  // IRC R806.2 minimum.
-  if (provided.totalSqIn < requirement.totalSqIn) {
-    const shortSqIn = requirement.totalSqIn - provided.totalSqIn;
+  // IRC R806.2 minimum: "not less than" — exact figures, never rounded [SOURCES.md S1, S7].
+  const meetsArea = meetsRequiredArea(provided.exactTotalSqIn, requirement.exactSqIn);
+  if (!meetsArea) {
+    const shortSqIn = requirement.exactSqIn - provided.exactTotalSqIn;
     findings.push({
       code: "below-minimum",
       severity: "critical",
       title: "Less vent area than the code minimum",
       detail:
-        `The attic has ${formatNumber(provided.totalSqIn)} sq in of net free vent area; at 1/${requirement.ratio} it needs ${formatNumber(requirement.totalSqIn)} sq in, ` +
-        `${formatNumber(shortSqIn)} sq in short. Add vent area — intake at the eaves first, then exhaust high on the roof — keeping intake at least equal to exhaust.`,
+        `The attic has ${formatNumber(provided.exactTotalSqIn)} sq in of net free vent area; at 1/${requirement.ratio} it needs ${formatNumber(requirement.exactSqIn)} sq in, ` +
+        `${formatNumber(shortSqIn, { maxFractionDigits: shortSqIn < 1 ? 3 : 2 })} sq in short. Add vent area — intake at the eaves first, then exhaust high on the roof — keeping intake at least equal to exhaust.`,
       ventIds: ids(passive),
       caution: ROOF_SAFETY_CAUTION,
+    });
+  } else if (provided.exactTotalSqIn < requirement.totalSqIn) {
+    // Meets the exact figure but not the whole number a buyer rounds up to: say so plainly.
+    findings.push({
+      code: "meets-minimum-narrowly",
+      severity: "info",
+      title: "Meets the minimum by less than 1 sq in",
+      detail:
+        `The ${formatNumber(provided.exactTotalSqIn)} sq in provided is not less than the exact ${formatNumber(requirement.exactSqIn)} sq in the code asks for at 1/${requirement.ratio}, so it meets the minimum. ` +
+        `Figures shown and bought are rounded up to ${formatNumber(requirement.totalSqIn)} sq in; any vent that closes up (paint, insulation, a nest) would put this attic below the minimum.`,
+      ventIds: [],
     });
   }
 
@@ -155,7 +204,7 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
     });
   }
 
-  // Short-circuiting [PRACTICE; TRADE-REFERENCES §5.4, SRC 19].
+  // Short-circuiting [PRACTICE; SOURCES.md §5.4, S19].
   const highOpenings = passive.filter((v) => v.location === "upper" && PASSIVE_EXHAUST_KINDS.has(v.kind));
   if (powered.length > 0 && highOpenings.length > 0) {
     findings.push({
@@ -202,7 +251,7 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
     });
   }
 
-  // Powered fans [HVI, SRC 6; cautions TRADE-REFERENCES §5].
+  // Powered fans [HVI, S6; cautions SOURCES.md §5].
   if (ctx.fan && powered.length > 0) {
     const fan = ctx.fan;
     if (fan.intakeProvidedSqIn < fan.intakeNeededSqIn) {
@@ -281,8 +330,8 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
   }
 
   // Exception and upper-vent position (IRC R806.2, per edition).
-  if (requirement.exception.isAvailable && requirement.ratio === 150 && provided.totalSqIn < requirement.totalSqIn) {
-    const wouldPass = provided.totalSqIn >= Math.ceil(ctx.required300SqIn - 1e-6);
+  if (requirement.exception.isAvailable && requirement.ratio === 150 && !meetsArea) {
+    const wouldPass = meetsRequiredArea(provided.exactTotalSqIn, ctx.required300SqIn);
     const failed = requirement.exception.conditions.filter((c) => c.status === "not-met").map((c) => c.reason);
     findings.push({
       code: "exception-not-met",
@@ -290,14 +339,40 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
       title: "The 1/300 exception does not apply",
       detail:
         (wouldPass
-          ? `The ${formatNumber(provided.totalSqIn)} sq in provided would meet 1/300 (${formatNumber(Math.ceil(ctx.required300SqIn - 1e-6))} sq in), but the exception's conditions are not met, so 1/150 applies. `
+          ? `The ${formatNumber(provided.totalSqIn)} sq in provided would meet 1/300 (${formatNumber(ctx.required300SqIn)} sq in), but the exception's conditions are not met, so 1/150 applies. `
           : "Even the 1/300 route would need more vent area than is provided. ") +
         `What falls short: ${failed.join(" ")} To use 1/300, place 40–50 % of the vent area (50–80 % under IRC 2009) high near the ridge and the balance at the eaves, or meet the vapor-retarder condition where it applies.`,
       ventIds: [],
     });
   }
+  if (requirement.otherReading !== null) {
+    const other = requirement.otherReading;
+    const chosenIsLiteral = requirement.upperShareBase === "required";
+    findings.push({
+      code: "upper-share-reading",
+      severity: "info",
+      title: chosenIsLiteral ? "Another reading of the 40–50 % rule" : "This company reads the 40–50 % rule locally",
+      detail: chosenIsLiteral
+        ? `The code text takes the upper-vent share as a percentage of the required area, and that is what Eavesight checks. Your building department may read it as a share of the vent area provided; under that reading the 1/300 route ${other.wouldBeMet ? "would be met" : "would not be met"}. ${other.reason} Ask the building department which reading it uses.`
+        : `This company's setting takes the upper-vent share as a percentage of the vent area provided. Under the literal text (a percentage of the required area) the 1/300 route ${other.wouldBeMet ? "would be met" : "would not be met"}. ${other.reason}`,
+      ventIds: [],
+    });
+  }
+  for (const { vent, riseFt } of ctx.impossibleHeights ?? []) {
+    const recorded =
+      vent.heightAboveEaveFt !== undefined && vent.heightAboveEaveFt > riseFt
+        ? `recorded ${formatNumber(vent.heightAboveEaveFt)} ft above the eaves`
+        : `recorded ${formatNumber(vent.dropBelowRidgeFt ?? 0)} ft below the ridge`;
+    findings.push({
+      code: "vent-height-impossible",
+      severity: "warning",
+      title: "A vent's recorded height can't be right",
+      detail: `${capitalize(ventListPhrase([vent]))} is ${recorded}, but the highest point of this space is only ${formatNumber(riseFt)} ft above the eaves (from the roof pitch and span). Check the measurement or the pitch; until then the vent is not counted as an upper vent for the 1/300 route.`,
+      ventIds: [vent.id],
+    });
+  }
   if (requirement.tooLowUpperVentIds.length > 0) {
-    const isIrc2009 = requirement.codeBasis === "irc-2009";
+    const isIrc2009 = codeBasisRule(requirement.codeBasis) === "irc-2009";
     findings.push({
       code: "upper-vent-too-low",
       severity: requirement.exception.isMet ? "info" : "warning",
@@ -321,7 +396,7 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
     });
   }
 
-  // Insulation at the eaves: IRC R806.3 (1 in air space) [SRC 1, SRC 2]; baffles per NREL SWS [SRC 9].
+  // Insulation at the eaves: IRC R806.3 (1 in air space) [S1, S2]; baffles per NREL SWS [S9].
   const eaveVents = passiveLower.filter((v) => EAVE_KINDS.has(v.kind));
   if (site.soffitsBlocked === true) {
     findings.push({
@@ -335,6 +410,38 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
       caution: ATTIC_SAFETY_CAUTION,
     });
   }
+  // Vent condition: what is blocked counts for nothing; the finding says how much area is lost.
+  const blockedVents = passive.filter((v) => v.openShare < 1);
+  if (blockedVents.length > 0) {
+    const lostSqIn = blockedVents.reduce((acc, v) => acc + (v.fullNfaSqIn - v.nfaSqIn), 0);
+    const parts = blockedVents.map((v) => `${capitalize(ventListPhrase([v]))}: ${v.explanation.split("; ").slice(-1)[0]}`);
+    const byInsulation = ctx.vents.some((v) => blockedVents.some((b) => b.ventId === v.id) && v.blockedBy === "insulation");
+    findings.push({
+      code: "vents-blocked",
+      severity: "warning",
+      title: "Some vents are blocked",
+      detail:
+        `${parts.join(". ")}. Blocked openings pass no air, so ${formatNumber(lostSqIn)} sq in of vent area is not counted. ` +
+        (byInsulation
+          ? "Pull the insulation back from the vents and fit baffles so it can't slide back (IRC R806.3 asks for at least 1 in of air space at the eaves)."
+          : "Clear them (paint can usually be cut out of the slots; replace a vent that can't be opened)."),
+      ventIds: blockedVents.map((v) => v.ventId),
+      caution: ATTIC_SAFETY_CAUTION,
+    });
+  }
+  const damaged = ctx.vents.filter((v) => v.condition === "damaged");
+  if (damaged.length > 0) {
+    findings.push({
+      code: "vent-damaged",
+      severity: "warning",
+      title: "Damaged vents",
+      detail:
+        `${capitalize(ventListPhrase(damaged))} ${damaged.length === 1 ? "is" : "are"} damaged. A broken vent or torn screen lets rain, snow, birds and insects in; vent openings must keep them out (IRC R806.1: openings 1/16 to 1/4 in). Repair or replace ${damaged.length === 1 ? "it" : "them"}.`,
+      ventIds: damaged.map((v) => v.id),
+      caution: ROOF_SAFETY_CAUTION,
+    });
+  }
+
   if (site.bafflesPresent === false && eaveVents.length > 0 && site.soffitsBlocked !== true) {
     findings.push({
       code: "baffles-missing",
@@ -368,6 +475,16 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
     });
   }
 
+  findings.push(
+    ...wholeHouseFanFindings({
+      wholeHouseFanCfm: provided.wholeHouseFanCfm,
+      fanIds: ctx.perVent.filter((v) => v.isWholeHouseFan).map((v) => v.ventId),
+      atticNfaSqIn: provided.exactTotalSqIn,
+      hasAtmosphericAppliance: site.atmosphericCombustionAppliance,
+      climateZone: ctx.climateZone ?? 4,
+    }),
+  );
+
   const oddLocation = passive.filter((v) => (EAVE_KINDS.has(v.kind) && v.location === "upper") || ((v.kind === "ridge" || v.kind === "off-ridge" || v.kind === "cupola" || v.kind === "turbine") && v.location === "lower"));
   if (oddLocation.length > 0) {
     findings.push({
@@ -379,4 +496,55 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
     });
   }
   return findings;
+}
+
+/** Site findings that hold whatever the assembly (moisture sources, fans and combustion safety). */
+const ASSEMBLY_NEUTRAL_CODES: ReadonlySet<FindingCode> = new Set<FindingCode>(["bath-fan-into-attic", "appliance-exhaust-into-attic", "backdraft-risk", "powered-fan-depressurization", "whole-house-fan-operation"]);
+
+/**
+ * Findings for an unvented (sealed) attic, IRC R806.5 [SOURCES.md S7, S25]. Never "add vents": the
+ * R806.5 conditions are checked instead, vents already open to the outside are flagged, and the
+ * moisture and combustion findings that hold for any attic are kept.
+ */
+export function unventedFindings(ctx: FindingContext): Finding[] {
+  const check = ctx.unvented;
+  const findings: Finding[] = [];
+  findings.push({
+    code: "unvented-assembly",
+    severity: "info",
+    title: "Sealed (unvented) attic: no vents needed",
+    detail:
+      "The insulation is at the roof line, so this attic is meant to be sealed, not vented (IRC R806.5). It needs no vent area, and vents must not be added: outdoor air let into it would reach the cool side of the insulation and can condense there.",
+    ventIds: [],
+  });
+  for (const condition of check?.conditions ?? []) {
+    if (condition.status === "not-met") {
+      findings.push({
+        code: "unvented-condition-not-met",
+        severity: "warning",
+        title: "A sealed-attic condition is not met",
+        detail: `${condition.reason} The fix is to the insulation or air barrier, not more vents: have the insulation contractor and the building department confirm it.`,
+        ventIds: [],
+        caution: ATTIC_SAFETY_CAUTION,
+      });
+    } else if (condition.status === "unknown") {
+      findings.push({ code: "unvented-condition-unknown", severity: "info", title: "A sealed-attic condition was not recorded", detail: `${condition.reason} Record it so the check can be completed.`, ventIds: [] });
+    }
+  }
+  const openings = ctx.vents;
+  if (openings.length > 0) {
+    findings.push({
+      code: "vents-in-unvented-attic",
+      severity: "warning",
+      title: "Vents or fans open a sealed attic to the outside",
+      detail: `${capitalize(ventListPhrase(openings))} ${openings.length === 1 ? "opens" : "open"} this sealed attic to outdoor air, which works against the insulation at the roof line. Don't add more. Whether to close ${openings.length === 1 ? "it" : "them"} off is a decision for the insulation contractor and the building department; a fan here pulls conditioned air out of the house.`,
+      ventIds: openings.map((v) => v.id),
+      caution: ROOF_SAFETY_CAUTION,
+    });
+  }
+  // Combustion safety holds for a fan in any attic; sizing figures are not used by the neutral codes.
+  const installedCfm = ctx.perVent.reduce((acc, v) => acc + (v.isPowered ? v.airflowCfm : 0), 0);
+  const fan = ctx.fan ?? (installedCfm > 0 ? { installedCfm, recommendedCfm: installedCfm, intakeNeededSqIn: 0, intakeProvidedSqIn: 0 } : null);
+  const neutral = ventilationFindings({ ...ctx, fan, unvented: null }).filter((f) => ASSEMBLY_NEUTRAL_CODES.has(f.code));
+  return [...findings, ...neutral];
 }

@@ -4,7 +4,7 @@ import { describe, expect, it } from "vitest";
 import { polygonProblem, sectionAreaSqFt, shoelaceAreaSqFt, type PointFt } from "./floor-area";
 
 describe("shoelaceAreaSqFt", () => {
-  it("when the outline is TRADE-REFERENCES §8 E4's L (30 × 40 plus 12 × 20), then the area is 1,200 + 240 = 1,440 sq ft", () => {
+  it("when the outline is SOURCES.md §8 E4's L (30 × 40 plus 12 × 20), then the area is 1,200 + 240 = 1,440 sq ft", () => {
     // The main block 40 × 30 with a 12 × 20 wing on one side.
     const lShape: PointFt[] = [[0, 0], [40, 0], [40, 30], [12, 30], [12, 50], [0, 50]];
     expect(shoelaceAreaSqFt(lShape)).toBe(40 * 30 + 12 * 20);

@@ -1,6 +1,6 @@
 /**
  * Attic floor area in plan view — the "area of the vented space" that IRC R806.2 divides by 150
- * or 300 [TRADE-REFERENCES §1]. A section is a rectangle, a polygon outline, or an area the
+ * or 300 [SOURCES.md §1]. A section is a rectangle, a polygon outline, or an area the
  * estimator entered directly.
  */
 

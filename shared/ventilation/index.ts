@@ -19,8 +19,13 @@ export {
   CODE_BASES,
   LIMITS,
 } from "./schema";
-export type { AtticInput, CodeBasis, RoofColor, Section, Site, VaporRetarder, Vent, VentLocation } from "./schema";
-export { VENT_KINDS, VENT_KIND_LABELS, POWERED_KINDS, EAVE_KINDS, AT_RIDGE_KINDS, isPoweredKind, ventDisplayName, ventListPhrase } from "./vent-kinds";
+export type { AtticInput, CodeBasis, RoofColor, Section, Site, VaporRetarder, Vent, VentLocation, UpperShareBase, MoistureRegime, UnventedAssembly } from "./schema";
+export { UpperShareBaseSchema, MoistureRegimeSchema, AtticAssemblySchema, UnventedAssemblySchema, LouverMaterialSchema } from "./schema";
+export { checkUnventedAssembly, minCondensationControlR } from "./unvented";
+export type { UnventedCheck, UnventedCondition } from "./unvented";
+export { wholeHouseFanOutletSqIn, WHOLE_HOUSE_FAN_CFM_PER_SQ_FT_OF_OUTLET, WHOLE_HOUSE_FAN_RECOMMENDED_CFM_PER_SQ_FT } from "./whole-house-fan";
+export { meetsRequiredArea } from "./balance";
+export { VENT_KINDS, VENT_KIND_LABELS, POWERED_KINDS, EAVE_KINDS, AT_RIDGE_KINDS, isPoweredKind, isWholeHouseFanKind, isMechanicalKind, ventDisplayName, ventListPhrase } from "./vent-kinds";
 export type { VentKind } from "./vent-kinds";
 export { FINDING_CODES, sortFindings } from "./findings";
 export type { Finding, FindingCode, Severity } from "./findings";
@@ -56,3 +61,5 @@ export {
 } from "../diagnostics/cautions";
 export { FanDiagnosticsSchema } from "../diagnostics/schema";
 export type { FanDiagnostics } from "../diagnostics/schema";
+export { aboveMinimum } from "./recommendations";
+export type { Recommendation } from "./recommendations";

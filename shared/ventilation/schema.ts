@@ -5,17 +5,31 @@
 import { z } from "zod";
 import { FanDiagnosticsSchema } from "../diagnostics/schema";
 import { polygonProblem, shoelaceAreaSqFt } from "./floor-area";
-import { isPoweredKind, VENT_KINDS } from "./vent-kinds";
+import { isMechanicalKind, VENT_KINDS } from "./vent-kinds";
 
-export const CODE_BASES = ["irc-2018", "irc-2012", "irc-2009", "strict-150"] as const;
+/**
+ * Code editions a project can name. 2021 and 2024 are named explicitly and share the 2018 text's
+ * rule (`codeBasisRule`); 2015 shares the 2012 text's. Older values stay valid for stored projects.
+ */
+export const CODE_BASES = ["irc-2024", "irc-2021", "irc-2018", "irc-2012", "irc-2009", "strict-150"] as const;
 export const CodeBasisSchema = z.enum(CODE_BASES);
 export const VaporRetarderSchema = z.enum(["none", "class-I", "class-II", "class-III"]);
 export const RoofColorSchema = z.enum(["light", "medium", "dark"]);
 export const RoofFormSchema = z.enum(["gable", "hip", "shed"]);
 export const VentKindSchema = z.enum(VENT_KINDS);
+/**
+ * Which area the 1/300 route's 40–50 % (2009: 50–80 %) upper-vent share is taken of: "required"
+ * is the literal text [SOURCES.md S4]; "provided" is a local reading a company may choose.
+ */
+export const UpperShareBaseSchema = z.enum(["required", "provided"]);
 export const VentLocationSchema = z.enum(["upper", "lower"]);
 export const MeshSizeSchema = z.enum(["1/4", "1/8", "1/16"]);
-export const CoveringSchema = z.object({ mesh: MeshSizeSchema, louvers: z.boolean() });
+/** What the estimator found: open, partly blocked (with how much), blocked, painted over, damaged. */
+export const VentConditionSchema = z.enum(["open", "partly-blocked", "blocked", "painted-over", "damaged"]);
+export const BlockedBySchema = z.enum(["insulation", "paint", "debris", "nest", "other"]);
+export const LouverMaterialSchema = z.enum(["wood", "metal"]);
+/** louverMaterial is optional so surveys stored before it existed stay valid (DEVELOPERS.md decision 8). */
+export const CoveringSchema = z.object({ mesh: MeshSizeSchema, louvers: z.boolean(), louverMaterial: LouverMaterialSchema.optional() });
 
 /** Limits: generous for any house, small enough that sums stay finite. */
 export const LIMITS = {
@@ -117,10 +131,33 @@ export const VentSchema = z
     /** A gable fan: is it sealed to its opening (shroud or baffle) so it can't recirculate attic air? */
     sealedToOpening: z.boolean().optional(),
     diagnostics: FanDiagnosticsSchema.optional(),
+    /** Condition found on site; open when absent (older surveys). */
+    condition: VentConditionSchema.optional(),
+    /** Partly blocked: how many of the `quantity` units are blocked ("4 of 10 soffit vents"). */
+    blockedQuantity: z.number().int("Blocked count must be a whole number.").min(0).max(LIMITS.maxQuantity).optional(),
+    /** Partly blocked: the share of the vent's area that is blocked, 0–1 (e.g. half a continuous soffit). */
+    blockedShare: z.number().min(0, "Blocked share is 0–100 %.").max(1, "Blocked share is 0–100 %.").optional(),
+    blockedBy: BlockedBySchema.optional(),
   })
   .superRefine((vent, ctx) => {
+    if (vent.condition === "partly-blocked") {
+      if (vent.blockedQuantity === undefined && vent.blockedShare === undefined) {
+        ctx.addIssue({ code: "custom", path: ["blockedQuantity"], message: "Say how many are blocked (e.g. 4 of 10) or what share of the vent is blocked." });
+      }
+      if (vent.blockedQuantity !== undefined && vent.blockedShare !== undefined) {
+        ctx.addIssue({ code: "custom", path: ["blockedShare"], message: "Give either how many are blocked or the share blocked, not both." });
+      }
+      if (vent.blockedQuantity !== undefined && vent.blockedQuantity > (vent.quantity ?? 1)) {
+        ctx.addIssue({ code: "custom", path: ["blockedQuantity"], message: `At most ${vent.quantity ?? 1} can be blocked (the quantity recorded).` });
+      }
+    } else if (vent.blockedQuantity !== undefined || vent.blockedShare !== undefined) {
+      ctx.addIssue({ code: "custom", path: ["condition"], message: "A blocked count or share goes with the condition \"partly blocked\"." });
+    }
+    if (isMechanicalKind(vent.kind) && vent.condition !== undefined && vent.condition !== "open" && vent.condition !== "damaged") {
+      ctx.addIssue({ code: "custom", path: ["condition"], message: "A fan is recorded as open or damaged; check it with the fan checks." });
+    }
     const nfaFields = ["nfaSqIn", "nfaSqInPerUnit", "lengthFt", "nfaSqInPerFt", "grossWidthIn", "grossHeightIn", "covering"] as const;
-    if (isPoweredKind(vent.kind)) {
+    if (isMechanicalKind(vent.kind)) {
       if (vent.cfm === undefined) {
         ctx.addIssue({ code: "custom", path: ["cfm"], message: "A powered fan needs its rated airflow in cfm." });
       }
@@ -165,6 +202,28 @@ export const VentSchema = z
     }
   });
 
+/** IECC moisture regime: A moist, B dry, C marine; zones 7 and 8 carry none [SOURCES.md S20, S21]. */
+export const MoistureRegimeSchema = z.enum(["A", "B", "C"]);
+/** A space of enclosed rafter bays: how many bays, and the rafter spacing. */
+export const EnclosedRafterBaysSchema = z.object({
+  bayCount: z.number().int("Bays are counted in whole numbers.").min(1, "At least one bay.").max(500),
+  baySpacingIn: z.number().min(8, "Rafter spacing is at least 8 in.").max(96, "Rafter spacing is at most 96 in."),
+});
+export const AtticAssemblySchema = z.enum(["vented", "unvented"]);
+/** How an unvented (sealed) roof assembly is built — what IRC R806.5 checks [SOURCES.md S7, S25]. */
+export const UnventedAssemblySchema = z.object({
+  insulation: z.enum(["air-impermeable-only", "air-impermeable-and-air-permeable", "rigid-above-deck-and-air-permeable", "air-permeable-only"]),
+  /** R-value of the spray foam against the deck, or of the rigid board above it. */
+  airImpermeableRValue: z.number().min(0).max(100).optional(),
+  /** The foam is itself a Class II vapor retarder (closed-cell at normal thickness) or is coated with one. */
+  foamIsClassII: z.boolean().optional(),
+  /** The insulated roof line and air barrier enclose the whole attic (it is inside the thermal envelope). */
+  isInsideThermalEnvelope: z.boolean().optional(),
+  roofCovering: z.enum(["asphalt-shingles", "wood-shingles-or-shakes", "tile-or-metal", "other"]).optional(),
+  /** For wood shingles or shakes: a 1/4 in vented air space under them. */
+  hasVentedGapUnderShakes: z.boolean().optional(),
+});
+
 export const SiteSchema = z.object({
   /** A natural-draft (atmospheric) gas or oil appliance in the house: water heater, furnace, boiler. */
   atmosphericCombustionAppliance: z.boolean().optional(),
@@ -188,11 +247,23 @@ export const AtticInputSchema = z
     climateZone: z.number().int("Climate zone is a whole number 1–8.").min(1, "Climate zone is 1–8.").max(8, "Climate zone is 1–8."),
     ceilingVaporRetarder: VaporRetarderSchema,
     roofColor: RoofColorSchema,
+    /** IECC moisture letter with the zone (4C marine …); zones 7–8 have none. Optional for older surveys. */
+    moistureRegime: MoistureRegimeSchema.nullable().optional(),
+    /** A space of enclosed rafter bays (cathedral ceiling): each bay is vented on its own (IRC R806.1). */
+    enclosedRafterBays: EnclosedRafterBaysSchema.optional(),
+    /** "unvented" for a sealed attic (IRC R806.5); vented when absent. */
+    assembly: AtticAssemblySchema.optional(),
+    unvented: UnventedAssemblySchema.optional(),
+    /** The company's reading of the upper-vent share; the literal "required" when absent. */
+    upperShareBase: UpperShareBaseSchema.optional(),
     sections: z.array(SectionSchema).min(1, "Add at least one section of attic floor.").max(LIMITS.maxSections),
     vents: z.array(VentSchema).max(LIMITS.maxVents),
     site: SiteSchema.optional(),
   })
   .superRefine((input, ctx) => {
+    if (input.assembly === "unvented" && input.unvented === undefined) {
+      ctx.addIssue({ code: "custom", path: ["unvented"], message: "Say how the unvented roof is insulated (spray foam, rigid board above the deck, or batts only)." });
+    }
     const sectionIds = new Set<string>();
     input.sections.forEach((section, index) => {
       if (section.id === undefined) return;
@@ -211,6 +282,10 @@ export const AtticInputSchema = z
 
 export type CodeBasis = z.infer<typeof CodeBasisSchema>;
 export type VaporRetarder = z.infer<typeof VaporRetarderSchema>;
+export type UpperShareBase = z.infer<typeof UpperShareBaseSchema>;
+export type VentCondition = z.infer<typeof VentConditionSchema>;
+export type MoistureRegime = z.infer<typeof MoistureRegimeSchema>;
+export type UnventedAssembly = z.infer<typeof UnventedAssemblySchema>;
 export type RoofColor = z.infer<typeof RoofColorSchema>;
 export type VentLocation = z.infer<typeof VentLocationSchema>;
 export type Section = z.infer<typeof SectionSchema>;

@@ -16,6 +16,7 @@ export const VENT_KINDS = [
   "powered-roof",
   "powered-gable",
   "solar-powered",
+  "whole-house-fan",
 ] as const;
 
 export type VentKind = (typeof VENT_KINDS)[number];
@@ -37,7 +38,18 @@ export const EAVE_KINDS: ReadonlySet<VentKind> = new Set<VentKind>([
  */
 export const AT_RIDGE_KINDS: ReadonlySet<VentKind> = new Set<VentKind>(["ridge", "off-ridge", "cupola"]);
 
+/** Powered ATTIC fans: they pull air out of the attic (and size by HVI's attic rules). */
 export const isPoweredKind = (kind: VentKind): boolean => POWERED_KINDS.has(kind);
+
+/**
+ * A whole-house fan is a different device: mounted in a ceiling, it pulls house air (and outdoor
+ * air through open windows) INTO the attic, which must let it out through its vents — any of them,
+ * ridge included. It is rated in cfm and has no net free area of its own.
+ */
+export const isWholeHouseFanKind = (kind: VentKind): boolean => kind === "whole-house-fan";
+
+/** Rated in cfm, no net free area: attic fans and whole-house fans. */
+export const isMechanicalKind = (kind: VentKind): boolean => isPoweredKind(kind) || isWholeHouseFanKind(kind);
 
 export const VENT_KIND_LABELS: Readonly<Record<VentKind, string>> = {
   ridge: "ridge vent",
@@ -53,6 +65,7 @@ export const VENT_KIND_LABELS: Readonly<Record<VentKind, string>> = {
   "powered-roof": "powered roof fan",
   "powered-gable": "powered gable fan",
   "solar-powered": "solar-powered fan",
+  "whole-house-fan": "whole-house fan",
 };
 
 /**

@@ -18,7 +18,7 @@ describe("ventNfa", () => {
     expect(v.explanation).toContain("÷ 2.25 (louvers with 1/8 in mesh)");
   });
 
-  it("when a rated NFA is given with a gross size, then the rated figure wins (labeled products state their own NFA, TRADE-REFERENCES §4)", () => {
+  it("when a rated NFA is given with a gross size, then the rated figure wins (labeled products state their own NFA, SOURCES.md §4)", () => {
     const v = ventNfa({ id: "g", kind: "gable-louver", location: "upper", nfaSqIn: 144, grossWidthIn: 14, grossHeightIn: 24, covering: { mesh: "1/4", louvers: false } });
     expect(v.nfaSqIn).toBe(144);
   });

@@ -1,12 +1,12 @@
 /**
  * Net free area of each recorded vent. NFA is the open area air can pass through after screens,
  * louvers and baffles (the figure R806.2 counts). Powered fans are mechanical: they are rated in
- * cfm and contribute no NFA here [issue 3; HVI treats them separately, SRC 6].
+ * cfm and contribute no NFA here [issue 3; HVI treats them separately, S6].
  */
 import { formatNumber, roundTo } from "../units/format";
 import { coveringFactor, describeCovering } from "./covering-factors";
 import type { Vent, VentLocation } from "./schema";
-import { isPoweredKind, type VentKind } from "./vent-kinds";
+import { isPoweredKind, isWholeHouseFanKind, type VentKind } from "./vent-kinds";
 
 export interface VentNfa {
   ventId: string;
@@ -14,9 +14,18 @@ export interface VentNfa {
   label?: string;
   kind: VentKind;
   location: VentLocation;
+  /** A powered attic fan (not a whole-house fan). */
   isPowered: boolean;
-  /** Net free area of the whole entry (all units), sq in, rounded to 0.01; 0 for powered fans. */
+  /** A whole-house fan: it blows house air into the attic; no net free area. */
+  isWholeHouseFan: boolean;
+  /** Net free area of the whole entry (all units), sq in, rounded to 0.01 for display; 0 for powered fans. */
   nfaSqIn: number;
+  /** The same, unrounded: the figure the code checks compare (a verdict is never rounded). */
+  exactNfaSqIn: number;
+  /** NFA as if every unit were open, sq in (0.01); differs from nfaSqIn when the condition blocks some. */
+  fullNfaSqIn: number;
+  /** Share of the vent's area that counts, 0–1, from its condition. */
+  openShare: number;
   /** Rated airflow of the whole entry (all units), cfm; 0 for passive vents. */
   airflowCfm: number;
   /** The arithmetic in words, e.g. "40 ft × 18 sq in per ft = 720 sq in". */
@@ -33,12 +42,30 @@ export function ventNfa(vent: Vent): VentNfa {
   const base = { ventId: vent.id, kind: vent.kind, location: vent.location, ...(vent.label ? { label: vent.label } : {}) };
   const qtyText = (each: string) => (quantity > 1 ? `${formatNumber(quantity)} × ${each}` : each);
 
+  if (isWholeHouseFanKind(vent.kind)) {
+    const airflowCfm = quantity * (vent.cfm ?? 0);
+    return {
+      ...base,
+      isPowered: false,
+      isWholeHouseFan: true,
+      nfaSqIn: 0,
+      exactNfaSqIn: 0,
+      fullNfaSqIn: 0,
+      openShare: 1,
+      airflowCfm,
+      explanation: `${qtyText(`${formatNumber(vent.cfm ?? 0)} cfm`)}${quantity > 1 ? ` = ${formatNumber(airflowCfm)} cfm` : ""}; a whole-house fan blows house air into the attic and adds no net free area`,
+    };
+  }
   if (isPoweredKind(vent.kind)) {
     const airflowCfm = quantity * (vent.cfm ?? 0);
     return {
       ...base,
       isPowered: true,
+      isWholeHouseFan: false,
       nfaSqIn: 0,
+      exactNfaSqIn: 0,
+      fullNfaSqIn: 0,
+      openShare: 1,
       airflowCfm,
       explanation: `${qtyText(`${formatNumber(vent.cfm ?? 0)} cfm`)}${quantity > 1 ? ` = ${formatNumber(airflowCfm)} cfm` : ""}; a powered fan is mechanical and adds no net free area`,
     };
@@ -67,6 +94,57 @@ export function ventNfa(vent: Vent): VentNfa {
     exactSqIn = 0;
     explanation = "no size recorded";
   }
-  const nfaSqIn = roundTo(exactSqIn, 2);
-  return { ...base, isPowered: false, nfaSqIn, airflowCfm: 0, explanation: `${explanation} = ${formatNumber(nfaSqIn)} sq in` };
+  const fullNfaSqIn = roundTo(exactSqIn, 2);
+  const { openShare, words } = conditionShare(vent, quantity);
+  const countedExactSqIn = exactSqIn * openShare;
+  const nfaSqIn = roundTo(countedExactSqIn, 2);
+  return {
+    ...base,
+    isPowered: false,
+    isWholeHouseFan: false,
+    nfaSqIn,
+    exactNfaSqIn: countedExactSqIn,
+    fullNfaSqIn,
+    openShare,
+    airflowCfm: 0,
+    explanation: openShare === 1 ? `${explanation} = ${formatNumber(nfaSqIn)} sq in` : `${explanation} = ${formatNumber(fullNfaSqIn)} sq in; ${words}: ${formatNumber(nfaSqIn)} sq in counted`,
+  };
+}
+
+const BLOCKED_BY_WORDS: Record<NonNullable<Vent["blockedBy"]>, string> = {
+  insulation: "insulation",
+  paint: "paint",
+  debris: "debris",
+  nest: "a nest",
+  other: "something",
+};
+
+/**
+ * How much of a vent counts, from its condition: blocked or painted over → none; partly blocked →
+ * the open units ("4 of 10 blocked" → 6/10) or the open share; open or damaged → all of it (a
+ * damaged vent still passes air; its finding asks for the repair).
+ *
+ * @example
+ * conditionShare({ id: "s", kind: "soffit-individual", location: "lower", nfaSqInPerUnit: 50, quantity: 10, condition: "partly-blocked", blockedQuantity: 4, blockedBy: "insulation" }, 10)
+ * // { openShare: 0.6, words: "4 of 10 blocked by insulation, so 6 of 10 count" }
+ */
+export function conditionShare(vent: Vent, quantity: number): { openShare: number; words: string } {
+  const by = vent.blockedBy ? ` by ${BLOCKED_BY_WORDS[vent.blockedBy]}` : "";
+  switch (vent.condition) {
+    case "blocked":
+      return { openShare: 0, words: `blocked${by}, so none of it counts` };
+    case "painted-over":
+      return { openShare: 0, words: "painted over, so none of it counts" };
+    case "partly-blocked":
+      if (vent.blockedQuantity !== undefined) {
+        const blocked = Math.min(vent.blockedQuantity, quantity);
+        return { openShare: (quantity - blocked) / quantity, words: `${formatNumber(blocked)} of ${formatNumber(quantity)} blocked${by}, so ${formatNumber(quantity - blocked)} of ${formatNumber(quantity)} count` };
+      }
+      if (vent.blockedShare !== undefined) {
+        return { openShare: 1 - vent.blockedShare, words: `${formatNumber(vent.blockedShare * 100)} % blocked${by}, so ${formatNumber((1 - vent.blockedShare) * 100)} % counts` };
+      }
+      return { openShare: 1, words: "" };
+    default:
+      return { openShare: 1, words: "" };
+  }
 }

@@ -15,13 +15,13 @@ describe("ventPosition", () => {
   it("when nothing places a box vent, then drop and height are unknown (null), never guessed", () => {
     expect(ventPosition({ id: "b", kind: "box", location: "upper", nfaSqIn: 50 }, null)).toMatchObject({ dropBelowRidgeFt: null, heightAboveEaveFt: null });
   });
-  it("when a vent names no section, then the smallest rise is used only if every section's rise is known", () => {
+  it("when a vent names no section, then the space's highest and lowest rise are used only if every section's rise is known", () => {
     const known = riseLookup([
       { kind: "rect", lengthFt: 40, widthFt: 30, roofForm: "gable", pitchIn12: 6 },
       { kind: "rect", id: "w", lengthFt: 20, widthFt: 12, roofForm: "gable", pitchIn12: 6 },
     ]);
-    expect(known(undefined)).toBe(3); // 12 ÷ 2 × 6/12
-    expect(known("w")).toBe(3);
+    expect(known(undefined)).toEqual({ highestFt: 7.5, lowestFt: 3 }); // 30 ÷ 2 × 6/12; 12 ÷ 2 × 6/12
+    expect(known("w")).toEqual({ highestFt: 3, lowestFt: 3 });
     const partly = riseLookup([{ kind: "rect", lengthFt: 40, widthFt: 30, roofForm: "gable", pitchIn12: 6 }, { kind: "area", areaSqFt: 200 }]);
     expect(partly(undefined)).toBeNull();
   });

@@ -195,6 +195,34 @@ describe("analysis", () => {
     expect(before).toBe("irc-2018");
     expect(after).toMatchObject({ codeBasis: "strict-150", ratio: 150 });
   });
+
+  it("when the owner chooses the local reading of the 40–50 % split, then every analysis of the company's projects uses it, and a bad value answers 400 (IRC 2018 R806.2 condition 2 [SOURCES.md S4])", async () => {
+    const other = await makeTeam(t);
+    const project = await createProject(team.asEstimator, customerId, { codeBasis: "irc-2021" });
+    const space = await createSpace(team.asEstimator, project.id, { name: "Heavy ridge" });
+    // 1,500 sq ft; ridge 400 > 50 % of the 720 sq in required, but 33 % of the 1,200 provided.
+    await send(team.asEstimator, "put", `/api/projects/${project.id}/spaces/${space.id}`, {
+      name: "Heavy ridge", roof: { form: "gable", pitchIn12: 6, ridgeLengthFt: null, eaveLengthFt: null },
+      sections: [{ kind: "area", areaSqFt: 1500 }],
+      vents: [{ id: "s", kind: "soffit-continuous", location: "lower", nfaSqIn: 800 }, { id: "r", kind: "ridge", location: "upper", nfaSqIn: 400 }],
+      site: {}, notes: null, version: 1,
+    }).expect(200);
+    const literal = (await team.asSales.get(`/api/projects/${project.id}/analysis`)).body.spaces[0].analysis;
+    expect(literal.requirement).toMatchObject({ ratio: 150, upperShareBase: "required" });
+    expect((await team.asSales.get(`/api/projects/${project.id}`)).body.project.upperShareBase).toBe("required");
+
+    const bad = await send(team.asOwner, "patch", "/api/company", { upperShareBase: "whatever" });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields).toHaveProperty("upperShareBase");
+    await send(team.asOwner, "patch", "/api/company", { upperShareBase: "provided" }).expect(200);
+    expect((await team.asOwner.get("/api/company")).body.company.upperShareBase).toBe("provided");
+    const local = (await team.asSales.get(`/api/projects/${project.id}/analysis`)).body.spaces[0].analysis;
+    expect(local.requirement).toMatchObject({ ratio: 300, upperShareBase: "provided" });
+    expect(local.compliant).toBe(true);
+    // Another company keeps the literal reading.
+    expect((await other.asOwner.get("/api/company")).body.company.upperShareBase).toBe("required");
+    await send(team.asOwner, "patch", "/api/company", { upperShareBase: "required" }).expect(200);
+  });
 });
 
 describe("users", () => {

@@ -5,7 +5,7 @@ import { scoped } from "../../lib/tenant.ts";
 import { containsPattern } from "../../lib/search.ts";
 import type { Actor } from "../../lib/request-context.ts";
 import type { ListQuery } from "../../../shared/schemas/projects.ts";
-import { CodeBasisSchema, type CodeBasis } from "../../../shared/ventilation/index.ts";
+import { CodeBasisSchema, type CodeBasis, type UpperShareBase } from "../../../shared/ventilation/index.ts";
 
 export const projectColumns = {
   id: projects.id, customerId: projects.customerId, title: projects.title, siteAddress: projects.siteAddress,
@@ -13,6 +13,8 @@ export const projectColumns = {
   moistureRegime: projects.moistureRegime, codeBasis: projects.codeBasis, ceilingVaporRetarder: projects.ceilingVaporRetarder,
   roofColor: projects.roofColor, notes: projects.notes, version: projects.version,
   createdAt: projects.createdAt, updatedAt: projects.updatedAt,
+  /** The company's reading of the 1/300 upper-vent share (profile setting), applied to every analysis. */
+  upperShareBase: sql<UpperShareBase>`(select case when ${companies.settings}->>'upperShareBase' = 'provided' then 'provided' else 'required' end from ${companies} where ${companies.id} = ${projects.companyId})`.as("upper_share_base"),
 };
 
 /** Columns a caller may write; the rest (id, company, version, timestamps) are the server's. */

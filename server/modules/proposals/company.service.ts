@@ -18,6 +18,7 @@ export function presentCompany(c: CompanyRow) {
     defaultTerms: c.defaultTerms, taxRateBasisPoints: c.taxRateBasisPoints, depositRule: c.depositRule ?? null,
     isCoolingOffNoticeEnabled: settings.isCoolingOffNoticeEnabled ?? false,
     reminderDays: settings.reminderDays ?? null,
+    upperShareBase: settings.upperShareBase ?? "required",
     logo: settings.logoStorageKey ? { contentType: settings.logoContentType, sha256: settings.logoSha256, url: "/api/company/logo" } : null,
   };
 }
@@ -36,10 +37,11 @@ export function createCompanyService(deps: { repo: ProposalsRepository; storage:
 
     async update(actor: Actor, patch: CompanyProfilePatch) {
       const c = await current(actor);
-      const { isCoolingOffNoticeEnabled, reminderDays, ...columns } = patch;
+      const { isCoolingOffNoticeEnabled, reminderDays, upperShareBase, ...columns } = patch;
       const settings: CompanySettings = { ...(c.settings as CompanySettings) };
       if (isCoolingOffNoticeEnabled !== undefined) settings.isCoolingOffNoticeEnabled = isCoolingOffNoticeEnabled;
       if (reminderDays !== undefined) settings.reminderDays = reminderDays;
+      if (upperShareBase !== undefined) settings.upperShareBase = upperShareBase;
       const updated = await repo.updateCompany(actor, { ...columns, settings: settings as Record<string, unknown> });
       return presentCompany(updated!);
     },

@@ -28,6 +28,8 @@ export type NewProposalEvent = Omit<typeof proposalEvents.$inferInsert, "id" | "
 export interface CompanySettings {
   isCoolingOffNoticeEnabled?: boolean;
   reminderDays?: number | null;
+  /** The 1/300 upper-vent share reading; "required" (literal) when absent. */
+  upperShareBase?: "required" | "provided";
   logoStorageKey?: string | null;
   logoContentType?: string | null;
   logoSha256?: string | null;

@@ -83,7 +83,11 @@ function Figures({ analysis }: { analysis: SnapshotAnalysis }) {
   return (
     <View wrap={false}>
       <Figure label="Attic floor area" value={sqFt(analysis.floorAreaSqFt)} />
-      <Figure label={`Ventilation the code asks for (1 sq ft per ${r.ratio} sq ft of floor)`} value={sqIn(r.totalSqIn)} isStrong />
+      <Figure
+        label={r.totalSqIn === 0 ? "Ventilation the code asks for (sealed attic, IRC R806.5: none)" : `Ventilation the code asks for (1 sq ft per ${r.ratio} sq ft of floor, rounded up)`}
+        value={sqIn(r.totalSqIn)}
+        isStrong
+      />
       <Figure label="Intake the code split implies, at least (low, at the eaves)" value={sqIn(r.lowerMinSqIn)} />
       <Figure label="Exhaust the split implies (high, near the ridge)" value={`${sqIn(r.upperMinSqIn)} – ${sqIn(r.upperMaxSqIn)}`} />
       <Figure label="Intake provided" value={sqIn(analysis.provided.intakeSqIn)} />

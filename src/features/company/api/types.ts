@@ -13,5 +13,7 @@ export interface CompanyProfile {
   depositRule: DepositRule | null;
   isCoolingOffNoticeEnabled: boolean;
   reminderDays: number | null;
+  /** How the 1/300 route's 40–50 % is read: of the required area (the code text) or of the area provided. */
+  upperShareBase: "required" | "provided";
   logo: { contentType: string | null; sha256: string | null; url: string } | null;
 }

@@ -32,6 +32,7 @@ interface FormState {
   isCoolingOffNoticeEnabled: boolean;
   isReminderOn: boolean;
   reminderDays: string;
+  upperShareBase: "required" | "provided";
 }
 
 function toForm(c: CompanyProfile): FormState {
@@ -50,6 +51,7 @@ function toForm(c: CompanyProfile): FormState {
     isCoolingOffNoticeEnabled: c.isCoolingOffNoticeEnabled,
     isReminderOn: c.reminderDays !== null,
     reminderDays: String(c.reminderDays ?? 3),
+    upperShareBase: c.upperShareBase ?? "required",
   };
 }
 
@@ -90,6 +92,7 @@ function toPatch(f: FormState): { patch: CompanyProfilePatch | null; errors: Rec
       depositRule,
       isCoolingOffNoticeEnabled: f.isCoolingOffNoticeEnabled,
       reminderDays,
+      upperShareBase: f.upperShareBase,
     },
   };
 }
@@ -276,6 +279,20 @@ function ProfileForm({ company }: { company: CompanyProfile }) {
               <TextField label="Remind after" inputMode="numeric" className="max-w-xs" trailing={<span className="pr-3.5 text-ink-600">days</span>} error={errors.reminderDays} {...text("reminderDays")} />
             ) : null}
           </div>
+          <RadioGroup legend="Your building department's reading of the 1/300 vent split (IRC R806.2)">
+            <Radio
+              name="upper-share-base"
+              label="40–50 % of the required area in high vents (the code text; the default)"
+              checked={form.upperShareBase === "required"}
+              onChange={() => set("upperShareBase", "required")}
+            />
+            <Radio
+              name="upper-share-base"
+              label="40–50 % of the vent area provided (a local reading)"
+              checked={form.upperShareBase === "provided"}
+              onChange={() => set("upperShareBase", "provided")}
+            />
+          </RadioGroup>
         </CardBody>
         <CardFooter>
           <Button type="submit" isLoading={update.isPending} loadingText="Saving…">

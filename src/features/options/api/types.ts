@@ -3,7 +3,7 @@ import type { OptionPrice } from "@shared/pricing/index";
 import type { CatalogItem } from "@shared/schemas/catalog";
 import type { DesignOptionInput } from "@shared/schemas/options";
 import type { SpaceRoof, SiteChecklist } from "@shared/schemas/survey";
-import type { AtticAnalysis, CodeBasis, RoofColor, Section, VaporRetarder, Vent } from "@shared/ventilation/index";
+import type { AtticAnalysis, CodeBasis, RoofColor, Section, UpperShareBase, VaporRetarder, Vent } from "@shared/ventilation/index";
 
 /** One attic space's analysis as the server computes it (GET /projects/:id/analysis shape). */
 export interface SpaceAnalysisRecord {
@@ -64,9 +64,13 @@ export interface ProjectRecord {
   title: string;
   siteAddress: string;
   climateZone: number;
+  /** IECC moisture letter; null for zones 7–8 or when not recorded. */
+  moistureRegime?: "A" | "B" | "C" | null;
   codeBasis: CodeBasis;
   ceilingVaporRetarder: VaporRetarder;
   roofColor: RoofColor;
+  /** The company's reading of the 1/300 upper-vent share (company profile). */
+  upperShareBase?: UpperShareBase;
 }
 
 export interface SpaceRecord {

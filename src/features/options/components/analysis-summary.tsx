@@ -1,6 +1,6 @@
 import type { UnitSystem } from "@shared/units/format";
 import { formatAreaSqFt, formatNfaSqIn } from "@shared/units/format";
-import { type AtticAnalysis, type Finding, type TryAnalyzeResult } from "@shared/ventilation/index";
+import { meetsRequiredArea, type AtticAnalysis, type Finding, type TryAnalyzeResult } from "@shared/ventilation/index";
 import { Badge, SeverityBadge, type Severity } from "@/components/ui/badge";
 import { WarningIcon } from "@/components/ui/icons";
 import { cn } from "@/lib/cn";
@@ -62,8 +62,15 @@ function Figure({ label, value, sub, isShort }: { label: string; value: string; 
 
 /** Required against provided, intake and exhaust, and the balance, in words and figures. */
 export function VentAreaFigures({ analysis: a, unitSystem }: { analysis: AtticAnalysis; unitSystem: UnitSystem }) {
+  if (a.assembly === "unvented") {
+    return <p className="text-base text-ink-800">Sealed (unvented) attic under IRC R806.5: no vent area is required, and none should be added.</p>;
+  }
+  // A ✓ only beside a value inside its range; the verdict on the total compares exact figures (never rounded).
+  const meetsTotal = meetsRequiredArea(a.provided.exactTotalSqIn, a.requirement.exactSqIn);
   const isIntakeShort = a.provided.intakeSqIn < a.requirement.split.lowerMinSqIn;
   const isExhaustShort = a.provided.exhaustSqIn < a.requirement.split.upperMinSqIn;
+  const isExhaustOver = a.provided.exhaustSqIn > a.requirement.split.upperMaxSqIn && a.requirement.split.upperMaxSqIn > 0;
+  const exhaustRange = `${formatNfaSqIn(a.requirement.split.upperMinSqIn, unitSystem)}–${formatNfaSqIn(a.requirement.split.upperMaxSqIn, unitSystem)}`;
   const isBalanced = a.provided.intakeSqIn >= a.provided.exhaustSqIn;
   const hasPassive = a.provided.intakeSqIn + a.provided.exhaustSqIn > 0;
   return (
@@ -77,8 +84,8 @@ export function VentAreaFigures({ analysis: a, unitSystem }: { analysis: AtticAn
         <Figure
           label="Provided"
           value={formatNfaSqIn(a.provided.totalSqIn, unitSystem)}
-          sub={a.provided.totalSqIn >= a.requirement.totalSqIn ? "✓ at least the required area" : "! less than required"}
-          isShort={a.provided.totalSqIn < a.requirement.totalSqIn}
+          sub={meetsTotal ? "✓ at least the required area" : "! less than required"}
+          isShort={!meetsTotal}
         />
         <Figure
           label="Intake (low)"
@@ -89,8 +96,8 @@ export function VentAreaFigures({ analysis: a, unitSystem }: { analysis: AtticAn
         <Figure
           label="Exhaust (high)"
           value={formatNfaSqIn(a.provided.exhaustSqIn, unitSystem)}
-          sub={`${isExhaustShort ? "! " : "✓ "}${formatNfaSqIn(a.requirement.split.upperMinSqIn, unitSystem)}–${formatNfaSqIn(a.requirement.split.upperMaxSqIn, unitSystem)} wanted`}
-          isShort={isExhaustShort}
+          sub={isExhaustShort ? `! below ${exhaustRange} wanted` : isExhaustOver ? `! above ${exhaustRange} wanted` : `✓ ${exhaustRange} wanted`}
+          isShort={isExhaustShort || isExhaustOver}
         />
       </dl>
       <p className={cn("text-base font-medium", !hasPassive || isBalanced ? "text-ink-800" : "text-warning-800")} data-balance={isBalanced ? "balanced" : "exhaust-heavy"}>

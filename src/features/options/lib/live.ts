@@ -29,7 +29,9 @@ export interface LiveSpace {
 export const basisOf = (project: ProjectRecord): ProjectBasis => ({
   codeBasis: project.codeBasis,
   climateZone: project.climateZone,
+  moistureRegime: project.moistureRegime ?? null,
   ceilingVaporRetarder: project.ceilingVaporRetarder,
+  ...(project.upperShareBase !== undefined ? { upperShareBase: project.upperShareBase } : {}),
   roofColor: project.roofColor,
 });
 

@@ -13,7 +13,9 @@ export const STATUS_LABELS: Record<ProjectStatus, string> = {
 export const STATUS_OPTIONS: SelectOption[] = PROJECT_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }));
 
 export const CODE_BASIS_LABELS: Record<CodeBasis, string> = {
-  "irc-2018": "IRC 2018, 2021 or 2024 text",
+  "irc-2024": "IRC 2024 (same vent rule as 2018)",
+  "irc-2021": "IRC 2021 (same vent rule as 2018)",
+  "irc-2018": "IRC 2018 text",
   "irc-2012": "IRC 2012 or 2015 text",
   "irc-2009": "IRC 2009 text",
   "strict-150": "Strict 1/150, no exceptions",
@@ -41,9 +43,10 @@ export const ROOF_COLOR_OPTIONS: SelectOption[] = (Object.keys(ROOF_COLOR_LABELS
   label: ROOF_COLOR_LABELS[c],
 }));
 
+/** IECC thermal zones; the moisture letter (A, B, C) is chosen beside it — zones 7 and 8 have none. */
 export const CLIMATE_ZONE_OPTIONS: SelectOption[] = [1, 2, 3, 4, 5, 6, 7, 8].map((z) => ({
   value: String(z),
-  label: `Zone ${z}${z <= 2 ? " (hot)" : z >= 7 ? " (very cold)" : ""}`,
+  label: `Zone ${z}${z <= 2 ? " (hot)" : z >= 7 ? " (very cold, no letter)" : ""}`,
 }));
 
 export type MoistureRegime = "A" | "B" | "C";

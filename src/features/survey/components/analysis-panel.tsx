@@ -100,15 +100,42 @@ export const AnalysisPanel = memo(function AnalysisPanel({ spaceName, input, res
       <div className="space-y-2">
         <h2 className="text-xl font-semibold text-ink-900">Analysis · {spaceName}</h2>
         <div className="flex flex-wrap items-center gap-2">
-          <SeverityBadge severity={a.compliant ? "ok" : "critical"}>{a.compliant ? "Meets the code minimum" : "Does not meet the code minimum"}</SeverityBadge>
+          {a.assembly === "unvented" ? (
+            <SeverityBadge severity={a.compliant ? "ok" : "critical"}>{a.compliant ? "Sealed attic: conditions met" : "Sealed attic: conditions to check"}</SeverityBadge>
+          ) : (
+            <SeverityBadge severity={a.compliant ? "ok" : "critical"}>{a.compliant ? "Meets the code minimum" : "Does not meet the code minimum"}</SeverityBadge>
+          )}
           <span className="text-sm text-ink-700">
-            Floor {formatAreaSqFt(a.floorAreaSqFt, unitSystem)} · 1/{a.requirement.ratio}
+            Floor {formatAreaSqFt(a.floorAreaSqFt, unitSystem)}
+            {a.assembly === "unvented" ? " · sealed (IRC R806.5)" : ` · 1/${a.requirement.ratio}`}
           </span>
         </div>
         <p className="text-base text-ink-800">{a.summary}</p>
       </div>
       {todo}
 
+      {a.assembly === "unvented" && a.unvented ? (
+        <section aria-labelledby="sealed-title" className="space-y-3">
+          <h3 id="sealed-title" className="text-lg font-semibold text-ink-900">
+            Sealed attic (IRC R806.5)
+          </h3>
+          <p className="text-base text-ink-800">No vent area is required, and none should be added. What the code checks instead:</p>
+          <ul className="space-y-1.5 text-base text-ink-800">
+            {a.unvented.conditions.map((c) => (
+              <li key={c.id} className="flex gap-2">
+                <span className="shrink-0 font-semibold" aria-hidden="true">
+                  {c.status === "met" ? "✓" : c.status === "not-applicable" ? "–" : c.status === "unknown" ? "?" : "!"}
+                </span>
+                <span>
+                  <span className="sr-only">{c.status === "met" ? "Met: " : c.status === "not-applicable" ? "Does not apply: " : c.status === "unknown" ? "Not recorded: " : "Not met: "}</span>
+                  {c.reason}
+                </span>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : (
+        <>
       <section aria-labelledby="required-title" className="space-y-3">
         <h3 id="required-title" className="text-lg font-semibold text-ink-900">
           Vent area
@@ -129,6 +156,28 @@ export const AnalysisPanel = memo(function AnalysisPanel({ spaceName, input, res
             ))}
           </ul>
         </details>
+        {a.rafterBays ? (
+          <div className="rounded-md border border-ink-200 bg-white px-3 py-2 text-base text-ink-800">
+            <p className="font-medium text-ink-900">
+              {a.rafterBays.isMet ? "✓ Every rafter bay is vented" : "! Not every rafter bay is vented enough"} (IRC R806.1, per bay)
+            </p>
+            {a.rafterBays.reasons.map((r) => (
+              <p key={r}>{r}</p>
+            ))}
+          </div>
+        ) : null}
+        {a.recommendations.length > 0 ? (
+          <details className="rounded-md border border-ink-200 bg-white px-3 py-2">
+            <summary className="min-h-touch cursor-pointer py-2 font-medium text-ink-900 md:min-h-0">Above the minimum: recommended, not code</summary>
+            <ul className="list-disc space-y-1.5 pt-1 pb-2 pl-5 text-base text-ink-800">
+              {a.recommendations.map((r) => (
+                <li key={r.id}>
+                  <span className="font-medium">{r.title}.</span> {r.detail} <span className="text-ink-600">Source: {r.source}.</span>
+                </li>
+              ))}
+            </ul>
+          </details>
+        ) : null}
         {a.provided.perVent.length > 0 ? (
           <details className="rounded-md border border-ink-200 bg-white px-3 py-2">
             <summary className="min-h-touch cursor-pointer py-2 font-medium text-ink-900 md:min-h-0">Each vent</summary>
@@ -141,12 +190,15 @@ export const AnalysisPanel = memo(function AnalysisPanel({ spaceName, input, res
         ) : null}
       </section>
 
-      <section aria-labelledby="balance-title" className="space-y-2">
+          <section aria-labelledby="balance-title" className="space-y-2">
         <h3 id="balance-title" className="text-lg font-semibold text-ink-900">
           Balance
         </h3>
         <BalanceBar intakeSqIn={a.provided.intakeSqIn} exhaustSqIn={a.provided.exhaustSqIn} unitSystem={unitSystem} />
       </section>
+
+        </>
+      )}
 
       {a.fan ? (
         <section aria-labelledby="fan-title" className="space-y-3">

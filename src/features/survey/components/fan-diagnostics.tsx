@@ -1,7 +1,8 @@
 import type { ReactNode } from "react";
-import { FAN_SAFETY_CAUTION, LIVE_VOLTAGE_TEST_CAUTION } from "@shared/diagnostics/index";
+import { CAPACITOR_CAUTION, FAN_SAFETY_CAUTION, LIVE_VOLTAGE_TEST_CAUTION } from "@shared/diagnostics/index";
 import { Checkbox, Radio, RadioGroup } from "@/components/ui/checkbox";
 import { WarningIcon } from "@/components/ui/icons";
+import { Select } from "@/components/ui/select";
 import { cn } from "@/lib/cn";
 import type { DiagnosticsDraft } from "../lib/drafts";
 import { numberEntry } from "../lib/measure";
@@ -29,9 +30,14 @@ function Step({ number, title, children, isLocked }: { number: number; title: st
   );
 }
 
-function windingEntry(text: string): DiagnosticsDraft["winding"] {
+const YES_NO_UNKNOWN = [
+  { value: "yes", label: "Yes" },
+  { value: "no", label: "No" },
+];
+
+function windingEntry(text: string, openWords = "Open circuit: no continuity through the winding"): DiagnosticsDraft["winding"] {
   if (/^\s*(open|ol|o\.l\.?|inf|infinite)\s*$/i.test(text)) {
-    return { text, value: null, error: null, understood: "Open circuit: no continuity through the winding", isOpen: true };
+    return { text, value: null, error: null, understood: openWords, isOpen: true };
   }
   const entry = numberEntry(text.replace(/\s*(ohms?|Ω)\s*$/i, ""), { allowZero: true, max: 1e12, unit: "ohms" });
   return { ...entry, understood: entry.value !== null ? `${entry.value} Ω` : null, isOpen: false };
@@ -60,6 +66,22 @@ export function FanDiagnosticsSteps({ value, onChange, fanName }: FanDiagnostics
             checked={value.isPowerVerifiedOff}
             onChange={(event) => onChange({ ...value, isPowerVerifiedOff: event.target.checked })}
           />
+          <div className="grid gap-3 sm:grid-cols-2">
+            <Select
+              label="Breaker locked or tagged off"
+              options={YES_NO_UNKNOWN}
+              placeholder="Not recorded"
+              value={value.isLockedOut}
+              onChange={(event) => onChange({ ...value, isLockedOut: event.target.value as DiagnosticsDraft["isLockedOut"] })}
+            />
+            <Select
+              label="Tester proven on a known live source, before and after"
+              options={YES_NO_UNKNOWN}
+              placeholder="Not recorded"
+              value={value.isTesterProven}
+              onChange={(event) => onChange({ ...value, isTesterProven: event.target.value as DiagnosticsDraft["isTesterProven"] })}
+            />
+          </div>
         </Step>
         <Step number={2} title="Blade spins freely" isLocked={isLocked}>
           <Caution>{FAN_SAFETY_CAUTION}</Caution>
@@ -130,7 +152,64 @@ export function FanDiagnosticsSteps({ value, onChange, fanName }: FanDiagnostics
               entry={value.winding}
               onText={(text) => onChange({ ...value, winding: windingEntry(text) })}
             />
+            <EntryField
+              label="Winding to motor frame"
+              hint={`Ohms from a lead to the bare metal frame, or "open" when the meter shows OL (that is good).`}
+              isOptional
+              placeholder="e.g. open"
+              entry={value.windingToGround}
+              onText={(text) => onChange({ ...value, windingToGround: windingEntry(text, "Open (OL): no leak to the frame") })}
+            />
           </fieldset>
+        </Step>
+        <Step number={5} title="Run capacitor (if the motor has one)" isLocked={isLocked}>
+          <Caution>{CAPACITOR_CAUTION}</Caution>
+          <fieldset disabled={isLocked} className="grid gap-3 sm:grid-cols-3">
+            <Select
+              label="Motor has a capacitor"
+              hint="Most small attic fan motors are shaded-pole and have none."
+              options={[
+                { value: "yes", label: "Yes" },
+                { value: "no", label: "No (shaded-pole)" },
+              ]}
+              placeholder="Not checked"
+              value={value.hasCapacitor}
+              onChange={(event) => onChange({ ...value, hasCapacitor: event.target.value as DiagnosticsDraft["hasCapacitor"] })}
+            />
+            {value.hasCapacitor === "yes" ? (
+              <>
+                <EntryField
+                  label="Rating on its label"
+                  inputMode="decimal"
+                  suffix="µF"
+                  showUnderstood={false}
+                  entry={value.capacitorRated}
+                  onText={(text) => onChange({ ...value, capacitorRated: numberEntry(text, { max: 1000, unit: "µF" }) })}
+                />
+                <EntryField
+                  label="Reading"
+                  inputMode="decimal"
+                  suffix="µF"
+                  showUnderstood={false}
+                  entry={value.capacitorMeasured}
+                  onText={(text) => onChange({ ...value, capacitorMeasured: numberEntry(text, { allowZero: true, max: 2000, unit: "µF" }) })}
+                />
+              </>
+            ) : null}
+          </fieldset>
+        </Step>
+        <Step number={6} title="Fan starts when forced on">
+          <Caution>{LIVE_VOLTAGE_TEST_CAUTION}</Caution>
+          <Select
+            label="Dial turned below the attic temperature (or override used): the fan…"
+            options={[
+              { value: "runs", label: "Starts and runs" },
+              { value: "does-not-run", label: "Does not start" },
+            ]}
+            placeholder="Not tested"
+            value={value.overrideTest}
+            onChange={(event) => onChange({ ...value, overrideTest: event.target.value as DiagnosticsDraft["overrideTest"] })}
+          />
         </Step>
       </ol>
     </section>

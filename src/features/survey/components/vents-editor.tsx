@@ -26,6 +26,21 @@ const CONTROL_OPTIONS = [
   { value: "solar", label: "Solar (runs with sun)" },
 ];
 
+const CONDITION_OPTIONS = [
+  { value: "open", label: "Open, clear" },
+  { value: "partly-blocked", label: "Partly blocked" },
+  { value: "blocked", label: "Blocked" },
+  { value: "painted-over", label: "Painted over" },
+  { value: "damaged", label: "Damaged (broken, torn screen)" },
+];
+const BLOCKED_BY_OPTIONS = [
+  { value: "insulation", label: "Insulation" },
+  { value: "paint", label: "Paint" },
+  { value: "debris", label: "Debris" },
+  { value: "nest", label: "A nest" },
+  { value: "other", label: "Something else" },
+];
+
 type VentsUpdate = (vents: VentDraft[]) => VentDraft[];
 type VentUpdate = (vent: VentDraft) => VentDraft;
 
@@ -329,6 +344,19 @@ const VentCard = memo(function VentCard({
               onChange={(event) => edit({ louvers: event.target.checked })}
               className="sm:pt-7"
             />
+            {vent.louvers ? (
+              <Select
+                label="Louvers made of"
+                hint="Behind insect screen, plain metal louvers take less area than wood ones."
+                options={[
+                  { value: "metal", label: "Metal (plain)" },
+                  { value: "wood", label: "Wood" },
+                ]}
+                placeholder="Not recorded (taken as wood)"
+                value={vent.louverMaterial}
+                onChange={(event) => edit({ louverMaterial: event.target.value as VentDraft["louverMaterial"] })}
+              />
+            ) : null}
           </div>
         </div>
       ) : (
@@ -352,16 +380,22 @@ const VentCard = memo(function VentCard({
               entry={vent.quantity}
               onText={(text) => edit({ quantity: numberEntry(text, { isWhole: true, min: 1, max: 1000 }) })}
             />
-            <Select
-              label="Mounting"
-              options={[
-                { value: "roof", label: "On the roof" },
-                { value: "gable", label: "In a gable wall" },
-              ]}
-              placeholder="Not recorded"
-              value={vent.mounting}
-              onChange={(event) => edit({ mounting: event.target.value as VentDraft["mounting"] })}
-            />
+            {vent.kind === "whole-house-fan" ? (
+              <p className="text-sm text-ink-700 sm:col-span-2">
+                A whole-house fan sits in a ceiling and blows house air into the attic; every attic vent lets it out. It must only run with windows open.
+              </p>
+            ) : (
+              <Select
+                label="Mounting"
+                options={[
+                  { value: "roof", label: "On the roof" },
+                  { value: "gable", label: "In a gable wall" },
+                ]}
+                placeholder="Not recorded"
+                value={vent.mounting}
+                onChange={(event) => edit({ mounting: event.target.value as VentDraft["mounting"] })}
+              />
+            )}
             <Select
               label="Control"
               options={CONTROL_OPTIONS}
@@ -394,6 +428,47 @@ const VentCard = memo(function VentCard({
           </div>
         </div>
       )}
+      {mode !== "powered" ? (
+        <div className="grid gap-4 sm:grid-cols-2">
+          <Select
+            label="Condition"
+            options={CONDITION_OPTIONS}
+            placeholder="Open (not checked)"
+            value={vent.condition}
+            onChange={(event) => edit({ condition: event.target.value as VentDraft["condition"] })}
+          />
+          {vent.condition === "partly-blocked" || vent.condition === "blocked" ? (
+            <Select
+              label="Blocked by"
+              options={BLOCKED_BY_OPTIONS}
+              placeholder="Not recorded"
+              value={vent.blockedBy}
+              onChange={(event) => edit({ blockedBy: event.target.value as VentDraft["blockedBy"] })}
+            />
+          ) : null}
+          {vent.condition === "partly-blocked" && mode === "per-unit" ? (
+            <EntryField
+              label="How many are blocked"
+              hint={`Of the count above, e.g. 4 of 10.`}
+              inputMode="numeric"
+              showUnderstood={false}
+              entry={vent.blockedCount}
+              onText={(text) => edit({ blockedCount: numberEntry(text, { isWhole: true, allowZero: true, max: 1000 }) })}
+            />
+          ) : null}
+          {vent.condition === "partly-blocked" && mode !== "per-unit" ? (
+            <EntryField
+              label="Share blocked"
+              hint="About how much of the vent is covered."
+              inputMode="decimal"
+              suffix="%"
+              showUnderstood={false}
+              entry={vent.blockedPercent}
+              onText={(text) => edit({ blockedPercent: numberEntry(text, { allowZero: true, max: 100, unit: "percent" }) })}
+            />
+          ) : null}
+        </div>
+      ) : null}
       <EntryField
         label="Drop below the ridge"
         hint="Height from the ridge down to this vent; 0 at the ridge."

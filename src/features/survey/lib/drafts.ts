@@ -2,7 +2,7 @@ import type { SiteChecklist, SpaceRoof, SpaceSurvey } from "@shared/schemas/surv
 import { SpaceSurveySchema } from "@shared/schemas/survey";
 import type { UnitSystem } from "@shared/units/format";
 import {
-  isPoweredKind,
+  isMechanicalKind,
   SectionSchema,
   VENT_KIND_LABELS,
   VentSchema,
@@ -58,7 +58,18 @@ export interface DiagnosticsDraft {
   voltsAbove: EntryDraft;
   /** A number of ohms, or "open" / "OL". */
   winding: EntryDraft & { isOpen: boolean };
+  isLockedOut: "" | "yes" | "no";
+  isTesterProven: "" | "yes" | "no";
+  /** Winding to the motor frame: ohms, or open (OL). */
+  windingToGround: EntryDraft & { isOpen: boolean };
+  hasCapacitor: "" | "yes" | "no";
+  capacitorRated: EntryDraft;
+  capacitorMeasured: EntryDraft;
+  overrideTest: "" | "runs" | "does-not-run";
 }
+
+export type VentConditionDraft = "" | NonNullable<Vent["condition"]>;
+export type BlockedByDraft = "" | NonNullable<Vent["blockedBy"]>;
 
 export interface VentDraft {
   id: string;
@@ -73,6 +84,7 @@ export interface VentDraft {
   grossHeight: EntryDraft;
   mesh: "1/4" | "1/8" | "1/16";
   louvers: boolean;
+  louverMaterial: "" | "wood" | "metal";
   cfm: EntryDraft;
   mounting: "" | "roof" | "gable";
   setPoint: EntryDraft;
@@ -80,13 +92,33 @@ export interface VentDraft {
   sealedToOpening: "" | "yes" | "no";
   drop: EntryDraft;
   diagnostics: DiagnosticsDraft;
+  condition: VentConditionDraft;
+  /** Partly blocked: how many of the count are blocked. */
+  blockedCount: EntryDraft;
+  /** Partly blocked: percent of the vent blocked (for linear vents and single openings). */
+  blockedPercent: EntryDraft;
+  blockedBy: BlockedByDraft;
 }
+
+export type UnventedInsulation = NonNullable<SpaceRoof["unvented"]>["insulation"];
+export type RoofCovering = NonNullable<NonNullable<SpaceRoof["unvented"]>["roofCovering"]>;
 
 export interface RoofDraft {
   form: SpaceRoof["form"];
   pitch: EntryDraft;
   ridgeLength: EntryDraft;
   eaveLength: EntryDraft;
+  /** "" (vented, the usual) or "unvented" (sealed, insulated at the roof line: IRC R806.5). */
+  assembly: "" | "unvented";
+  insulation: "" | UnventedInsulation;
+  foamR: EntryDraft;
+  foamIsClassII: "" | "yes" | "no";
+  insideEnvelope: "" | "yes" | "no";
+  roofCovering: "" | RoofCovering;
+  shakeGap: "" | "yes" | "no";
+  /** Enclosed rafter bays (cathedral ceiling): bay count and spacing; empty for an open attic. */
+  bayCount: EntryDraft;
+  baySpacing: EntryDraft;
 }
 
 export interface SpaceDraft {
@@ -113,6 +145,7 @@ export const SIZE_MODE: Record<VentKind, SizeMode> = {
   "powered-roof": "powered",
   "powered-gable": "powered",
   "solar-powered": "powered",
+  "whole-house-fan": "powered",
 };
 
 export const DEFAULT_LOCATION: Record<VentKind, "upper" | "lower"> = {
@@ -129,6 +162,7 @@ export const DEFAULT_LOCATION: Record<VentKind, "upper" | "lower"> = {
   "powered-roof": "upper",
   "powered-gable": "upper",
   "solar-powered": "upper",
+  "whole-house-fan": "lower",
 };
 
 export const newId = (): string =>
@@ -144,6 +178,13 @@ export function emptyDiagnostics(): DiagnosticsDraft {
     voltsBelow: emptyEntry(),
     voltsAbove: emptyEntry(),
     winding: { ...emptyEntry(), isOpen: false },
+    isLockedOut: "",
+    isTesterProven: "",
+    windingToGround: { ...emptyEntry(), isOpen: false },
+    hasCapacitor: "",
+    capacitorRated: emptyEntry(),
+    capacitorMeasured: emptyEntry(),
+    overrideTest: "",
   };
 }
 
@@ -165,6 +206,7 @@ export function emptyVent(kind: VentKind): VentDraft {
     grossHeight: emptyEntry(),
     mesh: "1/8",
     louvers: true,
+    louverMaterial: "",
     cfm: emptyEntry(),
     mounting: kind === "powered-gable" ? "gable" : kind === "powered-roof" || kind === "solar-powered" ? "roof" : "",
     setPoint: emptyEntry(),
@@ -172,6 +214,10 @@ export function emptyVent(kind: VentKind): VentDraft {
     sealedToOpening: "",
     drop: emptyEntry(),
     diagnostics: emptyDiagnostics(),
+    condition: "",
+    blockedCount: emptyEntry(),
+    blockedPercent: emptyEntry(),
+    blockedBy: "",
   };
 }
 
@@ -188,8 +234,21 @@ function diagnosticsFromServer(d: FanDiagnostics | undefined): DiagnosticsDraft 
       d.windingResistanceOhms === "open"
         ? { text: "open", value: null, error: null, understood: "Open circuit (no continuity)", isOpen: true }
         : { ...entryFromNumber(d.windingResistanceOhms), isOpen: false },
+    isLockedOut: yesNo(d.isLockedOut),
+    isTesterProven: yesNo(d.isTesterProven),
+    windingToGround:
+      d.windingToGroundOhms === "open"
+        ? { text: "open", value: null, error: null, understood: "Open circuit (OL)", isOpen: true }
+        : { ...entryFromNumber(d.windingToGroundOhms), isOpen: false },
+    hasCapacitor: yesNo(d.hasCapacitor),
+    capacitorRated: entryFromNumber(d.capacitor?.ratedMicrofarads),
+    capacitorMeasured: entryFromNumber(d.capacitor?.measuredMicrofarads),
+    overrideTest: d.overrideTest ?? "",
   };
 }
+
+const yesNo = (value: boolean | undefined): "" | "yes" | "no" => (value === undefined ? "" : value ? "yes" : "no");
+const fromYesNo = (value: "" | "yes" | "no"): boolean | undefined => (value === "" ? undefined : value === "yes");
 
 export function sectionFromServer(section: Section, system: UnitSystem): SectionDraft {
   const draft = emptySection(section.kind);
@@ -225,6 +284,7 @@ export function ventFromServer(vent: Vent, system: UnitSystem): VentDraft {
     grossHeight: entryFromInches(vent.grossHeightIn),
     mesh: vent.covering?.mesh ?? "1/8",
     louvers: vent.covering?.louvers ?? true,
+    louverMaterial: vent.covering?.louverMaterial ?? "",
     cfm: entryFromNumber(vent.cfm),
     mounting: vent.mounting ?? draft.mounting,
     setPoint: entryFromNumber(vent.thermostatSetPointF),
@@ -232,6 +292,10 @@ export function ventFromServer(vent: Vent, system: UnitSystem): VentDraft {
     sealedToOpening: vent.sealedToOpening === undefined ? "" : vent.sealedToOpening ? "yes" : "no",
     drop: entryFromLength(vent.dropBelowRidgeFt, system, { allowZero: true }),
     diagnostics: diagnosticsFromServer(vent.diagnostics),
+    condition: vent.condition ?? "",
+    blockedCount: entryFromNumber(vent.blockedQuantity),
+    blockedPercent: entryFromNumber(vent.blockedShare === undefined ? undefined : Math.round(vent.blockedShare * 1000) / 10),
+    blockedBy: vent.blockedBy ?? "",
   };
 }
 
@@ -244,6 +308,15 @@ export function spaceFromServer(space: Pick<SpaceRecord, "id" | "name" | "roof" 
       pitch: entryFromNumber(space.roof.pitchIn12),
       ridgeLength: entryFromLength(space.roof.ridgeLengthFt, system),
       eaveLength: entryFromLength(space.roof.eaveLengthFt, system),
+      assembly: space.roof.assembly === "unvented" ? "unvented" : "",
+      insulation: space.roof.unvented?.insulation ?? "",
+      foamR: entryFromNumber(space.roof.unvented?.airImpermeableRValue),
+      foamIsClassII: yesNo(space.roof.unvented?.foamIsClassII),
+      insideEnvelope: yesNo(space.roof.unvented?.isInsideThermalEnvelope),
+      roofCovering: space.roof.unvented?.roofCovering ?? "",
+      shakeGap: yesNo(space.roof.unvented?.hasVentedGapUnderShakes),
+      bayCount: entryFromNumber(space.roof.enclosedRafterBays?.bayCount),
+      baySpacing: entryFromNumber(space.roof.enclosedRafterBays?.baySpacingIn),
     },
     sections: space.sections.map((s) => sectionFromServer(s, system)),
     vents: space.vents.map((v) => ventFromServer(v, system)),
@@ -355,7 +428,7 @@ function checkVent(draft: VentDraft): { vent: Vent | null; problems: string[] } 
   } else if (mode === "gross") {
     vent.grossWidthIn = need(draft.grossWidth, "Gross width", problems);
     vent.grossHeightIn = need(draft.grossHeight, "Gross height", problems);
-    vent.covering = { mesh: draft.mesh, louvers: draft.louvers };
+    vent.covering = { mesh: draft.mesh, louvers: draft.louvers, ...(draft.louvers && draft.louverMaterial ? { louverMaterial: draft.louverMaterial } : {}) };
   } else {
     vent.cfm = need(draft.cfm, "Rated airflow (cfm)", problems);
     const quantity = need(draft.quantity, "Count", problems, false);
@@ -371,7 +444,25 @@ function checkVent(draft: VentDraft): { vent: Vent | null; problems: string[] } 
     const d = draft.diagnostics;
     const diagnostics: FanDiagnostics = {};
     if (d.isPowerVerifiedOff) diagnostics.isPowerVerifiedOff = true;
+    const lockedOut = fromYesNo(d.isLockedOut);
+    if (lockedOut !== undefined) diagnostics.isLockedOut = lockedOut;
+    const testerProven = fromYesNo(d.isTesterProven);
+    if (testerProven !== undefined) diagnostics.isTesterProven = testerProven;
+    if (d.overrideTest) diagnostics.overrideTest = d.overrideTest;
     if (d.isPowerVerifiedOff) {
+      if (d.windingToGround.isOpen) diagnostics.windingToGroundOhms = "open";
+      else {
+        const ohms = need(d.windingToGround, "Winding to frame", problems, false);
+        if (ohms !== undefined) diagnostics.windingToGroundOhms = ohms;
+      }
+      const hasCapacitor = fromYesNo(d.hasCapacitor);
+      if (hasCapacitor !== undefined) diagnostics.hasCapacitor = hasCapacitor;
+      if (hasCapacitor !== false) {
+        const rated = need(d.capacitorRated, "Capacitor rating", problems, false);
+        const measured = need(d.capacitorMeasured, "Capacitor reading", problems, false);
+        if (rated !== undefined && measured !== undefined) diagnostics.capacitor = { ratedMicrofarads: rated, measuredMicrofarads: measured };
+        else if (rated !== undefined || measured !== undefined) problems.push("Capacitor: enter both the rating on its label and the reading.");
+      }
       if (d.blade) diagnostics.isBladeFreeToSpin = d.blade === "free";
       if (d.winding.isOpen) diagnostics.windingResistanceOhms = "open";
       else {
@@ -393,7 +484,17 @@ function checkVent(draft: VentDraft): { vent: Vent | null; problems: string[] } 
     }
     if (Object.keys(diagnostics).length > 0) vent.diagnostics = diagnostics;
   }
-  if (!isPoweredKind(draft.kind)) delete vent.diagnostics;
+  if (draft.condition) {
+    vent.condition = draft.condition;
+    if (draft.condition === "partly-blocked") {
+      const count = need(draft.blockedCount, "How many are blocked", problems, false);
+      const percent = need(draft.blockedPercent, "Share blocked", problems, false);
+      if (count !== undefined) vent.blockedQuantity = count;
+      else if (percent !== undefined) vent.blockedShare = percent / 100;
+    }
+    if (draft.blockedBy && draft.condition !== "open" && draft.condition !== "damaged") vent.blockedBy = draft.blockedBy;
+  }
+  if (!isMechanicalKind(draft.kind)) delete vent.diagnostics;
   if (problems.length > 0) return { vent: null, problems };
   const parsed = VentSchema.safeParse(vent);
   if (!parsed.success) return { vent: null, problems: zodMessages(parsed.error.issues) };
@@ -405,8 +506,29 @@ export function buildRoof(draft: RoofDraft): { roof: SpaceRoof; problems: Proble
   const pitch = need(draft.pitch, "Pitch", problems, false);
   const ridge = need(draft.ridgeLength, "Ridge length", problems, false);
   const eave = need(draft.eaveLength, "Eave length", problems, false);
+  const foamR = need(draft.foamR, "Foam or board R-value", problems, false);
+  let sealed: Pick<SpaceRoof, "assembly" | "unvented"> = {};
+  if (draft.assembly === "unvented") {
+    if (!draft.insulation) problems.push("Say how the sealed roof is insulated.");
+    else {
+      const unvented: NonNullable<SpaceRoof["unvented"]> = { insulation: draft.insulation };
+      if (foamR !== undefined) unvented.airImpermeableRValue = foamR;
+      const classII = fromYesNo(draft.foamIsClassII);
+      if (classII !== undefined) unvented.foamIsClassII = classII;
+      const inside = fromYesNo(draft.insideEnvelope);
+      if (inside !== undefined) unvented.isInsideThermalEnvelope = inside;
+      if (draft.roofCovering) unvented.roofCovering = draft.roofCovering;
+      const gap = fromYesNo(draft.shakeGap);
+      if (gap !== undefined) unvented.hasVentedGapUnderShakes = gap;
+      sealed = { assembly: "unvented", unvented };
+    }
+  }
+  const bayCount = need(draft.bayCount, "Rafter bays", problems, false);
+  const baySpacing = need(draft.baySpacing, "Rafter spacing", problems, false);
+  if ((bayCount === undefined) !== (baySpacing === undefined)) problems.push("Rafter bays: enter both the number of bays and the rafter spacing.");
+  const bays = bayCount !== undefined && baySpacing !== undefined ? { enclosedRafterBays: { bayCount, baySpacingIn: baySpacing } } : {};
   return {
-    roof: { form: draft.form, pitchIn12: pitch ?? 6, ridgeLengthFt: ridge ?? null, eaveLengthFt: eave ?? null },
+    roof: { form: draft.form, pitchIn12: pitch ?? 6, ridgeLengthFt: ridge ?? null, eaveLengthFt: eave ?? null, ...sealed, ...bays },
     problems: problems.map((message) => ({ where: "Roof", message })),
   };
 }

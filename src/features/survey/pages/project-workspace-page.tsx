@@ -217,12 +217,13 @@ function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: Pr
   }
 
   const activeDraft = active?.draft ?? null;
-  const { codeBasis, climateZone, ceilingVaporRetarder, roofColor } = fields;
+  const { codeBasis, climateZone, moistureRegime, ceilingVaporRetarder, roofColor } = fields;
+  const upperShareBase = detail.project.upperShareBase;
   const analysis = useMemo(() => {
     if (!activeDraft) return null;
-    const input = toAtticInput({ codeBasis, climateZone, ceilingVaporRetarder, roofColor }, liveSurvey(activeDraft));
+    const input = toAtticInput({ codeBasis, climateZone, moistureRegime, ceilingVaporRetarder, roofColor, upperShareBase }, liveSurvey(activeDraft));
     return { input, result: tryAnalyzeAttic(input) };
-  }, [activeDraft, codeBasis, climateZone, ceilingVaporRetarder, roofColor]);
+  }, [activeDraft, codeBasis, climateZone, moistureRegime, ceilingVaporRetarder, roofColor, upperShareBase]);
 
   const allStates = Object.values(states);
   const combined = combineStates(allStates.map((s) => s.state));
