@@ -11,6 +11,7 @@ import type { Jobs } from "./lib/jobs.ts";
 import { errorMiddleware } from "./lib/error-middleware.ts";
 import { originCheck } from "./lib/csrf.ts";
 import { AppError } from "./lib/errors.ts";
+import { safeInput } from "./lib/validate.ts";
 import { createAudit } from "./lib/audit.ts";
 import { createLucia } from "./modules/auth/lucia.ts";
 import { sessionMiddleware } from "./modules/auth/session.middleware.ts";
@@ -158,6 +159,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(PAYMENTS_WEBHOOK_PATH, paymentsWebhookBody());
   api.use(express.json({ limit: "1mb" }));
   api.use(originCheck({ allowedOrigins: env.APP_ORIGIN ? [env.APP_ORIGIN] : [], exemptPaths: [/^\/webhooks\//] }));
+  api.use(safeInput({ exemptPaths: [/^\/webhooks\//] }));
 
   api.get("/health", async (_req, res) => {
     try {

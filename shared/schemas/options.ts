@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { versionField } from "./input-safety.ts";
 
 /**
  * A design option: what to do with each surveyed vent and what to add, per attic space, plus
@@ -73,7 +74,7 @@ export const DesignOptionInputSchema = z
 export const DesignOptionPatchSchema = z
   .object(optionFields)
   .partial()
-  .extend({ version: z.number({ error: "The version of the option you edited is required." }).int().min(1) })
+  .extend({ version: versionField("option") })
   .strict();
 
 export type AddedItem = z.infer<typeof AddedItemSchema>;

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { versionField } from "./input-safety.ts";
 import { RoofFormSchema, SectionSchema, SiteSchema, VentSchema } from "../ventilation/schema.ts";
 
 /**
@@ -33,7 +34,7 @@ export const SpaceSurveySchema = z.object({
 
 export const SpaceCreateSchema = SpaceSurveySchema.partial({ roof: true, sections: true, vents: true, site: true, notes: true }).strict();
 /** A full save of a space, with the version it was based on (409 when stale). */
-export const SpaceSaveSchema = SpaceSurveySchema.extend({ version: z.number().int().min(1) }).strict();
+export const SpaceSaveSchema = SpaceSurveySchema.extend({ version: versionField("attic space") }).strict();
 
 export type SpaceRoof = z.infer<typeof SpaceRoofSchema>;
 export type SiteChecklist = z.infer<typeof SiteChecklistSchema>;
