@@ -173,6 +173,12 @@ export function createApp(deps: AppDeps): Express {
     }
   });
 
+  // Staff answers (customers, prices, photos, PDFs) stay out of every cache: offices and trucks share
+  // browsers (Decision 6). The homeowner's public routes choose their own caching.
+  api.use((req, res, next) => {
+    if (!req.path.startsWith("/public/")) res.setHeader("Cache-Control", "no-store");
+    next();
+  });
   api.use(sessionMiddleware(lucia, now));
   // Declared routes (server/lib/routes.ts): each carries its method, path and access, listed in app.locals.routes.
   const declared = [

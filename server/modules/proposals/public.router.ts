@@ -69,6 +69,7 @@ export function publicProposalsRouter(service: ProposalsService) {
         const p = await service.byToken(tokenOf(req));
         const file = await service.pdf(p, p, "latest");
         sendPdf(req, res, file);
+        res.set("Cache-Control", "private, max-age=3600");
         await pipeline(file.object.body, res);
       },
     },
