@@ -312,7 +312,7 @@ describe("the inputs that once answered 500, aimed at every route (issue 13)", (
 });
 
 describe("malformed requests on every declared route (fast-check)", () => {
-  it("when 10,000+ malformed requests hit every declared route as owner, estimator and anonymous, then none answers 5xx and every 4xx carries a message", async () => {
+  it("when 5,000+ malformed requests hit every declared route as owner, estimator and anonymous, then none answers 5xx and every 4xx carries a message", async () => {
     const statuses = new Map<number, number>();
     const seenRoutes = new Set<string>();
     const BATCH = 25;
@@ -322,11 +322,14 @@ describe("malformed requests on every declared route (fast-check)", () => {
         results.forEach((s) => statuses.set(s, (statuses.get(s) ?? 0) + 1));
         batch.forEach((r) => seenRoutes.add(`${r.route.method} ${r.route.path}`));
       }),
-      { numRuns: 420, endOnFailure: true },
+      // 200 × 25: since the run stopped signing itself out (issue 13) every request reaches its
+      // handler (surveys analysed, PDFs queued) instead of mostly stopping at 401, so fewer go further.
+      { numRuns: 200, endOnFailure: true },
     );
     // The failing request itself is in the assertion message; the whole batch would be too long to read.
     if (details.failed) throw new Error(`fast-check seed ${details.seed}, path ${details.counterexamplePath}: ${details.errorInstance instanceof Error ? details.errorInstance.message : String(details.errorInstance)}`);
-    expect(sent).toBeGreaterThanOrEqual(10_000);
+    const total = [...statuses.values()].reduce((a, b) => a + b, 0);
+    expect(total).toBeGreaterThanOrEqual(5_000);
     await expectStillSignedIn();
     // Each class that once answered 500 was sent hundreds of times (and every answer above was < 500).
     for (const [what, n] of Object.entries(classCounts)) expect(n, `${what} requests sent`).toBeGreaterThan(200);
@@ -335,6 +338,7 @@ describe("malformed requests on every declared route (fast-check)", () => {
     expect([...statuses.keys()].filter((s) => s >= 400).length).toBeGreaterThanOrEqual(3);
     // Some requests got past the id and role checks to the body checks (400), and some were even accepted.
     expect(statuses.get(400) ?? 0).toBeGreaterThan(500);
+    expect(statuses.get(401) ?? 0, "most requests were signed in").toBeLessThan(total / 2);
     expect([...statuses].filter(([s]) => s < 300).reduce((n, [, c]) => n + c, 0)).toBeGreaterThan(100);
   }, 420_000);
 });
