@@ -62,6 +62,7 @@ export async function processPhoto(bytes: Buffer): Promise<ProcessedPhoto> {
 
 /** A letterhead logo never needs more than this many pixels across (the PDF draws it about 2 in wide). */
 export const MAX_LOGO_WIDTH_PX = 1200;
+export const MAX_LOGO_HEIGHT_PX = 600;
 
 /**
  * A company logo, re-encoded like a photo: the bytes must be PNG or JPEG, and only their pixels are
@@ -74,7 +75,7 @@ export async function processLogo(bytes: Buffer): Promise<{ bytes: Buffer; conte
     throw new AppError("unsupported-media-type", "The logo must be a PNG or JPEG image. Its contents were checked, not its name.", 415, { file: "Choose a PNG or JPEG logo." });
   }
   try {
-    const image = sharp(bytes, { limitInputPixels: MAX_INPUT_PIXELS }).rotate().resize({ width: MAX_LOGO_WIDTH_PX, withoutEnlargement: true });
+    const image = sharp(bytes, { limitInputPixels: MAX_INPUT_PIXELS }).rotate().resize({ width: MAX_LOGO_WIDTH_PX, height: MAX_LOGO_HEIGHT_PX, fit: "inside", withoutEnlargement: true });
     return type.mime === "image/png"
       ? { bytes: await image.png().toBuffer(), contentType: "image/png", ext: "png" }
       : { bytes: await image.jpeg({ quality: 90 }).toBuffer(), contentType: "image/jpeg", ext: "jpg" };
