@@ -111,7 +111,7 @@ describe("a server killed while it mails a proposal", () => {
       (p) => p.renderStatus === "ready" || p.renderStatus === "failed", 30_000);
     expect(proposal).toMatchObject({ status: "sent", renderStatus: "ready" });
     expect(proposal.pdfSnapshotSha256).toBe(proposal.snapshotSha256);
-  });
+  }, 300_000); // above the sum of its steps' own time limits, so a slow step fails with its own message
 
   it("when a send is committed but its e-mail job was never queued, then the recovery sweep queues and sends it once", async () => {
     // The state a server leaves when it dies between committing and queueing: an outbox row
@@ -128,5 +128,5 @@ describe("a server killed while it mails a proposal", () => {
     await t.waitForMail(to, { timeoutMs: 30_000 });
     await new Promise((r) => setTimeout(r, RECOVERY_SECONDS * 2 * 1_000));
     expect(await t.mailCount(to)).toBe(1);
-  });
+  }, 180_000);
 });
