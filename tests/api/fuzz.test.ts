@@ -302,13 +302,13 @@ describe("the inputs that once answered 500, aimed at every route (issue 13)", (
         await Promise.all(batch.map(fire));
         batch.forEach((r) => seenRoutes.add(`${r.route.method} ${r.route.path}`));
       }),
-      { numRuns: 60, endOnFailure: true },
+      { numRuns: 40, endOnFailure: true },
     );
     if (details.failed) throw new Error(`fast-check seed ${details.seed}, path ${details.counterexamplePath}: ${details.errorInstance instanceof Error ? details.errorInstance.message : String(details.errorInstance)}`);
     await expectStillSignedIn();
-    for (const c of Object.keys(CLASSES) as ClassName[]) expect(classCounts[c] - before[c], `${c} requests sent`).toBeGreaterThan(200);
+    for (const c of Object.keys(CLASSES) as ClassName[]) expect(classCounts[c] - before[c], `${c} requests sent`).toBeGreaterThan(150);
     expect(routes().filter((r) => !seenRoutes.has(`${r.method} ${r.path}`)).map((r) => r.path)).toEqual([]);
-  }, 300_000);
+  }, 420_000);
 });
 
 describe("malformed requests on every declared route (fast-check)", () => {

@@ -105,7 +105,9 @@ describe("a server killed while it mails a proposal", () => {
     await new Promise((r) => setTimeout(r, RECOVERY_SECONDS * 3 * 1_000));
     expect(await t.mailCount(homeownerEmail)).toBe(1);
 
-    const [row] = await t.db.select().from(proposalMails).where(eq(proposalMails.dedupeKey, mailKey));
+    // The relay's acceptance and the row's mark are two steps: wait for the mark itself.
+    const row = await until("the outbox row marked delivered", async () => (await t.db.select().from(proposalMails).where(eq(proposalMails.dedupeKey, mailKey)))[0],
+      (r) => Boolean(r?.deliveredAt), 30_000);
     expect(row?.deliveredAt).toBeInstanceOf(Date);
     const proposal = await until("the PDF render", async () => (await t.db.select().from(proposals).where(eq(proposals.id, proposalId)))[0]!,
       (p) => p.renderStatus === "ready" || p.renderStatus === "failed", 30_000);
