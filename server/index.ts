@@ -19,9 +19,9 @@ const server = app.listen(env.PORT, env.HOST, () => {
   logger.info(`Eavesight listening on http://${env.HOST}:${env.PORT}`);
   process.send?.({ ready: true });
 });
-// Node closes an idle keep-alive socket after 5 s; a client (or proxy) that reuses it at that moment
-// gets a reset instead of an answer, which the stress tests saw under load. Idle sockets stay open
-// longer than common proxies' 60 s, so the client side always closes first.
+// Node closes an idle keep-alive socket after 5 s; a client or proxy that reuses it at that moment
+// gets a reset instead of an answer (bench/largest-analysis-bench.ts met it on a loaded machine).
+// Idle sockets stay open longer than common proxies' 60 s, so the other side closes first.
 server.keepAliveTimeout = 65_000;
 server.headersTimeout = 66_000;
 

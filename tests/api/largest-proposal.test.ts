@@ -126,13 +126,13 @@ describe("the largest legal proposal", () => {
     const sent = await send(team.asSales, "post", `/api/proposals/${proposalId}/send`);
     expect(sent.status, JSON.stringify(sent.body).slice(0, 500)).toBe(200);
     phase("sent");
-    let render: { renderStatus: string; renderError: string | null } = { renderStatus: "queued", renderError: null };
-    const deadline = Date.now() + 240_000;
-    while (Date.now() < deadline && (render.renderStatus === "queued" || render.renderStatus === "running")) {
+    let render: { status: string; error: string | null } = { status: "queued", error: null };
+    const deadline = Date.now() + 300_000;
+    while (Date.now() < deadline && render.status !== "ready" && render.status !== "failed") {
       await new Promise((r) => setTimeout(r, 1_000));
-      render = (await team.asSales.get(`/api/proposals/${proposalId}`)).body.proposal;
+      render = (await team.asSales.get(`/api/proposals/${proposalId}/render-status`)).body.render;
     }
-    expect(render, "the largest proposal renders").toMatchObject({ renderStatus: "ready", renderError: null });
+    expect(render, "the largest proposal renders").toMatchObject({ status: "ready", error: null });
 
     phase("rendered");
     const pdf = await team.asSales.get(`/api/proposals/${proposalId}/pdf`).buffer(true).parse((res, done) => {
