@@ -21,8 +21,8 @@ export const CoveringSchema = z.object({ mesh: MeshSizeSchema, louvers: z.boolea
 /**
  * Bounds of one attic space's survey. Sections, vent rows and outline corners are set where no real
  * house reaches (Decision 18: a large custom home surveys to about 10 sections and 40 vent rows; a row
- * carries a quantity, so 12 matching soffit vents are one row) yet where the largest legal survey
- * still analyses in milliseconds and its proposal renders (tests/api/largest-proposal.test.ts).
+ * carries a quantity, so 12 matching soffit vents are one row; common practice, no source), far below
+ * the 2,000 rows whose analysis took ~0.5 s (bench/largest-analysis-bench.ts measures the largest).
  * The client's forms, the API and the PDF all read these.
  */
 export const LIMITS = {

@@ -5,8 +5,8 @@ import { AppError } from "../../lib/errors.ts";
 
 /**
  * The public "is this our PDF?" upload takes no account, so it is held to what a real proposal PDF
- * can be: the largest legal proposal renders to MEASURED (tests/api/largest-proposal.test.ts prints
- * and checks it), and the cap leaves room above that (Decision 17).
+ * can be: the PDF draws photos and logo at print size, so its size follows the counts the limits
+ * allow (Decision 17; tests/api/largest-proposal.test.ts measures the largest one against this cap).
  */
 export const MAX_VERIFY_PDF_BYTES = 12 * 1024 * 1024;
 /** Public uploads hashed at once in one process; more answer 503 with Retry-After. */
