@@ -53,7 +53,7 @@ const KINDS = [
   (i: number) => ({ kind: "soffit-individual", location: "lower", quantity: 1 + (i % 12), nfaSqInPerUnit: 25 }),
   (i: number) => ({ kind: "ridge", location: "upper", lengthFt: 8 + (i % 9), nfaSqInPerFt: 18 }),
   (i: number) => ({ kind: "box", location: "upper", quantity: 1 + (i % 3), nfaSqInPerUnit: 50, dropBelowRidgeFt: 1 + (i % 4) }),
-  (i: number) => ({ kind: "gable-louver", location: "upper", grossWidthIn: 14, grossHeightIn: 24, covering: { mesh: "1/8", louvers: true } }),
+  (_i: number) => ({ kind: "gable-louver", location: "upper", grossWidthIn: 14, grossHeightIn: 24, covering: { mesh: "1/8", louvers: true } }),
   (i: number) => ({ kind: "powered-roof", location: "upper", cfm: 900 + i, dropBelowRidgeFt: 3 }),
 ];
 

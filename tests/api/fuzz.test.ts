@@ -93,7 +93,7 @@ const garbageId = fc.oneof(
 
 /** Past a PostgreSQL integer (2³¹ − 1), a bigint, or JavaScript's safe integers. */
 const overflowInt = fc.oneof(
-  fc.constantFrom(2_147_483_648, -2_147_483_649, 4_294_967_296, 9_223_372_036_854_775_807, 2 ** 53, 2 ** 53 + 2, 1e21, -1e21),
+  fc.constantFrom(2_147_483_648, -2_147_483_649, 4_294_967_296, 2 ** 63, 2 ** 53, 2 ** 53 + 2, 1e21, -1e21),
   fc.integer({ min: 2_147_483_648, max: Number.MAX_SAFE_INTEGER }),
 );
 /** Every C0 and C1 control character but tab, LF and CR (which text may hold), inside otherwise plain text. */
@@ -211,7 +211,6 @@ const requestArb = () => fc.constantFrom(...routes()).chain((route) => {
   });
 });
 
-let sent = 0;
 /** How many requests carried each issue-13 class, so the run proves it tried them. */
 const classCounts = { control: 0, overflow: 0, date: 0, deep: 0 };
 // eslint-disable-next-line no-control-regex
@@ -252,7 +251,6 @@ async function fire(r: FuzzRequest) {
   if (r.body.kind === "json" && r.body.value !== undefined) req = req.set("content-type", "application/json").send(JSON.stringify(r.body.value));
   else if (r.body.kind === "raw") req = req.set("content-type", "application/json").send(r.body.text);
   const res = await req;
-  sent++;
   countClasses(r);
   const what = `${r.as} ${r.route.method.toUpperCase()} ${r.url} body=${JSON.stringify(r.body).slice(0, 300)} → ${res.status} ${JSON.stringify(res.body).slice(0, 300)}`;
   expect(res.status, what).toBeLessThan(500);

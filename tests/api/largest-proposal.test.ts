@@ -39,7 +39,7 @@ const VENT_SHAPES = [
   (i: number) => ({ kind: "ridge", location: "upper", lengthFt: 8 + (i % 9), nfaSqInPerFt: 18 }),
   (i: number) => ({ kind: "box", location: "upper", quantity: 1 + (i % 3), nfaSqInPerUnit: 50, dropBelowRidgeFt: 1 + (i % 4) }),
   (i: number) => ({ kind: "gable-louver", location: "upper", grossWidthIn: 12 + (i % 6), grossHeightIn: 18, covering: { mesh: "1/8", louvers: true } }),
-  (i: number) => ({ kind: "turbine", location: "upper", quantity: 1, nfaSqInPerUnit: 112, dropBelowRidgeFt: 2 }),
+  (_i: number) => ({ kind: "turbine", location: "upper", quantity: 1, nfaSqInPerUnit: 112, dropBelowRidgeFt: 2 }),
 ];
 const longText = (n: number, seed: string) => `${seed} `.repeat(Math.ceil(n / (seed.length + 1))).slice(0, n).trim();
 
