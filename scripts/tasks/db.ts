@@ -20,7 +20,7 @@ const file = argv.slice(1).find((a, i, rest) => !a.startsWith("--") && rest[i - 
 
 /** The file store as the server would open it (the database URL is not needed here). */
 function fileStorage() {
-  return createStorage(parseEnv({ DATABASE_URL: "postgres://backup@127.0.0.1/unused", ...process.env }));
+  return createStorage(parseEnv({ DATABASE_URL: "postgres://backup@127.0.0.1/unused", APP_ORIGIN: "http://127.0.0.1:3000", ...process.env }));
 }
 
 function usage(): never {
