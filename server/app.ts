@@ -11,6 +11,7 @@ import { clientRoutes, compressAnswers } from "./lib/delivery.ts";
 import { errorMiddleware } from "./lib/error-middleware.ts";
 import { originCheck } from "./lib/csrf.ts";
 import { AppError } from "./lib/errors.ts";
+import { safeInput } from "./lib/validate.ts";
 import { createAudit } from "./lib/audit.ts";
 import { requestScopedDb } from "./lib/request-transaction.ts";
 import { createsInTransaction } from "./lib/idempotency.ts";
@@ -171,6 +172,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(PAYMENTS_WEBHOOK_PATH, paymentsWebhookBody());
   api.use(express.json({ limit: "1mb" }));
   api.use(originCheck({ allowedOrigins: [env.APP_ORIGIN], exemptPaths: [/^\/webhooks\//] }));
+  api.use(safeInput({ exemptPaths: [/^\/webhooks\//] }));
 
   api.get("/health", async (_req, res) => {
     try {
@@ -184,6 +186,12 @@ export function createApp(deps: AppDeps): Express {
     }
   });
 
+  // Staff answers (customers, prices, photos, PDFs) stay out of every cache: offices and trucks share
+  // browsers (Decision 6). The homeowner's public routes choose their own caching.
+  api.use((req, res, next) => {
+    if (!req.path.startsWith("/public/")) res.setHeader("Cache-Control", "no-store");
+    next();
+  });
   api.use(sessionMiddleware(lucia, now));
   // Declared routes (server/lib/routes.ts): each carries its method, path and access, listed in app.locals.routes.
   const declared = [

@@ -19,6 +19,11 @@ const server = app.listen(env.PORT, env.HOST, () => {
   logger.info(`Eavesight listening on http://${env.HOST}:${env.PORT}`);
   process.send?.({ ready: true });
 });
+// Node closes an idle keep-alive socket after 5 s; a client or proxy that reuses it at that moment
+// gets a reset instead of an answer (bench/largest-analysis-bench.ts met it on a loaded machine).
+// Idle sockets stay open longer than common proxies' 60 s, so the other side closes first.
+server.keepAliveTimeout = 65_000;
+server.headersTimeout = 66_000;
 
 // pg-boss's background loops can reject while the database is briefly down (e.g. marking a job
 // failed); on Node 20 an unhandled rejection would end the process. Log it and carry on: the

@@ -3,10 +3,10 @@ import { ZodError } from "zod";
 import { AppError } from "./errors.ts";
 import type { Logger } from "./logger.ts";
 
-/** Postgres says the server is unreachable or shutting down: a 503, not our bug. */
+/** Postgres says the server is unreachable or shutting down, or the database is gone for a moment (3D000, while `db:restore` swaps it): a 503, not our bug. */
 const UNAVAILABLE_CODES = new Set([
   "ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "EPIPE", "CONNECT_TIMEOUT", "CONNECTION_CLOSED", "CONNECTION_ENDED",
-  "CONNECTION_DESTROYED", "57P01", "57P02", "57P03", "08006", "08001", "08003", "08004",
+  "CONNECTION_DESTROYED", "57P01", "57P02", "57P03", "3D000", "08006", "08001", "08003", "08004",
 ]);
 /** Drizzle wraps driver errors (DrizzleQueryError.cause), so the whole cause chain is looked at. */
 export function isDatabaseUnavailable(err: unknown): boolean {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { isDueToExpire, linkExpiresAt, linkState, reminderDecision, type ReminderFacts } from "./lifecycle";
+import { isDueToExpire, linkExpiresAt, linkState, MAX_VALID_DAYS, reminderDecision, validUntilProblem, type ReminderFacts } from "./lifecycle";
 
 const sent: ReminderFacts = {
   status: "sent", sentAt: new Date("2026-12-01T10:00:00Z"), viewedAt: null, reminderSentAt: null,
@@ -29,5 +29,16 @@ describe("proposal lifecycle", () => {
     expect(reminderDecision({ ...sent, reminderSentAt: new Date("2026-12-04T11:00:00Z") }, new Date("2026-12-06T00:00:00Z"), 3).shouldSend).toBe(false);
     expect(reminderDecision(sent, new Date("2027-01-02T00:00:00Z"), 3)).toEqual({ shouldSend: false, reason: "the link is expired" });
     expect(reminderDecision(sent, new Date("2026-12-20T00:00:00Z"), null).shouldSend).toBe(false);
+  });
+});
+
+describe("validUntilProblem", () => {
+  it("when the date is today up to a year ahead, then it is accepted; before today or past a year, then it says why", () => {
+    expect(validUntilProblem("2026-12-03", "2026-12-03")).toBeNull();
+    expect(validUntilProblem("2027-01-15", "2026-12-03")).toBeNull();
+    expect(validUntilProblem("2027-12-03", "2026-12-03")).toBeNull();
+    expect(validUntilProblem("2026-12-02", "2026-12-03")).toBe("The validity date can't be in the past.");
+    expect(validUntilProblem("2027-12-04", "2026-12-03")).toBe(`The validity date is at most ${MAX_VALID_DAYS} days ahead (until 2027-12-03).`);
+    expect(validUntilProblem("9999-12-31", "2026-12-03")).toBe("The validity date is at most 365 days ahead (until 2027-12-03).");
   });
 });

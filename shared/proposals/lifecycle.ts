@@ -16,6 +16,27 @@ export function linkExpiresAt(validUntil: string): Date {
   return new Date(Date.parse(`${validUntil}T12:00:00Z`) + DAY_MS);
 }
 
+/**
+ * How far ahead a proposal may be valid. Prices and code editions move; a year is already longer than
+ * contractors hold a price (common practice: 30 to 90 days). It also keeps every date the product
+ * derives from it (link expiry, reminders) well inside what PostgreSQL and JavaScript dates hold.
+ */
+export const MAX_VALID_DAYS = 365;
+
+/**
+ * Why a validity date (YYYY-MM-DD, a real calendar date) can't be used today, or null when it can.
+ *
+ * @example
+ * validUntilProblem("2027-01-15", "2026-12-03") // null
+ * validUntilProblem("9999-12-31", "2026-12-03") // "The validity date is at most 365 days ahead (until 2027-12-03)."
+ */
+export function validUntilProblem(validUntil: string, todayIso: string): string | null {
+  if (validUntil < todayIso) return "The validity date can't be in the past.";
+  const latest = new Date(Date.parse(`${todayIso}T00:00:00Z`) + MAX_VALID_DAYS * DAY_MS).toISOString().slice(0, 10);
+  if (validUntil > latest) return `The validity date is at most ${MAX_VALID_DAYS} days ahead (until ${latest}).`;
+  return null;
+}
+
 export interface LinkFacts {
   status: ProposalStatus;
   supersededBy: string | null;

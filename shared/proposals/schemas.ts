@@ -4,6 +4,7 @@
  */
 import { z } from "zod";
 import { UpperShareBaseSchema } from "../ventilation/schema";
+import { versionField } from "../schemas/input-safety.ts";
 
 /** No control characters (tabs, new lines, escapes) in a one-line name. */
 // eslint-disable-next-line no-control-regex
@@ -57,7 +58,13 @@ export const CompanyProfilePatchSchema = z.object({
 }).partial().strict();
 export type CompanyProfilePatch = z.infer<typeof CompanyProfilePatchSchema>;
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "Use a date like 2026-12-31.").refine((v) => !Number.isNaN(Date.parse(`${v}T00:00:00Z`)), "That is not a real date.");
+/** A calendar date that exists: 2027-02-29 or 2026-13-01 are refused (Date.parse would roll them over). */
+const isRealDate = (v: string) => {
+  const [y, m, d] = v.split("-").map(Number) as [number, number, number];
+  const date = new Date(Date.UTC(y, m - 1, d));
+  return date.getUTCFullYear() === y && date.getUTCMonth() === m - 1 && date.getUTCDate() === d;
+};
+const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "Use a date like 2026-12-31.").refine(isRealDate, "That is not a real date.");
 
 export const ProposalCreateSchema = z.object({
   optionIds: z.array(z.string().uuid("Choose design options of this project.")).min(1, "Choose at least one design option.").max(6, "At most 6 options in one proposal."),
@@ -67,7 +74,7 @@ export const ProposalCreateSchema = z.object({
 export const ScopeTextSchema = z.array(z.string().trim().min(1, "A scope line can't be empty.").max(1_000)).max(60);
 
 export const ProposalPatchSchema = z.object({
-  version: z.number({ error: "The version of the proposal you edited is required." }).int().min(1),
+  version: versionField("proposal"),
   coverNote: optionalText("The cover note", 5_000),
   terms: optionalText("The terms", 20_000),
   validUntil: isoDate,

@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { versionField } from "./input-safety.ts";
+import { LIMITS } from "../ventilation/schema.ts";
 
 /**
  * A design option: what to do with each surveyed vent and what to add, per attic space, plus
@@ -25,7 +27,7 @@ export const OptionSpaceSchema = z.object({
   spaceId: z.string().uuid(),
   /** Action per existing vent id; a vent not listed is kept. */
   ventActions: z.record(z.string().max(100), z.enum(VENT_ACTIONS)).default({}),
-  added: z.array(AddedItemSchema).max(200).default([]),
+  added: z.array(AddedItemSchema).max(40, "At most 40 added items per space.").default([]),
   /** Site fixes the option includes, e.g. clearing blocked soffits, sealing a gable fan opening. */
   siteFixes: z.object({ clearsBlockedSoffits: z.boolean().optional(), sealsGableFan: z.boolean().optional() }).default({}),
 });
@@ -47,8 +49,8 @@ export const AdjustmentSchema = z.discriminatedUnion("kind", [
 const optionFields = {
   name: z.string().trim().min(1, "Name the option.").max(120),
   notes: z.string().max(5_000).nullable(),
-  spaces: z.array(OptionSpaceSchema).max(20),
-  laborLines: z.array(LaborLineSchema).max(100),
+  spaces: z.array(OptionSpaceSchema).max(LIMITS.maxSpacesPerProject, `An option covers at most ${LIMITS.maxSpacesPerProject} attic spaces.`),
+  laborLines: z.array(LaborLineSchema).max(30, "At most 30 labour lines."),
   discount: AdjustmentSchema,
   isKept: z.boolean(),
   /** How it was made: by hand, or by the generator with its explanation. */
@@ -73,7 +75,7 @@ export const DesignOptionInputSchema = z
 export const DesignOptionPatchSchema = z
   .object(optionFields)
   .partial()
-  .extend({ version: z.number({ error: "The version of the option you edited is required." }).int().min(1) })
+  .extend({ version: versionField("option") })
   .strict();
 
 export type AddedItem = z.infer<typeof AddedItemSchema>;

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { versionField } from "./input-safety.ts";
 import { CodeBasisSchema, RoofColorSchema, VaporRetarderSchema } from "../ventilation/schema.ts";
 
 /** Request contracts for customers and projects, shared by the client's forms and the server. */
@@ -49,7 +50,7 @@ export const ProjectInputSchema = z
 export const ProjectPatchSchema = z
   .object(projectFields)
   .partial()
-  .extend({ version: z.number({ error: "The version of the project you edited is required." }).int().min(1) })
+  .extend({ version: versionField("project") })
   .strict();
 
 export const ListQuerySchema = z.object({

@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { AtticAssemblySchema, EnclosedRafterBaysSchema, RoofFormSchema, SectionSchema, SiteSchema, UnventedAssemblySchema, VentSchema } from "../ventilation/schema.ts";
+import { versionField } from "./input-safety.ts";
+import { AtticAssemblySchema, EnclosedRafterBaysSchema, LIMITS, RoofFormSchema, SectionSchema, SiteSchema, UnventedAssemblySchema, VentSchema } from "../ventilation/schema.ts";
 
 /**
  * One separately vented attic space as the estimator records it. Sections and vents use the
@@ -33,15 +34,15 @@ export const SiteChecklistSchema = SiteSchema.extend({
 export const SpaceSurveySchema = z.object({
   name: z.string().trim().min(1, "Name the space (e.g. Main attic).").max(120, "Use at most 120 characters."),
   roof: SpaceRoofSchema,
-  sections: z.array(SectionSchema).max(200, "At most 200 sections."),
-  vents: z.array(VentSchema).max(2_000, "At most 2,000 vents."),
+  sections: z.array(SectionSchema).max(LIMITS.maxSections, `At most ${LIMITS.maxSections} sections in one space.`),
+  vents: z.array(VentSchema).max(LIMITS.maxVents, `At most ${LIMITS.maxVents} vent rows in one space (give a row a quantity for identical vents).`),
   site: SiteChecklistSchema.default({}),
   notes: z.string().max(5_000, "Notes must be at most 5,000 characters.").nullable().default(null),
 });
 
 export const SpaceCreateSchema = SpaceSurveySchema.partial({ roof: true, sections: true, vents: true, site: true, notes: true }).strict();
 /** A full save of a space, with the version it was based on (409 when stale). */
-export const SpaceSaveSchema = SpaceSurveySchema.extend({ version: z.number().int().min(1) }).strict();
+export const SpaceSaveSchema = SpaceSurveySchema.extend({ version: versionField("attic space") }).strict();
 
 export type SpaceRoof = z.infer<typeof SpaceRoofSchema>;
 export type SiteChecklist = z.infer<typeof SiteChecklistSchema>;

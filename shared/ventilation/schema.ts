@@ -32,13 +32,22 @@ export const LouverMaterialSchema = z.enum(["wood", "metal"]);
 export const CoveringSchema = z.object({ mesh: MeshSizeSchema, louvers: z.boolean(), louverMaterial: LouverMaterialSchema.optional() });
 
 /** Limits: generous for any house, small enough that sums stay finite. */
+/**
+ * Bounds of one attic space's survey. Sections, vent rows and outline corners are set where no real
+ * house reaches (Decision 18: a large custom home surveys to about 10 sections and 40 vent rows; a row
+ * carries a quantity, so 12 matching soffit vents are one row; common practice, no source), far below
+ * the 2,000 rows whose analysis took ~0.5 s (bench/largest-analysis-bench.ts measures the largest).
+ * The client's forms, the API and the PDF all read these.
+ */
 export const LIMITS = {
   maxSideFt: 1_000,
   maxCoordinateFt: 10_000,
   maxSectionAreaSqFt: 200_000,
-  maxPolygonPoints: 500,
-  maxSections: 200,
-  maxVents: 2_000,
+  maxPolygonPoints: 200,
+  maxSections: 40,
+  maxVents: 150,
+  /** Separately vented attic spaces in one project (main attic, garage, additions, porches). */
+  maxSpacesPerProject: 8,
   maxPitchIn12: 24,
   maxQuantity: 1_000,
   maxNfaSqInPerUnit: 100_000,
@@ -78,7 +87,7 @@ export const RectSectionSchema = z.object({
 export const PolygonSectionSchema = z
   .object({
     kind: z.literal("polygon"),
-    pointsFt: z.array(z.tuple([coordinate, coordinate])).min(3, "An outline needs at least 3 corners.").max(LIMITS.maxPolygonPoints),
+    pointsFt: z.array(z.tuple([coordinate, coordinate])).min(3, "An outline needs at least 3 corners.").max(LIMITS.maxPolygonPoints, `An outline has at most ${LIMITS.maxPolygonPoints} corners.`),
     ...roofFields,
   })
   .superRefine((section, ctx) => {
@@ -256,8 +265,8 @@ export const AtticInputSchema = z
     unvented: UnventedAssemblySchema.optional(),
     /** The company's reading of the upper-vent share; the literal "required" when absent. */
     upperShareBase: UpperShareBaseSchema.optional(),
-    sections: z.array(SectionSchema).min(1, "Add at least one section of attic floor.").max(LIMITS.maxSections),
-    vents: z.array(VentSchema).max(LIMITS.maxVents),
+    sections: z.array(SectionSchema).min(1, "Add at least one section of attic floor.").max(LIMITS.maxSections, `At most ${LIMITS.maxSections} sections in one space.`),
+    vents: z.array(VentSchema).max(LIMITS.maxVents, `At most ${LIMITS.maxVents} vent rows in one space (give a row a quantity for identical vents).`),
     site: SiteSchema.optional(),
   })
   .superRefine((input, ctx) => {

@@ -47,13 +47,13 @@ describe("photo upload", () => {
     const full = await getBytes(team.asSales, photo.url);
     expect(full.status).toBe(200);
     expect(full.headers["content-type"]).toBe("image/png");
-    expect(full.headers["cache-control"]).toMatch(/^private/);
+    expect(full.headers["cache-control"]).toBe("no-store");
     expect(await sharp(full.body as Buffer).metadata()).toMatchObject({ format: "png", width: 1000, height: 500 });
 
     const thumb = await getBytes(team.asSales, photo.thumbUrl);
     expect(thumb.status).toBe(200);
     expect(thumb.headers["content-type"]).toBe("image/webp");
-    expect(thumb.headers["cache-control"]).toMatch(/^private/);
+    expect(thumb.headers["cache-control"]).toBe("no-store");
     expect(await sharp(thumb.body as Buffer).metadata()).toMatchObject({ format: "webp", width: 480, height: 240 });
 
     const detail = await team.asSales.get(`/api/projects/${projectId}`);

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { startTestApp, type TestApp } from "../setup/test-app.ts";
+import { LIMITS } from "../../shared/ventilation/index.ts";
 import { createCustomer, createProject, createSpace, mainAttic, makeTeam, send, type Team } from "../setup/survey-fixtures.ts";
 
 let t: TestApp;
@@ -59,6 +60,10 @@ describe("attic spaces", () => {
   });
 
   describe("copy vents", () => {
+    // A project has at most LIMITS.maxSpacesPerProject spaces: each group of tests starts its own.
+    beforeAll(async () => {
+      projectId = (await createProject(team.asOwner, (await createCustomer(team.asOwner, { name: "Linnea Brask" })).id)).id;
+    });
     it("when vents are copied from another space, then they are appended with new ids, without the other fan's readings or sections", async () => {
       const source = await createSpace(team.asEstimator, projectId, {
         ...mainAttic, name: "Source attic",
@@ -100,6 +105,7 @@ describe("attic spaces", () => {
   describe("validation", () => {
     let spaceId: string;
     beforeAll(async () => {
+      projectId = (await createProject(team.asOwner, (await createCustomer(team.asOwner, { name: "Linnea Brask" })).id)).id;
       spaceId = (await createSpace(team.asEstimator, projectId, { ...mainAttic, name: "Validation attic" })).id;
     });
     const body = () => ({ ...mainAttic, name: "Validation attic", version: 1 });
@@ -146,5 +152,15 @@ describe("attic spaces", () => {
       expect(extra.status).toBe(400);
       expect(extra.body.error.fields).toHaveProperty("version");
     });
+  });
+});
+
+describe("the limit of spaces in a project", () => {
+  it(`when a project already has ${LIMITS.maxSpacesPerProject} attic spaces, then another answers 400 naming the limit`, async () => {
+    const pid = (await createProject(team.asOwner, (await createCustomer(team.asOwner, { name: "Many Attics" })).id)).id;
+    for (let i = 0; i < LIMITS.maxSpacesPerProject; i++) await createSpace(team.asEstimator, pid, { name: `Space ${i + 1}` });
+    const extra = await send(team.asEstimator, "post", `/api/projects/${pid}/spaces`, { name: "One too many" });
+    expect(extra.status).toBe(400);
+    expect(extra.body.error.fields.name).toMatch(new RegExp(`At most ${LIMITS.maxSpacesPerProject} attic spaces`));
   });
 });

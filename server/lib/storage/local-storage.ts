@@ -1,5 +1,5 @@
 import { createReadStream } from "node:fs";
-import { mkdir, rename, stat, unlink, writeFile } from "node:fs/promises";
+import { mkdir, readdir, rename, stat, unlink, writeFile } from "node:fs/promises";
 import { randomUUID } from "node:crypto";
 import path from "node:path";
 import { assertKey, type Storage } from "./storage.ts";
@@ -37,6 +37,21 @@ export function createLocalStorage(rootDir: string): Storage {
         await unlink(fileOf(key));
       } catch (err) {
         if (!isMissing(err)) throw err;
+      }
+    },
+    async *list() {
+      let entries: string[];
+      try {
+        entries = await readdir(root, { recursive: true });
+      } catch (err) {
+        if (isMissing(err)) return;
+        throw err;
+      }
+      for (const entry of entries) {
+        const key = entry.split(path.sep).join("/");
+        // Half-written files (put's ".part") and folders are not objects.
+        if (key.endsWith(".part") || !(await stat(path.join(root, entry))).isFile()) continue;
+        yield key;
       }
     },
   };

@@ -1,5 +1,5 @@
 import { Readable } from "node:stream";
-import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client, S3ServiceException } from "@aws-sdk/client-s3";
+import { DeleteObjectCommand, GetObjectCommand, ListObjectsV2Command, PutObjectCommand, S3Client, S3ServiceException } from "@aws-sdk/client-s3";
 import { assertKey, type Storage } from "./storage.ts";
 
 export interface S3StorageOptions {
@@ -43,6 +43,14 @@ export function createS3Storage(opts: S3StorageOptions): Storage {
     async delete(key) {
       assertKey(key);
       await client.send(new DeleteObjectCommand({ Bucket: opts.bucket, Key: key }));
+    },
+    async *list() {
+      let token: string | undefined;
+      do {
+        const page = await client.send(new ListObjectsV2Command({ Bucket: opts.bucket, ContinuationToken: token }));
+        for (const object of page.Contents ?? []) if (object.Key) yield object.Key;
+        token = page.IsTruncated ? page.NextContinuationToken : undefined;
+      } while (token);
     },
   };
 }

@@ -11,6 +11,8 @@ export interface Storage {
   get(key: string): Promise<StoredObject | null>;
   /** Removes the object; removing a missing key is not an error. */
   delete(key: string): Promise<void>;
+  /** Every stored key (for backups), in no particular order. */
+  list(): AsyncIterable<string>;
 }
 
 export interface StoredObject {

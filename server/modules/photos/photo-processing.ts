@@ -59,3 +59,28 @@ export async function processPhoto(bytes: Buffer): Promise<ProcessedPhoto> {
     throw new AppError("unreadable-image", message, 400, { file: message });
   }
 }
+
+/** A letterhead logo never needs more than this many pixels across (the PDF draws it about 2 in wide). */
+export const MAX_LOGO_WIDTH_PX = 1200;
+export const MAX_LOGO_HEIGHT_PX = 600;
+
+/**
+ * A company logo, re-encoded like a photo: the bytes must be PNG or JPEG, and only their pixels are
+ * kept (no EXIF or text chunks, nothing appended after the image). PNG stays PNG for transparency;
+ * anything wider than MAX_LOGO_WIDTH_PX is scaled down.
+ */
+export async function processLogo(bytes: Buffer): Promise<{ bytes: Buffer; contentType: "image/png" | "image/jpeg"; ext: "png" | "jpg" }> {
+  const type = await fileTypeFromBuffer(bytes);
+  if (!type || (type.mime !== "image/png" && type.mime !== "image/jpeg")) {
+    throw new AppError("unsupported-media-type", "The logo must be a PNG or JPEG image. Its contents were checked, not its name.", 415, { file: "Choose a PNG or JPEG logo." });
+  }
+  try {
+    const image = sharp(bytes, { limitInputPixels: MAX_INPUT_PIXELS }).rotate().resize({ width: MAX_LOGO_WIDTH_PX, height: MAX_LOGO_HEIGHT_PX, fit: "inside", withoutEnlargement: true });
+    return type.mime === "image/png"
+      ? { bytes: await image.png().toBuffer(), contentType: "image/png", ext: "png" }
+      : { bytes: await image.jpeg({ quality: 90 }).toBuffer(), contentType: "image/jpeg", ext: "jpg" };
+  } catch {
+    const message = "The logo could not be read; the file may be damaged. Please try another file.";
+    throw new AppError("unreadable-image", message, 400, { file: message });
+  }
+}

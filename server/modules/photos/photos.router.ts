@@ -61,8 +61,6 @@ export function photosRouter(service: PhotosService) {
         const file = await service.open(actorOf(req), id, thumb === "1" || thumb === "true");
         res.set({
           "Content-Type": file.contentType,
-          // Only this signed-in browser may keep a copy; shared caches must not.
-          "Cache-Control": "private, max-age=86400",
           "Content-Disposition": "inline",
           ...(file.sizeBytes !== null ? { "Content-Length": String(file.sizeBytes) } : {}),
         });

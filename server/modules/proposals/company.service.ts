@@ -1,4 +1,4 @@
-import { fileTypeFromBuffer } from "file-type";
+import { processLogo } from "../photos/photo-processing.ts";
 import { AppError, notFound } from "../../lib/errors.ts";
 import type { Actor } from "../../lib/request-context.ts";
 import type { Storage } from "../../lib/storage/index.ts";
@@ -46,18 +46,15 @@ export function createCompanyService(deps: { repo: ProposalsRepository; storage:
       return presentCompany(updated!);
     },
 
-    /** PNG or JPEG only, checked by the bytes; stored under a key made from its hash. */
+    /** PNG or JPEG only, checked by the bytes and re-encoded (processLogo); stored under a key made from its hash. */
     async setLogo(actor: Actor, file: { buffer: Buffer } | undefined) {
       if (!file) throw new AppError("invalid-input", "Send the logo in the form field named file.", 400, { file: "Choose a PNG or JPEG logo." });
-      const type = await fileTypeFromBuffer(file.buffer);
-      if (!type || (type.mime !== "image/png" && type.mime !== "image/jpeg")) {
-        throw new AppError("unsupported-media-type", "The logo must be a PNG or JPEG image. Its contents were checked, not its name.", 415, { file: "Choose a PNG or JPEG logo." });
-      }
+      const logo = await processLogo(file.buffer);
       const c = await current(actor);
-      const sha256 = sha256Hex(file.buffer);
-      const key = `companies/${c.id}/logo-${sha256}.${type.ext}`;
-      await deps.storage.put(key, file.buffer, type.mime);
-      const settings: CompanySettings = { ...(c.settings as CompanySettings), logoStorageKey: key, logoContentType: type.mime, logoSha256: sha256 };
+      const sha256 = sha256Hex(logo.bytes);
+      const key = `companies/${c.id}/logo-${sha256}.${logo.ext}`;
+      await deps.storage.put(key, logo.bytes, logo.contentType);
+      const settings: CompanySettings = { ...(c.settings as CompanySettings), logoStorageKey: key, logoContentType: logo.contentType, logoSha256: sha256 };
       return presentCompany((await repo.updateCompany(actor, { settings: settings as Record<string, unknown> }))!);
     },
 

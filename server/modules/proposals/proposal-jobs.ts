@@ -1,3 +1,4 @@
+import sharp from "sharp";
 import type PgBoss from "pg-boss";
 import type { Logger } from "../../lib/logger.ts";
 import { createQueues, type Jobs } from "../../lib/jobs.ts";
@@ -33,6 +34,21 @@ async function dataUrlOf(storage: Storage, key: string, contentType: string): Pr
   if (!object) return null;
   return `data:${contentType};base64,${(await readAll(object)).toString("base64")}`;
 }
+
+/**
+ * An image as the PDF draws it: scaled to fit `box` (pixels; the page shows photos about 3.3 in wide,
+ * so 800 px is ~240 dpi) and re-encoded, so a proposal's size depends on how many images it has, not
+ * on the phone's camera. That bound is what caps the public PDF check (uploads.ts).
+ */
+async function pdfImageDataUrl(storage: Storage, key: string, box: { widthPx: number; heightPx: number }, as: "jpeg" | "png"): Promise<string | null> {
+  const object = await storage.get(key);
+  if (!object) return null;
+  const image = sharp(await readAll(object)).resize({ width: box.widthPx, height: box.heightPx, fit: "inside", withoutEnlargement: true });
+  const bytes = as === "png" ? await image.png({ compressionLevel: 9 }).toBuffer() : await image.flatten({ background: "#ffffff" }).jpeg({ quality: 78 }).toBuffer();
+  return `data:image/${as};base64,${bytes.toString("base64")}`;
+}
+export const PDF_PHOTO_BOX = { widthPx: 800, heightPx: 800 } as const;
+export const PDF_LOGO_BOX = { widthPx: 600, heightPx: 300 } as const;
 
 /**
  * Background work of proposals on pg-boss: rendering PDFs (with retries), the signed copy and
@@ -97,12 +113,12 @@ export function createProposalJobs(deps: {
   }
 
   async function assets(snapshot: ProposalSnapshot) {
-    const logoDataUrl = snapshot.company.logo ? await dataUrlOf(storage, snapshot.company.logo.storageKey, snapshot.company.logo.contentType) : null;
+    const logo = snapshot.company.logo;
+    const logoDataUrl = logo ? await pdfImageDataUrl(storage, logo.storageKey, PDF_LOGO_BOX, logo.contentType === "image/png" ? "png" : "jpeg") : null;
     const photoDataUrls: Record<string, string> = {};
     for (const photo of snapshot.photos) {
-      // react-pdf draws JPEG and PNG only; other photo formats are left out of the PDF.
-      if (photo.contentType !== "image/jpeg" && photo.contentType !== "image/png") continue;
-      const url = await dataUrlOf(storage, photo.storageKey, photo.contentType);
+      // Every stored photo format (JPEG, PNG, WebP) is drawn as a JPEG of the PDF's size.
+      const url = await pdfImageDataUrl(storage, photo.storageKey, PDF_PHOTO_BOX, "jpeg");
       if (url) photoDataUrls[photo.id] = url;
     }
     return { logoDataUrl, photoDataUrls };

@@ -35,7 +35,7 @@ export function proposalsRouter(service: ProposalsService, company: CompanyServi
       method: "get", path: "/company/logo", access: "signed-in",
       handler: async (req, res) => {
         const { object, contentType } = await company.openLogo(actorOf(req));
-        res.set({ "Content-Type": contentType, "Cache-Control": "private, max-age=300" });
+        res.set({ "Content-Type": contentType });
         await pipeline(object.body, res);
       },
     },
@@ -106,7 +106,6 @@ export function sendPdf(req: Request, res: import("express").Response, file: { s
     "Content-Disposition": `attachment; filename="${file.filename}"`,
     ETag: `"${file.sha256}"`,
     "X-Content-SHA256": file.sha256,
-    "Cache-Control": "private, max-age=3600",
     ...(file.object.sizeBytes !== null ? { "Content-Length": String(file.object.sizeBytes) } : {}),
   });
   void req;

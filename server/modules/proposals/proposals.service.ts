@@ -3,7 +3,7 @@ import { AppError, conflict, notFound } from "../../lib/errors.ts";
 import type { Actor, RequestMeta } from "../../lib/request-context.ts";
 import type { Storage } from "../../lib/storage/index.ts";
 import { hashToken, newToken } from "../../lib/tokens.ts";
-import { linkExpiresAt, linkState } from "../../../shared/proposals/lifecycle.ts";
+import { linkExpiresAt, linkState, validUntilProblem } from "../../../shared/proposals/lifecycle.ts";
 import { scopeOfWork } from "../../../shared/proposals/scope-of-work.ts";
 import type { AcceptInput, ProposalPatch } from "../../../shared/proposals/schemas.ts";
 import type { ProposalSnapshot, ScopeText, SignatureImage } from "../../../shared/proposals/types.ts";
@@ -150,7 +150,8 @@ export function createProposalsService(deps: {
       const options = await optionsOf(actor, project.id, input.optionIds);
       const company = await repo.company(actor);
       const validUntil = input.validUntil ?? new Date(deps.now().getTime() + DEFAULT_VALID_DAYS * 86_400_000).toISOString().slice(0, 10);
-      if (validUntil < today()) throw invalid("validUntil", "The validity date can't be in the past.");
+      const dateProblem = validUntilProblem(validUntil, today());
+      if (dateProblem) throw invalid("validUntil", dateProblem);
       const id = randomUUID();
       const row = await repo.insert(actor, {
         id, projectId, seriesId: id, revision: 1, validUntil, optionIds: options.map((o) => o.id),
@@ -176,7 +177,8 @@ export function createProposalsService(deps: {
       if (p.status === "accepted") throw conflict("This proposal was accepted and can no longer be changed.", "accepted-locked");
       if (p.supersededBy) throw new AppError("superseded", "A newer revision of this proposal exists; edit that one.", 409, {}, { supersededBy: p.supersededBy });
       const { version, ...patch } = input;
-      if (patch.validUntil !== undefined && patch.validUntil < today()) throw invalid("validUntil", "The validity date can't be in the past.");
+      const dateProblem = patch.validUntil === undefined ? null : validUntilProblem(patch.validUntil, today());
+      if (dateProblem) throw invalid("validUntil", dateProblem);
       const values: Record<string, unknown> = { ...patch };
       if (patch.optionIds) {
         const options = await optionsOf(actor, p.projectId, patch.optionIds);
@@ -246,6 +248,9 @@ export function createProposalsService(deps: {
       if (p.supersededBy) throw new AppError("superseded", "A newer revision of this proposal exists; send that one.", 409, {}, { supersededBy: p.supersededBy });
       if (p.status !== "draft") throw conflict("This proposal was already sent. Change it to make a new revision, then send that.", "already-sent");
       if (p.validUntil < today()) throw invalid("validUntil", "The validity date has passed; choose a later one before sending.");
+      // A draft saved before the limit existed may still hold a far date; links and reminders are derived from it.
+      const dateProblem = validUntilProblem(p.validUntil, today());
+      if (dateProblem) throw invalid("validUntil", dateProblem);
       const seller = await repo.user(actor, actor.userId);
       if (!seller || (!seller.signatureTyped && !seller.signatureDataUrl)) {
         throw new AppError("signature-required", "Add your signature to your profile before sending (typed or drawn).", 409);

@@ -1,6 +1,5 @@
 import type { Request } from "express";
 import { pipeline } from "node:stream/promises";
-import { createHash } from "node:crypto";
 import type { Readable } from "node:stream";
 import rateLimit from "express-rate-limit";
 import { z } from "zod";
@@ -11,7 +10,7 @@ import { routesRouter } from "../../lib/routes.ts";
 import { AcceptSchema, DeclineSchema, VerifyQuerySchema } from "../../../shared/proposals/schemas.ts";
 import type { ProposalsService } from "./proposals.service.ts";
 import { sendPdf } from "./proposals.router.ts";
-import { receiveFile } from "./uploads.ts";
+import { concurrencyGate, MAX_CONCURRENT_PUBLIC_UPLOADS, MAX_VERIFY_PDF_BYTES, receiveFile } from "./uploads.ts";
 import type { Database } from "../../db/client.ts";
 import { PostgresRateLimitStore } from "../../lib/postgres-rate-limit-store.ts";
 
@@ -60,6 +59,8 @@ export function publicRateLimits(opts: { db: Database; now: () => Date; namespac
 }
 
 export function publicProposalsRouter(service: ProposalsService) {
+  // Per process; each process has its own few slots (the cap keeps each upload small).
+  const uploadGate = concurrencyGate(MAX_CONCURRENT_PUBLIC_UPLOADS, "uploaded PDFs");
   return routesRouter([
     {
       method: "get", path: "/public/proposals/:token", access: "public",
@@ -74,6 +75,7 @@ export function publicProposalsRouter(service: ProposalsService) {
         const p = await service.byToken(tokenOf(req));
         const file = await service.pdf(p, p, "latest");
         sendPdf(req, res, file);
+        res.set("Cache-Control", "private, max-age=3600");
         await pipeline(file.object.body, res);
       },
     },
@@ -105,11 +107,12 @@ export function publicProposalsRouter(service: ProposalsService) {
       handler: async (req, res) => { res.json(await service.verify(parse(VerifyQuerySchema, req.query).sha256)); },
     },
     {
-      method: "post", path: "/public/verify", access: "public",
+      method: "post", path: "/public/verify", access: "public", before: [uploadGate],
       handler: async (req, res) => {
-        await receiveFile(req, res, 25 * 1024 * 1024, "PDF");
-        if (!req.file) throw new AppError("invalid-input", "Send the PDF in the form field named file.", 400, { file: "Choose the PDF to check." });
-        res.json(await service.verify(createHash("sha256").update(req.file.buffer).digest("hex")));
+        await receiveFile(req, res, MAX_VERIFY_PDF_BYTES, "proposal PDF", { isHashOnly: true });
+        const sha256 = (req.file as { sha256?: string } | undefined)?.sha256;
+        if (!sha256) throw new AppError("invalid-input", "Send the PDF in the form field named file.", 400, { file: "Choose the PDF to check." });
+        res.json(await service.verify(sha256));
       },
     },
   ]);

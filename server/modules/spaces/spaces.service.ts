@@ -60,6 +60,9 @@ export function createSpacesService(deps: { repo: SpacesRepository; projects: Pr
 
     async create(actor: Actor, projectId: string, input: Partial<SpaceSurvey> & { name: string }): Promise<SpaceRow> {
       await requireProject(actor, projectId);
+      if ((await repo.listForProject(actor, projectId)).length >= LIMITS.maxSpacesPerProject) {
+        throw new AppError("invalid-input", `A project has at most ${LIMITS.maxSpacesPerProject} attic spaces.`, 400, { name: `At most ${LIMITS.maxSpacesPerProject} attic spaces in one project.` });
+      }
       const survey: SpaceSurvey = {
         name: input.name,
         roof: input.roof ?? SpaceRoofSchema.parse({}),
