@@ -3,6 +3,7 @@
  * homeowner's answers: shared by the client's forms and the server's validation.
  */
 import { z } from "zod";
+import { EstimateConditionsSchema } from "../airflow-model/schema";
 
 /** No control characters (tabs, new lines, escapes) in a one-line name. */
 // eslint-disable-next-line no-control-regex
@@ -48,6 +49,8 @@ export const CompanyProfilePatchSchema = z.object({
   isCoolingOffNoticeEnabled: z.boolean(),
   /** Remind the homeowner when the proposal is still unopened after this many days; null = never. */
   reminderDays: z.number().int().min(1, "Remind after at least 1 day.").max(60).nullable(),
+  /** Summer and winter conditions for the airflow estimates shown in surveys, options and proposals. */
+  estimateConditions: EstimateConditionsSchema,
 }).partial().strict();
 export type CompanyProfilePatch = z.infer<typeof CompanyProfilePatchSchema>;
 
