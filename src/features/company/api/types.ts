@@ -1,3 +1,4 @@
+import type { EstimateConditions } from "@shared/airflow-model/index";
 import type { DepositRule } from "@shared/proposals/types";
 
 /** The company profile as GET|PATCH /api/company answer it (server/modules/proposals/company.service.ts). */
@@ -13,5 +14,6 @@ export interface CompanyProfile {
   depositRule: DepositRule | null;
   isCoolingOffNoticeEnabled: boolean;
   reminderDays: number | null;
+  estimateConditions: EstimateConditions;
   logo: { contentType: string | null; sha256: string | null; url: string } | null;
 }
