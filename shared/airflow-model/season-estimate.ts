@@ -28,6 +28,8 @@ export interface AirflowEstimate {
   winter: SeasonFigures;
   /** Every assumption either season made, once. */
   assumptions: string[];
+  /** The model's whole answers (every opening's flow and the reasons), for the picture and the details. */
+  results: Record<Season, AirflowResult>;
 }
 
 /** Plain words for a season's conditions: "summer: 92 °F outdoors, attic 130 °F, house 75 °F, calm". */
@@ -59,7 +61,12 @@ function figures(input: AtticInput, conditions: SeasonConditions): { figures: Se
 export function estimateAirflow(input: AtticInput, conditions: EstimateConditions): AirflowEstimate {
   const summer = figures(input, conditions.summer);
   const winter = figures(input, conditions.winter);
-  return { summer: summer.figures, winter: winter.figures, assumptions: [...new Set([...summer.result.assumptions, ...winter.result.assumptions])] };
+  return {
+    summer: summer.figures,
+    winter: winter.figures,
+    assumptions: [...new Set([...summer.result.assumptions, ...winter.result.assumptions])],
+    results: { summer: summer.result, winter: winter.result },
+  };
 }
 
 export interface BeforeAfterRow {

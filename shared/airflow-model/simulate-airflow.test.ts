@@ -212,7 +212,7 @@ describe("simulateAirflow properties", () => {
       }),
       { numRuns: 500 },
     );
-  });
+  }, 30_000);
 
   it("more soffit area never draws more house air while the soffits are taking air in", () => {
     // Summer with the fans running: the usual case the trade argues about.
@@ -242,7 +242,7 @@ describe("simulateAirflow properties", () => {
       }),
       { numRuns: 300 },
     );
-  });
+  }, 30_000);
 
   it("a bigger fan never draws less house air (calm, fans running)", () => {
     fc.assert(
@@ -253,5 +253,5 @@ describe("simulateAirflow properties", () => {
       }),
       { numRuns: 100 },
     );
-  });
+  }, 30_000);
 });
