@@ -21,13 +21,13 @@ const PARTS = [
 export function FanSourceBar({ fanCfm, from, unitSystem }: FanSourceBarProps) {
   const total = from.lowerVentsCfm + from.upperVentsCfm + from.houseCfm;
   if (total <= 0) return null;
-  let x = 0;
-  const segments = PARTS.map((p) => {
-    const width = (from[p.key] / total) * 100;
-    const segment = { ...p, x, width, cfm: from[p.key], share: from[p.key] / total };
-    x += width;
-    return segment;
-  });
+  const segments = PARTS.map((p, i) => ({
+    ...p,
+    x: PARTS.slice(0, i).reduce((sum, q) => sum + (from[q.key] / total) * 100, 0),
+    width: (from[p.key] / total) * 100,
+    cfm: from[p.key],
+    share: from[p.key] / total,
+  }));
   const label = `Where the fan's ${formatAirflowCfm(Math.round(fanCfm), unitSystem)} comes from: ${segments.map((s) => `${s.words} ${formatPercent(s.share)}`).join(", ")}.`;
   return (
     <figure className="space-y-2">
