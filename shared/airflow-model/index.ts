@@ -16,4 +16,4 @@ export type { DepressurizationCheck } from "./depressurization";
 export { VENT_DISCHARGE_COEFFICIENT, CAZ_LIMIT_NATURAL_DRAFT_PA, FAN_SHUTOFF_PA } from "./physics";
 export type { AtticInput } from "../ventilation";
 export { estimateAirflow, beforeAfterRows, describeConditions, ESTIMATE_DISCLAIMER, SEASONS } from "./season-estimate";
-export type { AirflowEstimate, BeforeAfterRow, Season, SeasonFigures } from "./season-estimate";
+export type { AirflowEstimate, BeforeAfterRow, RowFigures, Season, SeasonFigures } from "./season-estimate";

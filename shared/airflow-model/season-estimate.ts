@@ -83,8 +83,11 @@ const cfm = (n: number) => `${formatNumber(n, { maxFractionDigits: 0 })} cfm`;
 const perHour = (n: number) => `${formatNumber(n, { maxFractionDigits: 1 })} per hour`;
 const pull = (n: number | null) => (n === null ? "no fan" : `${formatNumber(-n, { maxFractionDigits: 1 })} Pa`);
 
+/** What a before → after row needs of one season (an estimate, or a proposal's frozen copy of one). */
+export type RowFigures = Record<Season, Pick<SeasonFigures, "houseAirDrawnCfm" | "atticAirChangesPerHour" | "houseDepressurizationByFansPa">>;
+
 /** An option's before → after figures, season by season. */
-export function beforeAfterRows(before: AirflowEstimate, after: AirflowEstimate): BeforeAfterRow[] {
+export function beforeAfterRows(before: RowFigures, after: RowFigures): BeforeAfterRow[] {
   const rows: BeforeAfterRow[] = [];
   for (const season of SEASONS) {
     const b = before[season];

@@ -121,6 +121,16 @@ describe("simulateAirflow: a fan case solved by hand", () => {
   });
 });
 
+describe("simulateAirflow: a fan found dead", () => {
+  it("when the fan's blade will not turn or its winding reads open, then it is taken as stopped whatever the attic temperature", () => {
+    for (const diagnostics of [{ isBladeFreeToSpin: false }, { windingResistanceOhms: "open" as const }]) {
+      const r = simulateAirflow(attic({ vents: [soffit("s", 300), roofFan("f", 1200, { diagnostics })] }), { outdoorTempF: 92, atticTempF: 130, houseTempF: 75 });
+      expect(r.fanCfm).toBe(0);
+      expect(r.reasons.join(" ")).toContain("does not run as found");
+    }
+  });
+});
+
 describe("simulateAirflow against published field measurements", () => {
   // Tooley & Davis (EEBA 1995), 8 North Carolina houses, as summarized at TRADE-REFERENCES §5 [SRC 13]:
   // attic fans depressurized the houses by 0.5–2.5 Pa and drew 104–646 cfm of house air.

@@ -20,6 +20,7 @@ import type { AtticInput, Vent, VentNfa } from "../ventilation";
 import { sectionAreaSqFt, sectionGeometry, ventNfa } from "../ventilation";
 import { isPoweredKind, AT_RIDGE_KINDS, EAVE_KINDS } from "../ventilation/vent-kinds";
 import { riseLookup, ventPosition } from "../ventilation/vent-position";
+import { WINDING_OPEN_MIN_OHMS } from "../diagnostics/fan-diagnostics";
 import { findRootDecreasing } from "./find-root";
 import {
   airDensityKgPerM3,
@@ -71,6 +72,8 @@ export interface AirflowResult {
   fanCfm: number;
   /** What the running fans are rated for, cfm. */
   fanRatedCfm: number;
+  /** Each powered fan: whether it runs in these conditions and why, in words ("runs: the attic at 130 °F is …"). */
+  fanStates: Array<{ ventId: string; isRunning: boolean; why: string }>;
   /** Where the fans' air comes from (the attic taken as well mixed); sums to fanCfm. */
   fanAirFrom: FanAirFrom;
   /** All the air passing through the attic (in = out), cfm. */
@@ -153,6 +156,11 @@ function windPositions(vent: Vent): Array<readonly [number, number]> {
 
 function fanRuns(vent: Vent, conditions: AirflowConditions): { isRunning: boolean; why: string } {
   if (conditions.areFansRunning !== undefined) return { isRunning: conditions.areFansRunning, why: conditions.areFansRunning ? "set to run" : "set off" };
+  const d = vent.diagnostics;
+  const isWindingOpen = d?.windingResistanceOhms === "open" || (typeof d?.windingResistanceOhms === "number" && d.windingResistanceOhms >= WINDING_OPEN_MIN_OHMS);
+  if (d?.isBladeFreeToSpin === false || isWindingOpen) {
+    return { isRunning: false, why: `does not run as found (${d?.isBladeFreeToSpin === false ? "its blade will not turn" : "its motor winding reads open"}), so it is taken as stopped` };
+  }
   if (vent.control === "switch" || vent.control === "always-on") return { isRunning: true, why: vent.control === "switch" ? "on a switch, taken as on" : "always on" };
   const setPointF = vent.thermostatSetPointF ?? DEFAULT_FAN_SET_POINT_F;
   const isRunning = conditions.atticTempF >= setPointF;
@@ -240,6 +248,7 @@ export function simulateAirflow(attic: AtticInput, conditions: AirflowConditions
   const atticHoles: Hole[] = [];
   const fans: Fan[] = [];
   const fanSentences: string[] = [];
+  const fanStates: AirflowResult["fanStates"] = [];
   let isAnyHeightAssumed = false;
   let isAnyRiseAssumed = false;
   attic.vents.forEach((vent, owner) => {
@@ -255,6 +264,7 @@ export function simulateAirflow(attic: AtticInput, conditions: AirflowConditions
       const windPa = positions.reduce((sum, [cp, share]) => sum + cp * share, 0) * dynamicPa;
       fans.push({ ratedM3PerS: nfa.airflowCfm * CU_M_PER_S_PER_CFM, stackPa, windPa, owner, isRunning: run.isRunning });
       fanSentences.push(`A fan rated ${f0(nfa.airflowCfm)} cfm ${run.why}.`);
+      fanStates.push({ ventId: vent.id, isRunning: run.isRunning, why: run.why });
       return;
     }
     const areaM2 = nfaOf(vent).nfaSqIn * SQ_M_PER_SQ_IN;
@@ -292,6 +302,7 @@ export function simulateAirflow(attic: AtticInput, conditions: AirflowConditions
   const hasPathIn = solveHoles.length > 0 || (ceilingCdAreaM2 > 0 && leakage.houseSqIn > 0);
   if (!hasPathIn) {
     for (const f of fans) f.isRunning = false;
+    for (const state of fanStates) state.isRunning = false;
     if (fans.length > 0) fanSentences.push("The attic has no other opening to outdoors and no leakage path through the house, so the fans can move no air.");
   }
   const runningFans = fans.filter((f) => f.isRunning);
@@ -415,6 +426,7 @@ export function simulateAirflow(attic: AtticInput, conditions: AirflowConditions
     dischargeCoefficient: cd,
     fanCfm: roundTo(fanCfm, 1),
     fanRatedCfm: roundTo(fanRatedCfm, 1),
+    fanStates,
     fanAirFrom,
     atticAirCfm: roundTo(atticAirCfm, 1),
     atticVolumeCuFt: roundTo(volume.volumeCuFt, 1),

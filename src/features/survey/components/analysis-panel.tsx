@@ -170,7 +170,7 @@ export const AnalysisPanel = memo(function AnalysisPanel({ spaceName, input, res
         <FindingsList findings={findings} emptyText="Nothing to flag in this space." />
       </section>
 
-      <AirflowEstimateSection estimate={airflow.estimate} conditions={airflow.conditions} isDefaultConditions={airflow.isDefaultConditions} unitSystem={unitSystem} />
+      <AirflowEstimateSection estimate={airflow.estimate} ifFansRan={airflow.ifFansRan} conditions={airflow.conditions} isDefaultConditions={airflow.isDefaultConditions} unitSystem={unitSystem} />
 
       <AirflowSection input={input} analysis={a} airflow={airflow.estimate?.results.summer ?? null} spaceName={spaceName} isShown={isShown} />
     </div>

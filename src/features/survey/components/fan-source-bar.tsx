@@ -47,14 +47,14 @@ export function FanSourceBar({ fanCfm, from, unitSystem }: FanSourceBarProps) {
         ))}
         <rect x="0" y="0" width="100" height="12" fill="none" stroke="#5E6977" strokeWidth="0.4" vectorEffect="non-scaling-stroke" />
       </svg>
-      <dl className="grid gap-1.5 text-sm sm:grid-cols-3">
+      <dl className="divide-y divide-ink-100 text-base">
         {segments.map((s) => (
-          <div key={s.key} data-fan-source={s.key}>
-            <dt className="flex items-center gap-1.5 font-medium text-ink-800">
+          <div key={s.key} data-fan-source={s.key} className="flex items-baseline justify-between gap-3 py-1">
+            <dt className="flex items-center gap-2 text-ink-800">
               <span aria-hidden="true" className={`inline-block size-3.5 shrink-0 rounded-sm ${s.swatch}`} /> {s.words}
             </dt>
-            <dd className="text-base font-semibold tabular-nums text-ink-900">
-              {formatAirflowCfm(Math.round(s.cfm), unitSystem)} · {formatPercent(s.share)}
+            <dd className="shrink-0 font-semibold tabular-nums text-ink-900">
+              {formatAirflowCfm(Math.round(s.cfm), unitSystem)} · {formatPercent(Math.round(s.share * 100) / 100)}
             </dd>
           </div>
         ))}
