@@ -1,6 +1,6 @@
 /**
  * Arrow widths from the airflow estimate (shared/airflow-model): each arrow is drawn as wide as
- * the air it stands for, and the larger flows get a "≈ 420 cfm" label beside the line. Width is
+ * the air it stands for, and the larger flows get a "420 cfm" label beside the line. Width is
  * proportional to cfm between a hairline and just under the arrowhead's width, so the heads still
  * read; the labels carry the numbers for anyone who can't judge widths.
  */
@@ -51,7 +51,8 @@ export function applyFlowWidths(arrows: readonly AirflowArrow[], texts: readonly
     if (cfm === null || cfm === undefined || largest <= 0) return arrow;
     const strokeWidthFt = unitFt * (MIN_FLOW_WIDTH_UNITS + (MAX_FLOW_WIDTH_UNITS - MIN_FLOW_WIDTH_UNITS) * (cfm / largest));
     if (cfm >= LABEL_SHARE_OF_LARGEST * largest && cfm >= 5) {
-      const text = `≈ ${formatNumber(Math.round(cfm))} cfm`;
+      // No "≈": the PDF's embedded font subsets lack it; the note says these are estimates.
+      const text = `${formatNumber(Math.round(cfm))} cfm`;
       const candidates = [0.3, 0.7, 0.45, 0.15, 0.85].map((at) => {
         const [x, y] = midpoint(arrow.pointsFt, at);
         return { id: `cfm-${arrow.id}`, forId: arrow.id, text, atFt: [x, y - 0.9 * unitFt] as const, anchor: "middle" as const, fontSizeFt: 1.1 * unitFt, style: arrow.style, isBold: true };
@@ -65,6 +66,6 @@ export function applyFlowWidths(arrows: readonly AirflowArrow[], texts: readonly
   return {
     arrows: widened,
     texts: labels,
-    note: "Line widths follow the estimated summer airflow: the wider the line, the more air (labels give the larger flows in cfm). An estimate from a simplified model, not a measurement.",
+    note: "Line widths show the estimated summer airflow in cfm (a model's estimate).",
   };
 }

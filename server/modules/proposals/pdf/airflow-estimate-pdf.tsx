@@ -1,5 +1,5 @@
 /**
- * The option's airflow before → after in the proposal PDF (issue 19): house air drawn into the
+ * The option's airflow before and after in the proposal PDF (no "→": the embedded font subsets lack it) (issue 19): house air drawn into the
  * attic, attic air changes and the fans' pull on the house, for the company's stated summer and
  * winter conditions, with the plain warning that it is an estimate and its assumptions. Kept in
  * its own component so the document's layout can change around it.
@@ -22,7 +22,7 @@ export function AirflowEstimatePdf({ spaceName, before, after }: { spaceName: st
   const afterCautions = [after.summer, after.winter].filter((s) => s.isOverLimit);
   return (
     <View wrap={false} style={{ marginTop: 6, marginBottom: 8 }}>
-      <Text style={{ fontSize: 11, fontWeight: 600, lineHeight: "15pt", marginBottom: 3 }}>Where the air goes in {spaceName}: now → after this option</Text>
+      <Text style={{ fontSize: 11, fontWeight: 600, lineHeight: "15pt", marginBottom: 3 }}>Where the air goes in {spaceName}: now, and after this option</Text>
       <View style={{ borderTopWidth: 0.5, borderTopColor: RULE }}>
         <View style={{ flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: RULE, paddingVertical: 2 }}>
           <Text style={[cell, { flex: 3, color: MUTED }]}>Estimate</Text>
@@ -33,7 +33,7 @@ export function AirflowEstimatePdf({ spaceName, before, after }: { spaceName: st
           <View key={`${row.season}-${row.label}`} style={{ flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: RULE, paddingVertical: 2 }}>
             <Text style={[cell, { flex: 3 }]}>{row.season === "summer" ? "Summer" : "Winter"}: {row.label}</Text>
             <Text style={[cell, { flex: 1.2, textAlign: "right" }]}>{row.before}</Text>
-            <Text style={[cell, { flex: 1.2, textAlign: "right", fontWeight: 700 }]}>→ {row.after}</Text>
+            <Text style={[cell, { flex: 1.2, textAlign: "right", fontWeight: 700 }]}>{row.after}</Text>
           </View>
         ))}
       </View>
