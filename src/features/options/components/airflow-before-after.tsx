@@ -34,7 +34,7 @@ export function AirflowBeforeAfter({ spaceName, before, after, conditions, isDef
         <thead>
           <tr className="border-b border-ink-200 text-ink-600">
             <th scope="col" className="py-1 pr-2 font-medium">
-              <span className="sr-only">In {spaceName}, </span>what
+              <span className="sr-only">In {spaceName}, </span>Estimate
             </th>
             <th scope="col" className="py-1 pr-2 text-right font-medium">
               Now
@@ -50,8 +50,8 @@ export function AirflowBeforeAfter({ spaceName, before, after, conditions, isDef
               <th scope="row" className="py-1.5 pr-2 font-normal text-ink-800">
                 <span className="font-medium capitalize">{row.season}:</span> {row.label}
               </th>
-              <td className="py-1.5 pr-2 text-right tabular-nums text-ink-800">{row.before}</td>
-              <td className="py-1.5 text-right font-semibold tabular-nums text-ink-900">→ {row.after}</td>
+              <td className="whitespace-nowrap py-1.5 pr-2 text-right tabular-nums text-ink-800">{row.before}</td>
+              <td className="whitespace-nowrap py-1.5 text-right font-semibold tabular-nums text-ink-900">→ {row.after}</td>
             </tr>
           ))}
         </tbody>
