@@ -3,7 +3,9 @@
  * plain data (see types.ts for the coordinate system). Pure and deterministic: no React, no DOM,
  * no I/O, no clock; the same input always gives the same picture.
  */
+import type { AirflowResult } from "../airflow-model/simulate-airflow";
 import type { AtticAnalysis, AtticInput } from "../ventilation";
+import { applyFlowWidths } from "./flow-widths";
 import { joinPlaces } from "./describe-airflow-picture";
 import { flowPaths } from "./flow-paths";
 import { boxesOverlap, emptyBounds, includePoint, includePrimitive, textBoxFt, textWidthFt, tidy } from "./geometry";
@@ -14,6 +16,8 @@ import type { AirflowArrow, AirflowPicture, DrawPointFt, LegendEntry, PictureCap
 export interface BuildAirflowPictureOptions {
   /** Which section to draw; defaults to the largest. An index out of range falls back to it. */
   sectionIndex?: number;
+  /** The airflow estimate (shared/airflow-model): arrows are drawn as wide as their cfm and the big ones labelled. */
+  airflow?: AirflowResult;
 }
 
 function structureShapes(frame: RoofFrame, hasRidgeVent: boolean, isSoffitBlocked: boolean): PictureShape[] {
@@ -243,7 +247,13 @@ export function buildAirflowPicture(input: AtticInput, analysis: AtticAnalysis, 
     insulationText(frame, u, placed.texts),
   ];
   const notes = [...frame.notes, ...placed.notes, ...flows.notes];
-  const arrows = flows.arrows;
+  let arrows = flows.arrows;
+  if (opts.airflow) {
+    const widths = applyFlowWidths(arrows, texts, opts.airflow, u);
+    arrows = widths.arrows;
+    texts.push(...widths.texts);
+    notes.push(widths.note);
+  }
   const viewBox = viewBoxOf(shapes, arrows, texts, u);
 
   return {

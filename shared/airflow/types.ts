@@ -96,6 +96,8 @@ interface ArrowBase {
   strokeWidthFt: number;
   /** Dash and gap lengths along the line, ft; empty = solid. */
   dashFt: number[];
+  /** The air this arrow stands for in the airflow estimate, cfm, when one was given. */
+  cfm?: number;
   /** Plain place names for the description, e.g. "the left soffit", "the ridge vent". */
   fromPlace: string;
   toPlace: string;

@@ -5,6 +5,7 @@
 import { z } from "zod";
 import { UpperShareBaseSchema } from "../ventilation/schema";
 import { versionField } from "../schemas/input-safety.ts";
+import { EstimateConditionsSchema } from "../airflow-model/schema";
 
 /** No control characters (tabs, new lines, escapes) in a one-line name. */
 // eslint-disable-next-line no-control-regex
@@ -55,6 +56,8 @@ export const CompanyProfilePatchSchema = z.object({
    * area (the literal text, the default) or of the area provided (a local reading).
    */
   upperShareBase: UpperShareBaseSchema,
+  /** Summer and winter conditions for the airflow estimates shown in surveys, options and proposals. */
+  estimateConditions: EstimateConditionsSchema,
 }).partial().strict();
 export type CompanyProfilePatch = z.infer<typeof CompanyProfilePatchSchema>;
 

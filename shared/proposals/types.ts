@@ -53,10 +53,32 @@ export interface SnapshotAnalysis {
   hasPoweredFan: boolean;
 }
 
+/** One season of the airflow estimate (shared/airflow-model), as the proposal froze it. */
+export interface SnapshotAirflowSeason {
+  /** The conditions in words: "summer: 92 °F outdoors, attic 130 °F, house 75 °F, calm". */
+  conditionsText: string;
+  houseAirDrawnCfm: number;
+  atticAirChangesPerHour: number;
+  fanCfm: number;
+  houseDepressurizationByFansPa: number | null;
+  /** The depressurization check's sentence, with its caution when past the limit. */
+  depressurizationSentence: string;
+  isOverLimit: boolean;
+}
+
+export interface SnapshotAirflow {
+  summer: SnapshotAirflowSeason;
+  winter: SnapshotAirflowSeason;
+  assumptions: string[];
+  disclaimer: string;
+}
+
 export interface SnapshotSpace {
   spaceId: string;
   name: string;
   analysis: SnapshotAnalysis | null;
+  /** The airflow estimate; absent in proposals frozen before it existed. */
+  airflow?: SnapshotAirflow | null;
   picture: AirflowPicture | null;
   pictureDescription: string[];
   /** Why the analysis is missing, in words, when it is. */

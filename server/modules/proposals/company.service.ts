@@ -1,4 +1,6 @@
 import { processLogo } from "../photos/photo-processing.ts";
+import { DEFAULT_ESTIMATE_CONDITIONS, EstimateConditionsSchema, type EstimateConditions } from "../../../shared/airflow-model/schema.ts";
+import { fileTypeFromBuffer } from "file-type";
 import { AppError, notFound } from "../../lib/errors.ts";
 import type { Actor } from "../../lib/request-context.ts";
 import type { Storage } from "../../lib/storage/index.ts";
@@ -20,7 +22,14 @@ export function presentCompany(c: CompanyRow) {
     reminderDays: settings.reminderDays ?? null,
     upperShareBase: settings.upperShareBase ?? "required",
     logo: settings.logoStorageKey ? { contentType: settings.logoContentType, sha256: settings.logoSha256, url: "/api/company/logo" } : null,
+    estimateConditions: estimateConditionsOf(settings),
   };
+}
+
+/** The company's stated airflow-estimate conditions, or the defaults (read by every role). */
+export function estimateConditionsOf(settings: CompanySettings): EstimateConditions {
+  const parsed = EstimateConditionsSchema.safeParse(settings.estimateConditions);
+  return parsed.success ? parsed.data : DEFAULT_ESTIMATE_CONDITIONS;
 }
 
 export function createCompanyService(deps: { repo: ProposalsRepository; storage: Storage }) {
@@ -35,13 +44,18 @@ export function createCompanyService(deps: { repo: ProposalsRepository; storage:
       return presentCompany(await current(actor));
     },
 
+    async estimateConditions(actor: Actor) {
+      return estimateConditionsOf((await current(actor)).settings as CompanySettings);
+    },
+
     async update(actor: Actor, patch: CompanyProfilePatch) {
       const c = await current(actor);
-      const { isCoolingOffNoticeEnabled, reminderDays, upperShareBase, ...columns } = patch;
+      const { isCoolingOffNoticeEnabled, reminderDays, upperShareBase, estimateConditions, ...columns } = patch;
       const settings: CompanySettings = { ...(c.settings as CompanySettings) };
       if (isCoolingOffNoticeEnabled !== undefined) settings.isCoolingOffNoticeEnabled = isCoolingOffNoticeEnabled;
       if (reminderDays !== undefined) settings.reminderDays = reminderDays;
       if (upperShareBase !== undefined) settings.upperShareBase = upperShareBase;
+      if (estimateConditions !== undefined) settings.estimateConditions = estimateConditions;
       const updated = await repo.updateCompany(actor, { ...columns, settings: settings as Record<string, unknown> });
       return presentCompany(updated!);
     },

@@ -1,10 +1,11 @@
 import { createHash } from "node:crypto";
 import { buildAirflowPicture, describeAirflowPicture } from "../../../shared/airflow/index.ts";
+import { describeConditions, ESTIMATE_DISCLAIMER, estimateAirflow, type AirflowEstimate, type EstimateConditions, type Season } from "../../../shared/airflow-model/index.ts";
 import { applyOption, DesignError } from "../../../shared/design/apply-option.ts";
 import { priceOption, PricingError, type PricingSettings } from "../../../shared/pricing/index.ts";
 import { coolingOffNotice, esignDisclosure, ESIGN_CONSENT_VERSION, proposalCautions } from "../../../shared/proposals/disclosures.ts";
 import { toHomeownerFinding } from "../../../shared/proposals/homeowner-words.ts";
-import type { ProposalSnapshot, ScopeText, SignatureImage, SnapshotAnalysis, SnapshotOption, SnapshotSpace } from "../../../shared/proposals/types.ts";
+import type { ProposalSnapshot, ScopeText, SignatureImage, SnapshotAirflow, SnapshotAnalysis, SnapshotOption, SnapshotSpace } from "../../../shared/proposals/types.ts";
 import { OptionSpaceSchema, type OptionSpace } from "../../../shared/schemas/options.ts";
 import type { CatalogItem } from "../../../shared/schemas/catalog.ts";
 import type { SpaceSurvey } from "../../../shared/schemas/survey.ts";
@@ -17,7 +18,7 @@ import { surveyOf } from "../options/options.service.ts";
 
 export interface SnapshotInput {
   proposal: { id: string; seriesId: string; revision: number; validUntil: string; coverNote: string | null; terms: string | null; findingCodes: string[] | null; scopes: Record<string, ScopeText> };
-  company: { name: string; licenseNumber: string | null; addressLine: string | null; phone: string | null; email: string | null; logo: ProposalSnapshot["company"]["logo"]; isCoolingOffNoticeEnabled: boolean };
+  company: { name: string; licenseNumber: string | null; addressLine: string | null; phone: string | null; email: string | null; logo: ProposalSnapshot["company"]["logo"]; isCoolingOffNoticeEnabled: boolean; estimateConditions: EstimateConditions };
   customer: { name: string; email: string | null; phone: string | null };
   project: ProjectRow;
   spaces: SpaceRow[];
@@ -41,13 +42,30 @@ export function canonicalJson(value: unknown): string {
 export const sha256Hex = (bytes: string | Uint8Array) => createHash("sha256").update(bytes).digest("hex");
 export const snapshotSha256 = (snapshot: ProposalSnapshot) => sha256Hex(canonicalJson(snapshot));
 
-function spaceView(project: ProjectRow, space: SpaceRow, survey: SpaceSurvey, findingCodes: string[] | null): SnapshotSpace {
+function frozenAirflow(estimate: AirflowEstimate): SnapshotAirflow {
+  const season = (name: Season) => {
+    const f = estimate[name];
+    return {
+      conditionsText: describeConditions(name, f.conditions),
+      houseAirDrawnCfm: f.houseAirDrawnCfm,
+      atticAirChangesPerHour: f.atticAirChangesPerHour,
+      fanCfm: f.fanCfm,
+      houseDepressurizationByFansPa: f.houseDepressurizationByFansPa,
+      depressurizationSentence: f.depressurization.sentence,
+      isOverLimit: f.depressurization.isOverLimit,
+    };
+  };
+  return { summer: season("summer"), winter: season("winter"), assumptions: estimate.assumptions, disclaimer: ESTIMATE_DISCLAIMER };
+}
+
+function spaceView(project: ProjectRow, space: SpaceRow, survey: SpaceSurvey, findingCodes: string[] | null, conditions: EstimateConditions): SnapshotSpace {
   const base = { spaceId: space.id, name: space.name };
   if (survey.sections.length === 0) return { ...base, analysis: null, picture: null, pictureDescription: [], issues: ["No attic floor was measured for this space."] };
   const parsed = AtticInputSchema.safeParse(toAtticInput(project, survey));
   if (!parsed.success) return { ...base, analysis: null, picture: null, pictureDescription: [], issues: parsed.error.issues.map((i) => i.message) };
   const a = analyzeAttic(parsed.data);
-  const picture = buildAirflowPicture(parsed.data, a);
+  const estimate = estimateAirflow(parsed.data, conditions);
+  const picture = buildAirflowPicture(parsed.data, a, { airflow: estimate.results.summer });
   const analysis: SnapshotAnalysis = {
     floorAreaSqFt: a.floorAreaSqFt,
     requirement: {
@@ -62,7 +80,7 @@ function spaceView(project: ProjectRow, space: SpaceRow, survey: SpaceSurvey, fi
     findings: a.findings.filter((f) => !findingCodes || findingCodes.includes(f.code)).map(toHomeownerFinding),
     hasPoweredFan: parsed.data.vents.some((v) => isPoweredKind(v.kind)),
   };
-  return { ...base, analysis, picture, pictureDescription: [describeAirflowPicture(picture)], issues: [] };
+  return { ...base, analysis, airflow: frozenAirflow(estimate), picture, pictureDescription: [describeAirflowPicture(picture)], issues: [] };
 }
 
 const planFor = (option: OptionRow, spaceId: string): OptionSpace => option.spaces.find((s) => s.spaceId === spaceId) ?? OptionSpaceSchema.parse({ spaceId });
@@ -70,7 +88,7 @@ const planFor = (option: OptionRow, spaceId: string): OptionSpace => option.spac
 function optionView(input: SnapshotInput, option: OptionRow): SnapshotOption {
   const after = input.spaces.map((space) => {
     try {
-      return spaceView(input.project, space, applyOption(surveyOf(space), planFor(option, space.id), input.catalog), null);
+      return spaceView(input.project, space, applyOption(surveyOf(space), planFor(option, space.id), input.catalog), null, input.company.estimateConditions);
     } catch (err) {
       if (!(err instanceof DesignError)) throw err;
       return { spaceId: space.id, name: space.name, analysis: null, picture: null, pictureDescription: [], issues: [err.message] };
@@ -106,7 +124,7 @@ function firstName(name: string): string {
 
 /** Everything the proposal shows, as plain data: what the PDF draws and the homeowner's page reads. */
 export function buildSnapshot(input: SnapshotInput): ProposalSnapshot {
-  const before = input.spaces.map((space) => spaceView(input.project, space, surveyOf(space), input.proposal.findingCodes));
+  const before = input.spaces.map((space) => spaceView(input.project, space, surveyOf(space), input.proposal.findingCodes, input.company.estimateConditions));
   const options = input.options.map((o) => optionView(input, o));
   const findingCount = before.reduce((n, s) => n + (s.analysis?.findings.length ?? 0), 0);
   const explanation = [

@@ -1,3 +1,4 @@
+import type { EstimateConditions } from "../../../shared/airflow-model/schema.ts";
 import { and, asc, desc, eq, inArray, isNotNull, isNull, lt, lte, or, sql } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
 import { companies, customers, designOptions, photos, projects, proposalEvents, proposalMails, proposals, userSignatures, users } from "../../db/schema/index.ts";
@@ -33,6 +34,8 @@ export interface CompanySettings {
   logoStorageKey?: string | null;
   logoContentType?: string | null;
   logoSha256?: string | null;
+  /** Summer and winter conditions for airflow estimates; the defaults when absent. */
+  estimateConditions?: EstimateConditions;
 }
 
 export function createProposalsRepository(db: Database) {

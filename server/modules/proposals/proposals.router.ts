@@ -32,6 +32,10 @@ export function proposalsRouter(service: ProposalsService, company: CompanyServi
       },
     },
     {
+      method: "get", path: "/company/estimate-conditions", access: "signed-in",
+      handler: async (req, res) => { res.json({ estimateConditions: await company.estimateConditions(actorOf(req)) }); },
+    },
+    {
       method: "get", path: "/company/logo", access: "signed-in",
       handler: async (req, res) => {
         const { object, contentType } = await company.openLogo(actorOf(req));

@@ -1,3 +1,4 @@
+import { estimateConditionsOf } from "./company.service.ts";
 import { randomUUID } from "node:crypto";
 import { AppError, conflict, notFound } from "../../lib/errors.ts";
 import type { Actor, RequestMeta } from "../../lib/request-context.ts";
@@ -122,6 +123,7 @@ export function createProposalsService(deps: {
         name: company.name, licenseNumber: company.licenseNumber, addressLine: company.addressLine, phone: company.phone, email: company.email,
         logo: settings.logoStorageKey && settings.logoContentType && settings.logoSha256 ? { storageKey: settings.logoStorageKey, contentType: settings.logoContentType, sha256: settings.logoSha256 } : null,
         isCoolingOffNoticeEnabled: settings.isCoolingOffNoticeEnabled ?? false,
+        estimateConditions: estimateConditionsOf(settings),
       },
       customer, project, spaces, options: chosen, catalog,
       pricing: pricingSettings({ taxRateBasisPoints: company.taxRateBasisPoints, depositRule: p.depositRule ?? company.depositRule ?? null }),

@@ -2,6 +2,7 @@ import { Document, Image, Page, StyleSheet, Text, View } from "@react-pdf/render
 import type { ProposalAcceptance, ProposalSnapshot, SnapshotAnalysis, SnapshotOption, SnapshotSpace } from "../../../../shared/proposals/types.ts";
 import { formatCents, formatBasisPoints } from "../../../../shared/pricing/index.ts";
 import { formatNumber } from "../../../../shared/units/format.ts";
+import { AirflowEstimatePdf } from "./airflow-estimate-pdf.tsx";
 import { AirflowSvg } from "./airflow-svg.tsx";
 import { PLEX_FAMILIES } from "./fonts.ts";
 import { breakLongToken } from "./break-long-text.ts";
@@ -161,6 +162,7 @@ function OptionSection({ option, index, snapshot }: { option: SnapshotOption; in
       {option.after.map((space) => (
         <View key={space.spaceId}>
           <BeforeAfter before={snapshot.before.find((b) => b.spaceId === space.spaceId)} after={space} index={index} />
+          <AirflowEstimatePdf spaceName={space.name} before={snapshot.before.find((b) => b.spaceId === space.spaceId)?.airflow} after={space.airflow} />
           {space.analysis ? (
             <View wrap={false}>
               <Text style={s.h3}>{space.name} after the work</Text>

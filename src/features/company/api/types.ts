@@ -1,3 +1,4 @@
+import type { EstimateConditions } from "@shared/airflow-model/index";
 import type { DepositRule } from "@shared/proposals/types";
 
 /** The company profile as GET|PATCH /api/company answer it (server/modules/proposals/company.service.ts). */
@@ -15,5 +16,6 @@ export interface CompanyProfile {
   reminderDays: number | null;
   /** How the 1/300 route's 40–50 % is read: of the required area (the code text) or of the area provided. */
   upperShareBase: "required" | "provided";
+  estimateConditions: EstimateConditions;
   logo: { contentType: string | null; sha256: string | null; url: string } | null;
 }

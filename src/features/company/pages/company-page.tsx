@@ -1,5 +1,6 @@
 import { useQuery } from "@tanstack/react-query";
 import { useState, type FormEvent } from "react";
+import { EstimateConditionsSchema, SEASONS, type EstimateConditions, type Season } from "@shared/airflow-model/index";
 import type { CompanyProfilePatch } from "@shared/proposals/schemas";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
@@ -33,6 +34,21 @@ interface FormState {
   isReminderOn: boolean;
   reminderDays: string;
   upperShareBase: "required" | "provided";
+  /** Airflow-estimate conditions as typed: "summer.atticTempF" → "130". */
+  conditions: Record<string, string>;
+}
+
+const CONDITION_FIELDS = [
+  ["outdoorTempF", "Outdoors", "°F"],
+  ["atticTempF", "Attic", "°F"],
+  ["houseTempF", "House", "°F"],
+  ["windMph", "Wind", "mph"],
+] as const;
+
+function conditionsText(c: EstimateConditions): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const season of SEASONS) for (const [key] of CONDITION_FIELDS) out[`${season}.${key}`] = String(c[season][key]);
+  return out;
 }
 
 function toForm(c: CompanyProfile): FormState {
@@ -52,6 +68,7 @@ function toForm(c: CompanyProfile): FormState {
     isReminderOn: c.reminderDays !== null,
     reminderDays: String(c.reminderDays ?? 3),
     upperShareBase: c.upperShareBase ?? "required",
+    conditions: conditionsText(c.estimateConditions),
   };
 }
 
@@ -78,7 +95,20 @@ function toPatch(f: FormState): { patch: CompanyProfilePatch | null; errors: Rec
     if (!/^\d+$/.test(f.reminderDays.trim()) || n < 1 || n > 60) errors.reminderDays = "Enter a whole number of days from 1 to 60.";
     else reminderDays = n;
   }
-  if (Object.keys(errors).length > 0 || !tax.ok) return { patch: null, errors };
+  const typed: Record<Season, Record<string, number>> = { summer: {}, winter: {} };
+  for (const season of SEASONS) {
+    for (const [key] of CONDITION_FIELDS) {
+      const raw = (f.conditions[`${season}.${key}`] ?? "").trim();
+      const n = raw === "" ? Number.NaN : Number(raw.replace("−", "-"));
+      if (!Number.isFinite(n)) errors[`estimateConditions.${season}.${key}`] = "Enter a number.";
+      else typed[season][key] = n;
+    }
+  }
+  const conditions = EstimateConditionsSchema.safeParse(typed);
+  if (!conditions.success) {
+    for (const issue of conditions.error.issues) errors[`estimateConditions.${issue.path.join(".")}`] ??= issue.message;
+  }
+  if (Object.keys(errors).length > 0 || !tax.ok || !conditions.success) return { patch: null, errors };
   return {
     errors,
     patch: {
@@ -93,6 +123,7 @@ function toPatch(f: FormState): { patch: CompanyProfilePatch | null; errors: Rec
       isCoolingOffNoticeEnabled: f.isCoolingOffNoticeEnabled,
       reminderDays,
       upperShareBase: f.upperShareBase,
+      estimateConditions: conditions.data,
     },
   };
 }
@@ -293,6 +324,36 @@ function ProfileForm({ company }: { company: CompanyProfile }) {
               onChange={() => set("upperShareBase", "provided")}
             />
           </RadioGroup>
+        </CardBody>
+      </Card>
+
+      <Card aria-labelledby="company-conditions-title">
+        <CardHeader>
+          <CardTitle id="company-conditions-title">Conditions for airflow estimates</CardTitle>
+          <CardDescription>
+            The survey, the option comparison and the proposal estimate where the air goes on a typical summer afternoon and winter night. State
+            what is typical where you work: the attic temperature is the one under the roof deck on such a day.
+          </CardDescription>
+        </CardHeader>
+        <CardBody className="grid gap-6 sm:grid-cols-2">
+          {SEASONS.map((season) => (
+            <fieldset key={season} className="space-y-3">
+              <legend className="text-base font-semibold text-ink-900">{season === "summer" ? "Summer afternoon" : "Winter night"}</legend>
+              <div className="grid grid-cols-2 gap-3">
+                {CONDITION_FIELDS.map(([key, label, unit]) => (
+                  <TextField
+                    key={key}
+                    label={`${label}, ${season}`}
+                    inputMode="decimal"
+                    trailing={<span className="pr-3.5 text-ink-600">{unit}</span>}
+                    error={errors[`estimateConditions.${season}.${key}`]}
+                    value={form.conditions[`${season}.${key}`] ?? ""}
+                    onChange={(e) => set("conditions", { ...form.conditions, [`${season}.${key}`]: e.target.value })}
+                  />
+                ))}
+              </div>
+            </fieldset>
+          ))}
         </CardBody>
         <CardFooter>
           <Button type="submit" isLoading={update.isPending} loadingText="Saving…">

@@ -1,5 +1,6 @@
 import { queryOptions } from "@tanstack/react-query";
 import { getCatalog } from "./get-catalog";
+import { getEstimateConditions } from "./get-estimate-conditions";
 import { getMaterials } from "./get-materials";
 import { getOption } from "./get-option";
 import { getOptions } from "./get-options";
@@ -14,6 +15,7 @@ export const optionKeys = {
   materials: (optionId: string) => [...optionKeys.all, "materials", optionId] as const,
   project: (projectId: string) => ["projects", "detail", projectId] as const,
   catalog: () => ["catalog", "all-with-retired"] as const,
+  estimateConditions: () => ["company", "estimate-conditions"] as const,
 };
 
 export const optionQueries = {
@@ -25,4 +27,6 @@ export const optionQueries = {
   project: (projectId: string) =>
     queryOptions({ queryKey: optionKeys.project(projectId), queryFn: ({ signal }) => getProject(projectId, signal), refetchOnWindowFocus: false }),
   catalog: () => queryOptions({ queryKey: optionKeys.catalog(), queryFn: ({ signal }) => getCatalog(signal), staleTime: 60_000 }),
+  estimateConditions: () =>
+    queryOptions({ queryKey: optionKeys.estimateConditions(), queryFn: ({ signal }) => getEstimateConditions(signal), staleTime: 10 * 60_000 }),
 };

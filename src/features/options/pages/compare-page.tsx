@@ -14,7 +14,9 @@ import { paths } from "@/config/paths";
 import { optionQueries } from "../api/queries";
 import type { CatalogRecord, OptionRecord, ProjectDetail } from "../api/types";
 import { ComplianceBadge, FindingCounts, NotAnalysed, VentAreaFigures } from "../components/analysis-summary";
+import { AirflowBeforeAfter } from "../components/airflow-before-after";
 import { AirflowView } from "../components/airflow-view";
+import { DEFAULT_ESTIMATE_CONDITIONS, type EstimateConditions } from "@shared/airflow-model/index";
 import { analyzeOptionLive } from "../lib/live";
 
 export interface ComparePageProps {
@@ -27,6 +29,8 @@ export function ComparePage({ projectId, unitSystem }: ComparePageProps) {
   const projectQuery = useQuery(optionQueries.project(projectId));
   const optionsQuery = useQuery(optionQueries.list(projectId));
   const catalogQuery = useQuery(optionQueries.catalog());
+  const conditionsQuery = useQuery(optionQueries.estimateConditions());
+  const conditions = conditionsQuery.data ?? DEFAULT_ESTIMATE_CONDITIONS;
   const [hidden, setHidden] = useState<Set<string>>(new Set());
 
   if (projectQuery.isPending || optionsQuery.isPending || catalogQuery.isPending) return <LoadingBlock label="Lining up the options…" />;
@@ -84,7 +88,16 @@ export function ComparePage({ projectId, unitSystem }: ComparePageProps) {
             className="relative -mx-4 flex snap-x snap-mandatory gap-4 overflow-x-auto px-4 pb-4 sm:mx-0 sm:px-0"
           >
             {shown.map((option) => (
-              <CompareCard key={option.id} option={option} detail={projectQuery.data} catalog={catalogQuery.data} unitSystem={unitSystem} count={shown.length} />
+              <CompareCard
+                key={option.id}
+                option={option}
+                detail={projectQuery.data}
+                catalog={catalogQuery.data}
+                unitSystem={unitSystem}
+                count={shown.length}
+                conditions={conditions}
+                isDefaultConditions={!conditionsQuery.data}
+              />
             ))}
           </div>
         </>
@@ -93,7 +106,17 @@ export function ComparePage({ projectId, unitSystem }: ComparePageProps) {
   );
 }
 
-function CompareCard({ option, detail, catalog, unitSystem, count }: { option: OptionRecord; detail: ProjectDetail; catalog: CatalogRecord[]; unitSystem: UnitSystem; count: number }) {
+interface CompareCardProps {
+  option: OptionRecord;
+  detail: ProjectDetail;
+  catalog: CatalogRecord[];
+  unitSystem: UnitSystem;
+  count: number;
+  conditions: EstimateConditions;
+  isDefaultConditions: boolean;
+}
+
+function CompareCard({ option, detail, catalog, unitSystem, count, conditions, isDefaultConditions }: CompareCardProps) {
   // The picture needs the core's input for the attic after the work, so it is rebuilt here from the same shared code.
   const live = useMemo(() => analyzeOptionLive(detail.project, detail.spaces, option, catalog), [detail, option, catalog]);
   const price = option.price;
@@ -127,6 +150,7 @@ function CompareCard({ option, detail, catalog, unitSystem, count }: { option: O
             ) : l && !l.after.result.ok ? (
               <NotAnalysed result={l.after.result} />
             ) : null}
+            {l ? <AirflowBeforeAfter spaceName={s.name} before={l.before.input} after={l.after.input} conditions={conditions} isDefaultConditions={isDefaultConditions} /> : null}
             {l ? <AirflowView spaceName={s.name} after={l.after} hasToggle={false} /> : null}
           </section>
         );

@@ -6,6 +6,8 @@ import { sortFindings, type AtticInput, type TryAnalyzeResult } from "@shared/ve
 import { SeverityBadge } from "@/components/ui/badge";
 import { WarningIcon } from "@/components/ui/icons";
 import type { Problem } from "../lib/drafts";
+import { useAirflowEstimate } from "../hooks/use-airflow-estimate";
+import { AirflowEstimateSection } from "./airflow-estimate-section";
 import { BalanceBar } from "./balance-bar";
 
 // The picture (its layout code and drawing) is the panel's last and largest part: it loads after the
@@ -52,6 +54,7 @@ function issueText(issue: { path: string; message: string }): string {
 
 /** The live analysis of one space, from the same core the server and the PDF use. */
 export const AnalysisPanel = memo(function AnalysisPanel({ spaceName, input, result, problems, unitSystem, onJumpTo, isShown = true }: AnalysisPanelProps) {
+  const airflow = useAirflowEstimate(result.ok ? input : null);
   const todo = problems.length > 0 ? (
     <section aria-labelledby="todo-title" className="space-y-2 rounded-lg border border-warning-200 bg-warning-50 p-4">
       <h3 id="todo-title" className="flex items-center gap-2 text-base font-semibold text-warning-900">
@@ -233,8 +236,10 @@ export const AnalysisPanel = memo(function AnalysisPanel({ spaceName, input, res
         <FindingsList findings={findings} emptyText="Nothing to flag in this space." />
       </section>
 
+      <AirflowEstimateSection estimate={airflow.estimate} ifFansRan={airflow.ifFansRan} conditions={airflow.conditions} isDefaultConditions={airflow.isDefaultConditions} unitSystem={unitSystem} />
+
       <Suspense fallback={<AirflowSectionLoading />}>
-        <AirflowSection input={input} analysis={a} spaceName={spaceName} isShown={isShown} />
+        <AirflowSection input={input} analysis={a} airflow={airflow.estimate?.results.summer ?? null} spaceName={spaceName} isShown={isShown} />
       </Suspense>
     </div>
   );
