@@ -75,6 +75,7 @@ const BODIES: Record<string, () => Record<string, unknown> | "multipart" | undef
   "get /api/options/:id": () => undefined,
   "patch /api/options/:id": () => ({ version: 1, name: "Taken over" }),
   "delete /api/options/:id": () => undefined,
+  "post /api/options/:id/copy": () => undefined,
   "get /api/options/:id/materials": () => undefined,
   "get /api/projects/:id/proposals": () => undefined,
   "post /api/projects/:id/proposals": () => ({ optionIds: [ids.option] }),

@@ -126,8 +126,9 @@ export function createProposalsRepository(db: Database) {
           .where(scoped(proposals, tenant, eq(proposals.id, id), eq(proposals.version, version), inArray(proposals.status, ["sent", "viewed"])))
           .returning();
         if (!row) return null;
+        // Released once: a second proposal offering the same option leaves the first release (and its frozen list) in place.
         await tx.update(designOptions).set({ releasedAt: now, releasedByProposalId: id })
-          .where(scoped(designOptions, tenant, eq(designOptions.id, optionId)));
+          .where(scoped(designOptions, tenant, eq(designOptions.id, optionId), isNull(designOptions.releasedAt)));
         return row;
       }),
 

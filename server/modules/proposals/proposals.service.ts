@@ -6,12 +6,13 @@ import { hashToken, newToken } from "../../lib/tokens.ts";
 import { linkExpiresAt, linkState } from "../../../shared/proposals/lifecycle.ts";
 import { scopeOfWork } from "../../../shared/proposals/scope-of-work.ts";
 import type { AcceptInput, ProposalPatch } from "../../../shared/proposals/schemas.ts";
-import type { ProposalSnapshot, ScopeText, SignatureImage } from "../../../shared/proposals/types.ts";
+import type { CrewPlan, ProposalSnapshot, ScopeText, SignatureImage } from "../../../shared/proposals/types.ts";
+import { DesignError, materialsList } from "../../../shared/design/index.ts";
 import type { CatalogItem } from "../../../shared/schemas/catalog.ts";
 import type { ProjectsRepository } from "../projects/projects.repository.ts";
 import type { SpacesRepository } from "../spaces/spaces.repository.ts";
 import type { OptionRow, OptionsRepository } from "../options/options.repository.ts";
-import { pricingSettings } from "../options/options.service.ts";
+import { pricingSettings, surveyOf } from "../options/options.service.ts";
 import type { CatalogRepository } from "../catalog/catalog.repository.ts";
 import { buildSnapshot, sha256Hex, snapshotSha256 } from "./proposal-snapshot.ts";
 import type { ProposalJobs } from "./proposal-jobs.ts";
@@ -21,6 +22,9 @@ import { THUMB_CONTENT_TYPE } from "../photos/photos.service.ts";
 
 const DEFAULT_VALID_DAYS = 30;
 const EDITABLE = ["draft"] as const;
+
+const SIGNED_LOCKED = "The homeowner accepted this revision, so it is read-only. To change the signed work, draft a change order.";
+const signedLocked = () => conflict(SIGNED_LOCKED, "accepted-locked");
 
 const invalid = (field: string, message: string) => new AppError("invalid-input", `Please check ${field}: ${message}`, 400, { [field]: message });
 
@@ -130,6 +134,26 @@ export function createProposalsService(deps: {
     });
   }
 
+  /** The crew's list of each offered option as it stands now; frozen into the proposal when it is sent. */
+  async function crewPlansNow(actor: Actor, p: ProposalRow): Promise<Record<string, CrewPlan | null>> {
+    const [spaces, options, catalog] = await Promise.all([deps.spaces.listForProject(actor, p.projectId), deps.options.listForProject(actor, p.projectId), deps.catalog.all(actor)]);
+    const surveyed = Object.fromEntries(spaces.map((space) => [space.id, surveyOf(space)]));
+    return Object.fromEntries(p.optionIds.map((id) => {
+      const option = options.find((o) => o.id === id);
+      if (!option) return [id, null];
+      try {
+        return [id, {
+          optionId: id, optionName: option.name,
+          spaces: spaces.filter((space) => option.spaces.some((s) => s.spaceId === space.id)).map((space) => ({ id: space.id, name: space.name })),
+          materials: materialsList(option, catalog, surveyed),
+        }];
+      } catch (err) {
+        if (err instanceof DesignError) return [id, null];
+        throw err;
+      }
+    }));
+  }
+
   async function checkPhotos(actor: Actor, projectId: string, ids: string[]) {
     const found = await repo.photosFor(actor, projectId, ids);
     ids.forEach((id, i) => {
@@ -173,7 +197,7 @@ export function createProposalsService(deps: {
     /** A draft changes in place; a sent one makes a new draft revision and is marked superseded. */
     async update(actor: Actor, id: string, input: ProposalPatch, meta: RequestMeta) {
       const p = await requireProposal(actor, id);
-      if (p.status === "accepted") throw conflict("This proposal was accepted and can no longer be changed.", "accepted-locked");
+      if (p.status === "accepted") throw signedLocked();
       if (p.supersededBy) throw new AppError("superseded", "A newer revision of this proposal exists; edit that one.", 409, {}, { supersededBy: p.supersededBy });
       const { version, ...patch } = input;
       if (patch.validUntil !== undefined && patch.validUntil < today()) throw invalid("validUntil", "The validity date can't be in the past.");
@@ -211,6 +235,7 @@ export function createProposalsService(deps: {
     async render(actor: Actor, id: string) {
       const p = await requireProposal(actor, id);
       if (p.status !== "draft") {
+        if (p.status === "accepted" && p.renderStatus !== "failed") throw signedLocked();
         if (p.renderStatus !== "failed") throw conflict("A sent proposal's PDF is made once, when it is sent.", "already-rendered");
         const updated = await repo.update(actor, id, { renderStatus: "queued", renderError: null, renderUpdatedAt: deps.now() });
         await deps.jobs.enqueueRender(actor, id, p.snapshotSha256!);
@@ -244,6 +269,7 @@ export function createProposalsService(deps: {
     async send(actor: Actor, id: string, meta: RequestMeta) {
       const p = await requireProposal(actor, id);
       if (p.supersededBy) throw new AppError("superseded", "A newer revision of this proposal exists; send that one.", 409, {}, { supersededBy: p.supersededBy });
+      if (p.status === "accepted") throw signedLocked();
       if (p.status !== "draft") throw conflict("This proposal was already sent. Change it to make a new revision, then send that.", "already-sent");
       if (p.validUntil < today()) throw invalid("validUntil", "The validity date has passed; choose a later one before sending.");
       const seller = await repo.user(actor, actor.userId);
@@ -256,13 +282,14 @@ export function createProposalsService(deps: {
 
       const snapshot = await snapshotNow(actor, p, { userId: seller.id, name: seller.name, email: seller.email, signature: { typed: seller.signatureTyped, pngDataUrl: seller.signatureDataUrl } });
       const sha = snapshotSha256(snapshot);
+      const crewPlans = await crewPlansNow(actor, p);
       const { token, tokenHash } = newToken();
       const tokenId = randomUUID();
       const now = deps.now();
       const link = `${deps.appOrigin()}/p/${token}`;
       const dedupeKey = `send:${id}`;
       const sent = await repo.markSent(actor, id, p.version, {
-        status: "sent", snapshot, snapshotSha256: sha, sellerUserId: seller.id, sentAt: now,
+        status: "sent", snapshot, snapshotSha256: sha, crewPlans, sellerUserId: seller.id, sentAt: now,
         tokenHash, tokenId, tokenExpiresAt: linkExpiresAt(p.validUntil), tokenRevokedAt: null,
         renderStatus: "queued", renderError: null, renderAttempts: 0, renderUpdatedAt: now,
       }, { event: "sent", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, tokenId, snapshotSha256: sha, detail: { to: customer.email, revision: p.revision } }, {
