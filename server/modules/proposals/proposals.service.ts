@@ -222,10 +222,12 @@ export function createProposalsService(deps: {
         throw new AppError("stale-version", "Someone else saved this proposal since you opened it.", 409, {}, { current: presentProposal(current) });
       }
       if (p.version !== version) throw new AppError("stale-version", "Someone else saved this proposal since you opened it.", 409, {}, { current: presentProposal(p) });
-      const next = await repo.reviseFrom(actor, p, values as never).catch((err: unknown) => {
-        if ((err as { name?: string }).name === "TransactionRollbackError") throw conflict("This proposal changed meanwhile (accepted, or revised by someone else). Reload it.", "stale-version");
-        throw err;
-      });
+      const next = await repo.reviseFrom(actor, p, values as never);
+      if (!next) {
+        const now = await requireProposal(actor, id);
+        if (now.status === "accepted") throw signedLocked();
+        throw new AppError("stale-version", "This proposal changed meanwhile (revised by someone else, or answered by the homeowner). Reload it.", 409, {}, { current: presentProposal(now) });
+      }
       await repo.addEvent(actor, p.id, { event: "superseded", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId, detail: { supersededBy: next.id, revision: next.revision } });
       await repo.addEvent(actor, next.id, { event: "created", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, detail: { revisionOf: p.id } });
       return { proposal: presentProposal(next), revisedFrom: p.id };
@@ -385,15 +387,18 @@ export function createProposalsService(deps: {
         signature: { typed: input.signature.typed ?? null, pngStorageKey: pngKey, pngSha256 },
         consentTextVersion: input.consent.consentTextVersion, acceptedAt: now.toISOString(), ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId,
       };
-      const updated = await repo.acceptAndRelease(p, p.id, p.version, input.optionId, { status: "accepted", acceptance, decidedAt: now, signedRenderStatus: "queued", signedRenderUpdatedAt: now }, now);
-      if (!updated) throw conflict("This proposal changed meanwhile; please reload the page.", "stale-version");
-      await repo.addEvent(p, p.id, {
+      const updated = await repo.acceptAndRelease(p, p.id, p.version, input.optionId, { status: "accepted", acceptance, decidedAt: now, signedRenderStatus: "queued", signedRenderUpdatedAt: now }, {
         event: "accepted", at: now, ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId,
         snapshotSha256: p.snapshotSha256, pdfSha256: p.pdfSha256, consentTextVersion: input.consent.consentTextVersion,
         detail: { optionId: input.optionId, signerName: input.signerName, signature: png ? "drawn" : "typed", signaturePngSha256: pngSha256, esignConsent: true },
-      });
-      await repo.setProjectStatus(p, p.projectId, "sold");
-      await deps.jobs.enqueueSignedRender(p, p.id);
+      }, p.projectId, now);
+      if (!updated) {
+        const current = await repo.find(p, p.id);
+        if (current?.supersededBy) throw new AppError("superseded", "This proposal has just been replaced by a newer revision. Look for the newer e-mail, or contact the company that sent it.", 410, {}, { supersededByRevision: true });
+        throw conflict("This proposal changed meanwhile; please reload the page.", "stale-version");
+      }
+      // Committed with the acceptance; this only nudges the worker (the recovery sweep would queue it too).
+      await deps.jobs.enqueueSignedRender(p, p.id).catch(() => {});
       return publicView(updated, snapshot);
     },
 
