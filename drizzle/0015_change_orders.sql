@@ -14,6 +14,8 @@ CREATE TABLE "change_orders" (
 	"pdf_sha256" text,
 	"acceptance" jsonb,
 	"decline_reason" text,
+	"token_hash" text,
+	"token_id" uuid,
 	"created_by" text,
 	"sent_by" text,
 	"sent_at" timestamp with time zone,
@@ -32,4 +34,5 @@ ALTER TABLE "change_orders" ADD CONSTRAINT "change_orders_created_by_users_id_fk
 ALTER TABLE "change_orders" ADD CONSTRAINT "change_orders_sent_by_users_id_fk" FOREIGN KEY ("sent_by") REFERENCES "public"."users"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 CREATE UNIQUE INDEX "change_orders_number_idx" ON "change_orders" USING btree ("proposal_id","number");--> statement-breakpoint
 CREATE INDEX "change_orders_project_idx" ON "change_orders" USING btree ("project_id","created_at");--> statement-breakpoint
-CREATE UNIQUE INDEX "change_orders_pdf_idx" ON "change_orders" USING btree ("pdf_sha256");
+CREATE UNIQUE INDEX "change_orders_pdf_idx" ON "change_orders" USING btree ("pdf_sha256");--> statement-breakpoint
+CREATE UNIQUE INDEX "change_orders_token_hash_idx" ON "change_orders" USING btree ("token_hash");

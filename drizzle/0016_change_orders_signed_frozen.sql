@@ -16,6 +16,7 @@ BEGIN
     OR NEW.reason IS DISTINCT FROM OLD.reason
     OR NEW.photo_ids IS DISTINCT FROM OLD.photo_ids
     OR NEW.number IS DISTINCT FROM OLD.number
+    OR NEW.token_hash IS DISTINCT FROM OLD.token_hash
     OR NEW.proposal_id IS DISTINCT FROM OLD.proposal_id
     OR (OLD.pdf_sha256 IS NOT NULL AND NEW.pdf_sha256 IS DISTINCT FROM OLD.pdf_sha256)
   THEN

@@ -29,6 +29,9 @@ export const changeOrders = pgTable(
     pdfSha256: text(),
     acceptance: jsonb().$type<ChangeOrderAcceptance>(),
     declineReason: text(),
+    /** The homeowner's link to this change order: only the SHA-256 of its token is kept. */
+    tokenHash: text(),
+    tokenId: uuid(),
     createdBy: text().references(() => users.id, { onDelete: "set null" }),
     sentBy: text().references(() => users.id, { onDelete: "set null" }),
     sentAt: timestamp({ withTimezone: true, mode: "date" }),
@@ -41,6 +44,7 @@ export const changeOrders = pgTable(
     uniqueIndex("change_orders_number_idx").on(t.proposalId, t.number),
     index("change_orders_project_idx").on(t.projectId, t.createdAt),
     uniqueIndex("change_orders_pdf_idx").on(t.pdfSha256),
+    uniqueIndex("change_orders_token_hash_idx").on(t.tokenHash),
     check("change_orders_status_check", sql`${t.status} in ('draft', 'sent', 'signed', 'declined')`),
     check("change_orders_version_check", sql`${t.version} >= 1`),
   ],
