@@ -120,6 +120,13 @@ const ROUTES: Record<string, { refuses: Call[] } | { leavesAlone: string; calls?
   "patch /api/photos/:id": { leavesAlone: "captions are copied into the snapshot at sending", calls: [() => send(team.asOwner, "patch", `/api/photos/${ids.photo}`, { caption: "Changed" })] },
   "post /api/options/:id/copy": { leavesAlone: "makes a new draft option", calls: [() => send(team.asSales, "post", `/api/options/${ids.chosen}/copy`)] },
   "post /api/projects/:id/options": { leavesAlone: "makes a new draft option" },
+  "post /api/proposals/:id/change-orders": { leavesAlone: "drafts a change order: only a signed one changes the work (change-orders.test.ts)", calls: [
+    () => send(team.asSales, "post", `/api/proposals/${ids.proposal}/change-orders`, { reason: "Rotted decking found under the ridge", lines: [{ id: "l1", action: "add", catalogItemId: ids.strip, quantity: 16 }] }),
+  ] },
+  "put /api/change-orders/:id": { leavesAlone: "edits a draft change order" },
+  "post /api/change-orders/:id/send": { leavesAlone: "sends a change order for signing; unsigned, it changes nothing" },
+  "post /api/public/change-orders/:token/sign": { leavesAlone: "the signed change is the one way signed work changes (change-orders.test.ts)" },
+  "post /api/public/change-orders/:token/decline": { leavesAlone: "a declined change order changes nothing (change-orders.test.ts)" },
   "post /api/projects/:id/options/generate": { leavesAlone: "saves nothing" },
   "post /api/projects/:id/proposals": { leavesAlone: "makes a new draft proposal" },
   "post /api/proposals/:id/revoke-link": { leavesAlone: "changes who may open the link, not what was signed (proposals.test.ts)" },

@@ -90,9 +90,10 @@ describe("a server killed while it records an acceptance", () => {
     expect(await pending).toBe("connection lost");
 
     // Nothing half-done: not accepted, no event, project not sold, nothing released.
-    const after = await until("the aborted transaction to end", () => stateOf(proposalId, projectId, optionId),
-      async () => (await t.db.execute(sql`select count(*)::int as n from pg_stat_activity where wait_event = 'PgSleep' and datname = current_database()`))[0]!.n === 0, 10_000);
-    expect(after).toEqual({ status: "sent", acceptedEvents: 0, projectStatus: "proposed", isReleased: false });
+    await until("the aborted transaction to end",
+      async () => (await t.db.execute(sql`select count(*)::int as n from pg_stat_activity where wait_event = 'PgSleep' and datname = current_database()`))[0] as { n: number },
+      (row) => row.n === 0, 10_000);
+    expect(await stateOf(proposalId, projectId, optionId)).toEqual({ status: "sent", acceptedEvents: 0, projectStatus: "proposed", isReleased: false });
 
     second = await startServerProcess({ STORAGE_DIR: storageDir });
     const res = await acceptOn(second, token, optionId, "Rowan Tessaly");

@@ -1,6 +1,6 @@
 import { and, asc, eq, isNull, sql } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
-import { companies, designOptions, proposals } from "../../db/schema/index.ts";
+import { changeOrders, companies, designOptions, proposals } from "../../db/schema/index.ts";
 import { scoped } from "../../lib/tenant.ts";
 import type { Actor } from "../../lib/request-context.ts";
 import type { DesignOptionInput } from "../../../shared/schemas/options.ts";
@@ -77,6 +77,12 @@ export function createOptionsRepository(db: Database) {
         ? { releasedAt: row.releasedAt, proposalId: row.proposalId, revision: row.revision, plan: row.crewPlans?.[id] ?? null }
         : null;
     },
+
+    /** The signed change orders of an accepted revision, in the order they were signed: they change the crew's list. */
+    signedChanges: (actor: Actor, proposalId: string) =>
+      db.select({ number: changeOrders.number, lines: changeOrders.lines }).from(changeOrders)
+        .where(scoped(changeOrders, actor, eq(changeOrders.proposalId, proposalId), eq(changeOrders.status, "signed")))
+        .orderBy(asc(changeOrders.decidedAt), asc(changeOrders.number)),
 
     /** Adds the option at the end of the project's list. */
     insert: (actor: Actor, projectId: string, input: DesignOptionInput) =>

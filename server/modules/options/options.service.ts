@@ -10,6 +10,7 @@ import type { ProjectRow, ProjectsRepository } from "../projects/projects.reposi
 import type { SpaceRow, SpacesRepository } from "../spaces/spaces.repository.ts";
 import type { CatalogRepository } from "../catalog/catalog.repository.ts";
 import { optionReferenceProblems } from "./option-references.ts";
+import { applyChangeOrders } from "../../../shared/change-orders/crew-list.ts";
 import type { AcceptedRevision, CompanyTerms, OptionRow, OptionsRepository, SignedPrice } from "./options.repository.ts";
 
 export const STALE_OPTION_MESSAGE = "Someone else saved this design option since you opened it.";
@@ -120,8 +121,11 @@ export interface OptionMaterials {
   /** The spaces the option works in, to label the work lines' spaceId. */
   spaces: { id: string; name: string }[];
   materials: MaterialsList;
-  /** Set when an accepted proposal released this list to the crew; the list is then the one frozen when that proposal was sent. */
-  release: { releasedAt: Date; proposalId: string; revision: number } | null;
+  /**
+   * Set when an accepted proposal released this list to the crew: the list is then the one frozen
+   * when that proposal was sent, changed only by the signed change orders named here.
+   */
+  release: { releasedAt: Date; proposalId: string; revision: number; changeOrders: number[] } | null;
 }
 export interface SkippedProposal {
   spaceId: string;
@@ -261,10 +265,11 @@ export function createOptionsService(deps: { repo: OptionsRepository; projects: 
       const option = await requireOption(actor, id);
       const project = await requireProject(actor, option.projectId);
       const released = await repo.release(actor, option.id);
-      const release = released ? { releasedAt: released.releasedAt, proposalId: released.proposalId, revision: released.revision } : null;
+      const changes = released ? await repo.signedChanges(actor, released.proposalId) : [];
+      const release = released ? { releasedAt: released.releasedAt, proposalId: released.proposalId, revision: released.revision, changeOrders: changes.map((c) => c.number) } : null;
       const base = { option: { id: option.id, name: option.name, version: option.version, projectId: project.id }, project: { id: project.id, title: project.title, siteAddress: project.siteAddress } };
-      // Released: the list frozen when the signed proposal was sent, never recomputed from today's catalog or survey.
-      if (released?.plan) return { ...base, spaces: released.plan.spaces, materials: released.plan.materials, release };
+      // Released: the list frozen when the signed proposal was sent plus signed change orders, never recomputed from today's catalog or survey.
+      if (released?.plan) return { ...base, spaces: released.plan.spaces, materials: applyChangeOrders(released.plan.materials, changes), release };
       const [spaces, catalog] = await Promise.all([deps.spaces.listForProject(actor, project.id), deps.catalog.all(actor)]);
       const surveyed = Object.fromEntries(spaces.map((space) => [space.id, surveyOf(space)]));
       return {

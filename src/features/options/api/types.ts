@@ -68,7 +68,7 @@ export interface OptionMaterials {
   spaces: { id: string; name: string }[];
   materials: MaterialsList;
   /** Set once an accepted proposal released this list to the crew (ISO time). */
-  release: { releasedAt: string; proposalId: string; revision: number } | null;
+  release: { releasedAt: string; proposalId: string; revision: number; changeOrders: number[] } | null;
 }
 
 /** The project fields the options workspace needs, from GET /api/projects/:id. */
