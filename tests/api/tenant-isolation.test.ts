@@ -43,9 +43,9 @@ beforeAll(async () => {
   const [payment] = await t.db.insert(payments).values({ companyId: tallgrass.company.id, proposalId: proposal.body.proposal.id as string, optionId: option.body.option.id, amountCents: 10_000, status: "paid", paymentIntentId: "pi_test_tenant_matrix" }).returning();
   ids.payment = payment!.id;
   // A sent change order row of the first company (its PDF is the rendered proposal's file), for the change-order routes.
-  const [rendered] = await t.db.select().from(proposals).where(eq(proposals.id, ids.proposal));
+  const [rendered] = await t.db.select().from(proposals).where(eq(proposals.id, ids.proposal!));
   const [changeOrder] = await t.db.insert(changeOrders).values({
-    companyId: tallgrass.company.id, projectId: project.id, proposalId: ids.proposal, number: 1, status: "sent", reason: "Qwerty change", pdfKey: rendered!.pdfKey, pdfSha256: `co-${rendered!.pdfSha256}`,
+    companyId: tallgrass.company.id, projectId: project.id, proposalId: ids.proposal!, number: 1, status: "sent", reason: "Qwerty change", pdfKey: rendered!.pdfKey, pdfSha256: `co-${rendered!.pdfSha256}`,
   }).returning();
   ids.changeOrder = changeOrder!.id;
   Object.assign(ids, {

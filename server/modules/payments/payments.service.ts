@@ -7,7 +7,7 @@ import type { ProposalRow } from "../proposals/proposals.repository.ts";
 import type { ProposalsService } from "../proposals/proposals.service.ts";
 import { depositDue } from "./deposit-amount.ts";
 import type { CheckoutSessionFacts, PaymentProvider, ProviderEvent } from "./payment-provider.ts";
-import type { PaymentRow, PaymentsRepository, PaymentWrite } from "./payments.repository.ts";
+import type { PaymentRow, PaymentsRepository } from "./payments.repository.ts";
 import type { DepositView, Payment } from "../../../shared/schemas/deposits.ts";
 
 /** Deposits are charged in US dollars: the product serves US contractors. */

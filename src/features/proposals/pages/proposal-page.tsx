@@ -32,6 +32,8 @@ export interface ProposalPageProps {
   userName: string;
   /** The deposit's state for staff, composed in by the route (the deposits feature); shown once accepted. */
   depositStatus?: React.ReactNode;
+  /** Change orders and the job's current scope and total, composed in by the route (the change-orders feature); shown once accepted. */
+  changeOrders?: React.ReactNode;
 }
 
 function Times({ p }: { p: ProposalRecord }) {
@@ -59,7 +61,7 @@ function Times({ p }: { p: ProposalRecord }) {
 }
 
 /** One proposal revision: the builder while it is a draft, the frozen record with its audit trail once sent. */
-export function ProposalPage({ projectId, proposalId, canSend, userName, depositStatus }: ProposalPageProps) {
+export function ProposalPage({ projectId, proposalId, canSend, userName, depositStatus, changeOrders }: ProposalPageProps) {
   const queryClient = useQueryClient();
   const navigate = useNavigate();
   const detail = useQuery({
@@ -200,6 +202,14 @@ export function ProposalPage({ projectId, proposalId, canSend, userName, deposit
           </CardBody>
         </Card>
       )}
+      {proposal.status === "accepted" && changeOrders ? (
+        <Card aria-labelledby="pp-change-orders">
+          <CardHeader>
+            <CardTitle id="pp-change-orders">Change orders</CardTitle>
+          </CardHeader>
+          <CardBody>{changeOrders}</CardBody>
+        </Card>
+      ) : null}
       {proposal.status === "accepted" && depositStatus ? (
         <Card aria-labelledby="pp-deposit">
           <CardHeader>
