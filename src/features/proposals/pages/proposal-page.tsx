@@ -239,7 +239,7 @@ export function ProposalPage({ projectId, proposalId, canSend, userName, deposit
       ) : !isDraft ? (
         <Alert severity={proposal.status === "accepted" ? "ok" : "info"} title={proposal.status === "accepted" ? "Accepted — locked" : "Sent — frozen"} className="mb-6">
           {proposal.status === "accepted"
-            ? "The homeowner accepted this proposal. It can no longer be changed."
+            ? "The homeowner accepted this proposal, so it is read-only. To change the signed work, draft a change order below; the homeowner signs it the same way."
             : "What the homeowner sees can't change. To change anything, make a new revision: the old link will then say it was replaced."}
         </Alert>
       ) : null}
@@ -263,7 +263,7 @@ export function ProposalPage({ projectId, proposalId, canSend, userName, deposit
       ) : (
         <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_24rem] lg:items-start">
           <div className="min-w-0">{snapshot ? <FrozenProposal proposal={proposal} snapshot={snapshot} /> : null}</div>
-          <aside className="space-y-6" aria-label="Status, PDF and link">
+          <aside className="min-w-0 space-y-6" aria-label="Status, PDF and link">
             {sideCards(true)}
           </aside>
         </div>
