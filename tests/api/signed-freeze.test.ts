@@ -195,7 +195,7 @@ describe("signed work is frozen (routes from the declared list)", () => {
     const pdf = await team.asOwner.get(`/api/proposals/${ids.proposal}/pdf?kind=original`);
     expect(pdf.status).toBe(200);
     expect(pdf.headers["x-content-sha256"]).toBe((await t.db.select().from(proposals).where(eq(proposals.id, ids.proposal!)))[0]!.pdfSha256);
-  });
+  }, 120_000);
 
   it("when the accepted option is read, then it carries the lock and its reason; an offered one says to copy it", async () => {
     const chosen = (await team.asOwner.get(`/api/options/${ids.chosen}`).expect(200)).body.option;
