@@ -130,6 +130,10 @@ describe("change orders", () => {
     expect(after.materials.items).toEqual([expect.objectContaining({ sku: "SS-8", quantity: 32, buyCount: 4 })]);
     expect(after.materials.work.map((w: { description: string }) => w.description)).toContain("Change order 1: add Replace rotted roof decking under the ridge (32 sq ft).");
     expect(after.release).toMatchObject({ proposalId: ids.proposal, changeOrders: [1] });
+    // The public check knows the change order's PDF: which one, of which revision, and that it is signed.
+    const pdfSha = (await historyOf()).changeOrders[0].pdfSha256 as string;
+    const verified = await t.request().get(`/api/public/verify?sha256=${pdfSha}`).expect(200);
+    expect(verified.body).toMatchObject({ matches: true, document: { kind: "change-order", changeOrderNumber: 1, revision: 1, status: "signed" } });
     const history = await historyOf();
     expect(history.current).toEqual({ totalCents: SIGNED_TOTAL_CENTS + 12_124, signedChangeOrders: [1] });
     const events = (await team.asOwner.get(`/api/proposals/${ids.proposal}`)).body.events.map((e: { event: string }) => e.event);

@@ -1,7 +1,7 @@
 import { randomUUID } from "node:crypto";
 import { and, asc, desc, eq, inArray, isNotNull, isNull, lt, lte, or, sql } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
-import { companies, customers, designOptions, photos, projects, proposalEvents, proposalMails, proposals, userSignatures, users } from "../../db/schema/index.ts";
+import { changeOrders, companies, customers, designOptions, photos, projects, proposalEvents, proposalMails, proposals, userSignatures, users } from "../../db/schema/index.ts";
 import { scoped } from "../../lib/tenant.ts";
 import type { ProposalStatus } from "../../../shared/proposals/types.ts";
 import type { OutgoingEmail } from "../../lib/mailer.ts";
@@ -175,6 +175,15 @@ export function createProposalsRepository(db: Database) {
 
     events: (tenant: Tenant, proposalId: string) =>
       db.select().from(proposalEvents).where(scoped(proposalEvents, tenant, eq(proposalEvents.proposalId, proposalId))).orderBy(asc(proposalEvents.id)),
+
+    /** Is this hash one of a sent change order's PDF? Its accepted revision's number comes along. */
+    async findChangeOrderByPdfHash(sha256: string) {
+      const [row] = await db
+        .select({ number: changeOrders.number, status: changeOrders.status, sentAt: changeOrders.sentAt, decidedAt: changeOrders.decidedAt, revision: proposals.revision })
+        .from(changeOrders).innerJoin(proposals, eq(proposals.id, changeOrders.proposalId))
+        .where(eq(changeOrders.pdfSha256, sha256)).limit(1);
+      return row ?? null;
+    },
 
     /** Is this hash one of a recorded PDF (as sent, or signed)? */
     async findByPdfHash(sha256: string) {

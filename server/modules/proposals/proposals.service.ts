@@ -416,7 +416,14 @@ export function createProposalsService(deps: {
     /** Does this SHA-256 belong to a PDF we recorded (as sent, or signed)? Says nothing else about it. */
     async verify(sha256: string) {
       const hit = await repo.findByPdfHash(sha256);
-      if (!hit) return { sha256, matches: false as const };
+      if (!hit) {
+        const change = await repo.findChangeOrderByPdfHash(sha256);
+        if (!change) return { sha256, matches: false as const };
+        return {
+          sha256, matches: true as const,
+          document: { kind: "change-order" as const, changeOrderNumber: change.number, revision: change.revision, status: change.status, sentAt: change.sentAt, decidedAt: change.decidedAt },
+        };
+      }
       return {
         sha256, matches: true as const,
         document: { kind: hit.signedPdfSha256 === sha256 ? "signed" : "sent", revision: hit.revision, status: hit.status, sentAt: hit.sentAt, decidedAt: hit.decidedAt },
