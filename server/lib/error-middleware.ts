@@ -17,7 +17,7 @@ export function isDatabaseUnavailable(err: unknown): boolean {
   return false;
 }
 
-/** The database's own guard on signed work (migration 0014 raises restrict_violation). */
+/** The database's own guard on signed work (migrations 0015 and 0016 raise restrict_violation). */
 export function isSignedWorkRefusal(err: unknown): boolean {
   for (let e = err as { code?: unknown; cause?: unknown } | null, depth = 0; e && depth < 5; e = e.cause as typeof e, depth++) {
     if (e.code === "23001") return true;

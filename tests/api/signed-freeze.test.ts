@@ -220,7 +220,7 @@ describe("signed work is frozen (routes from the declared list)", () => {
   });
 
   it("when code other than the API writes to a released option or an accepted revision, then the database refuses it", async () => {
-    /** The driver's error under Drizzle's wrapper: SQLSTATE 23001 from migration 0014's triggers. */
+    /** The driver's error under Drizzle's wrapper: SQLSTATE 23001 from migration 0015's triggers. */
     const refusal = async (write: PromiseLike<unknown>) => {
       try {
         await write;

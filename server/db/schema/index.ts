@@ -13,4 +13,5 @@ export * from "./catalog-items.ts";
 export * from "./design-options.ts";
 export * from "./proposals.ts";
 export * from "./payments.ts";
+export * from "./limits.ts";
 export * from "./change-orders.ts";

@@ -1,1 +1,0 @@
-ALTER TABLE "proposals" ADD COLUMN "crew_plans" jsonb;
