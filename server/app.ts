@@ -55,6 +55,10 @@ import { createProposalJobs } from "./modules/proposals/proposal-jobs.ts";
 import { proposalsRouter } from "./modules/proposals/proposals.router.ts";
 import { publicProposalsRouter, publicRateLimits } from "./modules/proposals/public.router.ts";
 import { signatureJson } from "./modules/proposals/uploads.ts";
+import { renderChangeOrderPdf } from "./modules/proposals/pdf/change-order-document.tsx";
+import { createChangeOrdersRepository } from "./modules/change-orders/change-orders.repository.ts";
+import { createChangeOrdersService } from "./modules/change-orders/change-orders.service.ts";
+import { changeOrdersRouter, publicChangeOrdersRouter } from "./modules/change-orders/change-orders.router.ts";
 import { createPipelineRepository } from "./modules/pipeline/pipeline.repository.ts";
 import { createPipelineService } from "./modules/pipeline/pipeline.service.ts";
 import { pipelineRouter } from "./modules/pipeline/pipeline.router.ts";
@@ -154,6 +158,9 @@ export function createApp(deps: AppDeps): Express {
     storage, jobs: proposalJobs, now, appOrigin,
   });
   const companyService = createCompanyService({ repo: proposalsRepo, storage });
+  const changeOrdersService = createChangeOrdersService({
+    repo: createChangeOrdersRepository(db), proposals: proposalsRepo, catalog: catalogRepo, storage, jobs: proposalJobs, renderPdf: renderChangeOrderPdf, now, appOrigin: () => appOrigin(),
+  });
   app.locals.proposalJobs = proposalJobs;
   const paymentsService = createPaymentsService({
     repo: createPaymentsRepository(db), proposals: proposalsService, provider: deps.paymentProvider === undefined ? createPaymentProvider(env) : deps.paymentProvider,
@@ -167,7 +174,7 @@ export function createApp(deps: AppDeps): Express {
   const api = express.Router();
   api.use("/public", ...publicRateLimits({ db, now, namespace: deps.rateLimitNamespace ?? "" }));
   // Routes carrying a drawn signature parse their own (larger) JSON first; the parser below then skips them.
-  api.use(["/public/proposals/:token/accept", "/auth/me/signature"], signatureJson());
+  api.use(["/public/proposals/:token/accept", "/public/change-orders/:token/sign", "/auth/me/signature"], signatureJson());
   // The payment webhook's signature covers the raw bytes: read them before the JSON parser.
   api.use(PAYMENTS_WEBHOOK_PATH, paymentsWebhookBody());
   api.use(express.json({ limit: "1mb" }));
@@ -198,7 +205,7 @@ export function createApp(deps: AppDeps): Express {
     authRouter(authService, lucia), teamRouter(teamService), outboxRouter(createOutboxRepository(db)),
     customersRouter(customersService), projectsRouter(projectsService), spacesRouter(spacesService), photosRouter(photosService), usersRouter(usersService),
     catalogRouter(catalogService), optionsRouter(optionsService), proposalsRouter(proposalsService, companyService), publicProposalsRouter(proposalsService),
-    paymentsRouter(paymentsService), pipelineRouter(pipelineService)];
+    paymentsRouter(paymentsService), pipelineRouter(pipelineService), changeOrdersRouter(changeOrdersService), publicChangeOrdersRouter(changeOrdersService)];
   for (const router of declared) api.use(router);
   app.locals.routes = declared.flatMap((router) => router.routes.map((route): RouteInfo => ({ ...route, path: `/api${route.path}` })));
 

@@ -17,6 +17,14 @@ export function isDatabaseUnavailable(err: unknown): boolean {
   return false;
 }
 
+/** The database's own guard on signed work (migrations 0015 and 0016 raise restrict_violation). */
+export function isSignedWorkRefusal(err: unknown): boolean {
+  for (let e = err as { code?: unknown; cause?: unknown } | null, depth = 0; e && depth < 5; e = e.cause as typeof e, depth++) {
+    if (e.code === "23001") return true;
+  }
+  return false;
+}
+
 export function zodFields(err: ZodError): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of err.issues) {
@@ -54,6 +62,10 @@ export function errorMiddleware(logger: Logger): ErrorRequestHandler {
         e.type === "entity.parse.failed" ? "The request body is not valid JSON." :
         e.message ?? "The request could not be read.";
       res.status(status).json({ error: { code: e.type ?? e.code ?? "bad-request", message, fields: {} } });
+      return;
+    }
+    if (isSignedWorkRefusal(err)) {
+      res.status(409).json({ error: { code: "accepted-locked", message: "The homeowner signed this work, so it is read-only. Draft a change order to change it.", fields: {} } });
       return;
     }
     if (isDatabaseUnavailable(err)) {

@@ -4,6 +4,7 @@
  * the hashes all read the same snapshot.
  */
 import type { AirflowPicture } from "../airflow/types";
+import type { MaterialsList } from "../design/materials-list";
 import type { OptionPrice } from "../pricing/price-option";
 import type { Severity } from "../ventilation/findings";
 
@@ -147,4 +148,17 @@ export interface ProposalAcceptance {
   ip: string | null;
   userAgent: string | null;
   tokenId: string | null;
+}
+
+/**
+ * The crew's side of one offered option, frozen when the proposal is sent: the materials list and
+ * work lines as they stood then. Acceptance releases the chosen one as is, so nothing edited later
+ * (the option, the catalog, the survey) can change what the crew works from.
+ */
+export interface CrewPlan {
+  optionId: string;
+  optionName: string;
+  /** The attic spaces the work lines name. */
+  spaces: { id: string; name: string }[];
+  materials: MaterialsList;
 }

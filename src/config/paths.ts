@@ -88,6 +88,12 @@ export const paths = {
     path: "/p/:token",
     getHref: (token: string) => `/p/${encodeURIComponent(token)}`,
   },
+
+  /** The homeowner's change-order page (no account). */
+  publicChangeOrder: {
+    path: "/c/:token",
+    getHref: (token: string) => `/c/${encodeURIComponent(token)}`,
+  },
 } as const;
 
 /** Where a user lands after signing in when no `next` was given. */

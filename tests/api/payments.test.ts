@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Server } from "node:http";
-import { and, eq, like } from "drizzle-orm";
+import { and, eq, like, sql } from "drizzle-orm";
 import { auditEvents, outboxMessages, paymentEvents, payments, proposalEvents } from "../../server/db/schema/index.ts";
 import { LOCAL_PAYMENT_KEYS } from "../../server/env.ts";
 import { ESIGN_CONSENT_VERSION } from "../../shared/proposals/disclosures.ts";
@@ -266,6 +266,39 @@ describe("the webhook decides, never the redirect", () => {
     const payAgain = await pub("post", `/api/public/proposals/${p.token}/deposit/checkout`).send({});
     expect(payAgain.status).toBe(409);
     expect(payAgain.body.error.code).toBe("already-paid");
+  });
+});
+
+describe("a checkout is applied once, whatever events arrive (issue 14)", () => {
+  it("when six different signed 'paid' events for one checkout are posted at once, then the deposit is applied exactly once: one paid row, one event, one e-mail", async () => {
+    const p = await acceptedProposal();
+    const c = await checkout(p.token);
+    // The provider may send checkout.session.completed and async_payment_succeeded, each retried
+    // under a new id by a misbehaving relay: six different events, all saying this checkout is paid.
+    const intent = `pi_race_${Date.now()}`;
+    const session = { id: c.sessionId, object: "checkout.session", status: "complete", payment_status: "paid", amount_total: c.amountCents, currency: "usd", payment_intent: intent, url: null, metadata: {} };
+    const bodies = Array.from({ length: 6 }, (_, i) => JSON.stringify({
+      id: `evt_race_${i}_${Date.now()}`, object: "event", api_version: "2026-10-28.endive", created: Math.floor(Date.now() / 1000),
+      type: i % 2 === 0 ? "checkout.session.completed" : "checkout.session.async_payment_succeeded",
+      data: { object: session }, livemode: false, pending_webhooks: 1, request: { id: null, idempotency_key: null },
+    }));
+    const answers = await Promise.all(bodies.map((body) => postWebhook(body, signWebhookPayload(body, LOCAL_PAYMENT_KEYS.STRIPE_WEBHOOK_SECRET))));
+    expect(answers.map((a) => a.status)).toEqual([200, 200, 200, 200, 200, 200]);
+    expect(answers.filter((a) => a.body.isApplied === true)).toHaveLength(1);
+
+    const rows = await rowsFor(p.id);
+    expect(rows).toHaveLength(1);
+    expect(rows[0]).toMatchObject({ status: "paid", paidCents: c.amountCents, paymentIntentId: intent });
+    const events = await t.db.select().from(proposalEvents).where(and(eq(proposalEvents.proposalId, p.id), eq(proposalEvents.event, "deposit-paid")));
+    expect(events).toHaveLength(1);
+    const audits = await t.db.select().from(auditEvents).where(and(eq(auditEvents.event, "deposit-paid"), sql`${auditEvents.detail}->>'paymentIntentId' = ${intent}`));
+    expect(audits).toHaveLength(1);
+    // Every event id is still claimed, so none is applied later by a retry.
+    const claimed = await t.db.select().from(paymentEvents).where(eq(paymentEvents.paymentId, rows[0]!.id));
+    expect(claimed).toHaveLength(6);
+    await waitFor("the salesperson's e-mail", () => mailsAbout(intent), (m) => m.length > 0);
+    await new Promise((r) => setTimeout(r, 1_500));
+    expect(await mailsAbout(intent)).toHaveLength(1);
   });
 });
 

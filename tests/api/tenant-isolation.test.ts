@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import sharp from "sharp";
 import type { RouteInfo } from "../../server/lib/routes.ts";
-import { payments } from "../../server/db/schema/index.ts";
+import { eq } from "drizzle-orm";
+import { changeOrders, payments, proposals } from "../../server/db/schema/index.ts";
 import { can, ROLES } from "../../shared/schemas/roles.ts";
 import { ORIGIN, startTestApp, type TestApp } from "../setup/test-app.ts";
 import { createCustomer, createProject, createSpace, mainAttic, makeTeam, type Agent, type Team } from "../setup/survey-fixtures.ts";
@@ -41,6 +42,12 @@ beforeAll(async () => {
   // A paid deposit row of the first company (as a webhook would leave it), for the payment routes.
   const [payment] = await t.db.insert(payments).values({ companyId: tallgrass.company.id, proposalId: proposal.body.proposal.id as string, optionId: option.body.option.id, amountCents: 10_000, status: "paid", paymentIntentId: "pi_test_tenant_matrix" }).returning();
   ids.payment = payment!.id;
+  // A sent change order row of the first company (its PDF is the rendered proposal's file), for the change-order routes.
+  const [rendered] = await t.db.select().from(proposals).where(eq(proposals.id, ids.proposal!));
+  const [changeOrder] = await t.db.insert(changeOrders).values({
+    companyId: tallgrass.company.id, projectId: project.id, proposalId: ids.proposal!, number: 1, status: "sent", reason: "Qwerty change", pdfKey: rendered!.pdfKey, pdfSha256: `co-${rendered!.pdfSha256}`,
+  }).returning();
+  ids.changeOrder = changeOrder!.id;
   Object.assign(ids, {
     customer: customer.id, project: project.id, space: space.id, secondSpace: second.id, photo: photo.body.photo.id, invite: invite.body.invite.id,
     catalogItem: item.body.item.id, option: option.body.option.id,
@@ -75,6 +82,7 @@ const BODIES: Record<string, () => Record<string, unknown> | "multipart" | undef
   "get /api/options/:id": () => undefined,
   "patch /api/options/:id": () => ({ version: 1, name: "Taken over" }),
   "delete /api/options/:id": () => undefined,
+  "post /api/options/:id/copy": () => undefined,
   "get /api/options/:id/materials": () => undefined,
   "get /api/projects/:id/proposals": () => undefined,
   "post /api/projects/:id/proposals": () => ({ optionIds: [ids.option] }),
@@ -87,6 +95,11 @@ const BODIES: Record<string, () => Record<string, unknown> | "multipart" | undef
   "post /api/proposals/:id/revoke-link": () => undefined,
   "get /api/proposals/:id/payments": () => undefined,
   "post /api/payments/:id/refund": () => undefined,
+  "get /api/proposals/:id/change-orders": () => undefined,
+  "post /api/proposals/:id/change-orders": () => ({ reason: "Taken over", lines: [{ id: "l1", action: "add", description: "x", quantity: 1, unitPriceCents: 100 }] }),
+  "put /api/change-orders/:id": () => ({ version: 1, reason: "Taken over", lines: [{ id: "l1", action: "add", description: "x", quantity: 1, unitPriceCents: 100 }] }),
+  "post /api/change-orders/:id/send": () => undefined,
+  "get /api/change-orders/:id/pdf": () => undefined,
 };
 
 function urlFor(route: RouteInfo, id: (param: string, route: RouteInfo) => string) {
@@ -102,6 +115,7 @@ const realId = (param: string, route: RouteInfo) => {
   if (route.path.startsWith("/api/options")) return ids.option!;
   if (route.path.startsWith("/api/proposals")) return ids.proposal!;
   if (route.path.startsWith("/api/payments")) return ids.payment!;
+  if (route.path.startsWith("/api/change-orders")) return ids.changeOrder!;
   return ids.project!;
 };
 

@@ -14,3 +14,4 @@ export * from "./design-options.ts";
 export * from "./proposals.ts";
 export * from "./payments.ts";
 export * from "./limits.ts";
+export * from "./change-orders.ts";

@@ -1,6 +1,6 @@
 import { pgTable, uuid, text, timestamp, integer, jsonb, date, index, uniqueIndex, check, pgEnum, bigserial } from "drizzle-orm/pg-core";
 import { sql } from "drizzle-orm";
-import type { DepositRule, ProposalAcceptance, ProposalSnapshot, ScopeText } from "../../../shared/proposals/types.ts";
+import type { CrewPlan, DepositRule, ProposalAcceptance, ProposalSnapshot, ScopeText } from "../../../shared/proposals/types.ts";
 import { PROPOSAL_STATUSES, RENDER_STATUSES } from "../../../shared/proposals/types.ts";
 import { companies } from "./companies.ts";
 import { projects } from "./projects.ts";
@@ -39,6 +39,8 @@ export const proposals = pgTable(
     sellerUserId: text().references(() => users.id, { onDelete: "set null" }),
     snapshot: jsonb().$type<ProposalSnapshot>(),
     snapshotSha256: text(),
+    /** Per offered option id, the crew's list as it stood when sent (null for a draft, or for an option that could not be listed). */
+    crewPlans: jsonb().$type<Record<string, CrewPlan | null>>(),
     pdfKey: text(),
     pdfSha256: text(),
     /** The snapshot hash the current PDF was drawn from. */

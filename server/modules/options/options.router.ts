@@ -54,6 +54,10 @@ export function optionsRouter(service: OptionsService) {
       },
     },
     {
+      method: "post", path: "/options/:id/copy", access: "options:edit", idParams: ["id"],
+      handler: async (req, res) => { res.status(201).json({ option: await service.copy(actorOf(req), optionId(req)) }); },
+    },
+    {
       method: "get", path: "/options/:id/materials", access: "projects:read", idParams: ["id"],
       handler: async (req, res) => { res.json(await service.materials(actorOf(req), optionId(req))); },
     },

@@ -10,7 +10,8 @@ import type { ProjectRow, ProjectsRepository } from "../projects/projects.reposi
 import type { SpaceRow, SpacesRepository } from "../spaces/spaces.repository.ts";
 import type { CatalogRepository } from "../catalog/catalog.repository.ts";
 import { optionReferenceProblems } from "./option-references.ts";
-import type { CompanyTerms, OptionRow, OptionsRepository } from "./options.repository.ts";
+import { applyChangeOrders } from "../../../shared/change-orders/crew-list.ts";
+import type { AcceptedRevision, CompanyTerms, OptionRow, OptionsRepository, SignedPrice } from "./options.repository.ts";
 
 export const STALE_OPTION_MESSAGE = "Someone else saved this design option since you opened it.";
 
@@ -22,12 +23,52 @@ interface OptionContext {
   pricing: PricingSettings;
 }
 
+/**
+ * Why an option can no longer be edited: the homeowner signed it ("accepted"), or it was offered
+ * beside the one they signed ("offered"). Signed work changes only through a change order.
+ */
+export interface OptionLock {
+  reason: "accepted" | "offered";
+  proposalId: string;
+  revision: number;
+  acceptedAt: Date | null;
+  /** What to do instead, in words for the salesperson. */
+  message: string;
+  /** The price the homeowner saw in that revision; today's catalog may price the option differently. */
+  signedPrice: SignedPrice | null;
+}
+
+const isoDay = (d: Date | null) => (d ? d.toISOString().slice(0, 10) : "");
+
+const pick = (p: SignedPrice | null | undefined): SignedPrice | null =>
+  p ? { subtotalCents: p.subtotalCents, discountCents: p.discountCents, taxCents: p.taxCents, totalCents: p.totalCents } : null;
+
+export function lockOf(optionId: string, accepted: readonly AcceptedRevision[]): OptionLock | null {
+  const signed = accepted.find((a) => a.acceptedOptionId === optionId);
+  if (signed) {
+    return {
+      reason: "accepted", proposalId: signed.proposalId, revision: signed.revision, acceptedAt: signed.decidedAt, signedPrice: pick(signed.prices[optionId]),
+      message: `The homeowner signed this option (proposal rev. ${signed.revision}, ${isoDay(signed.decidedAt)}), so it is read-only. To change the signed work, draft a change order; to offer something different, copy it into a new draft option.`,
+    };
+  }
+  const offered = accepted.find((a) => a.optionIds.includes(optionId));
+  if (!offered) return null;
+  return {
+    reason: "offered", proposalId: offered.proposalId, revision: offered.revision, acceptedAt: offered.decidedAt, signedPrice: pick(offered.prices[optionId]),
+    message: `This option was offered in proposal rev. ${offered.revision}, which the homeowner accepted with another option, so it stays as offered. Copy it into a new draft option to change it.`,
+  };
+}
+
+const lockedError = (lock: OptionLock) => new AppError("accepted-locked", lock.message, 409, {}, { lock });
+
 export interface PresentedOption extends OptionRow {
   /** One entry per attic space of the project, as GET /projects/:id/analysis answers it, for the attic after this option's work. */
   analysis: { spaces: SpaceAnalysis[] };
   /** Integer cents throughout; null (with priceIssue) only when a line cannot be priced. */
   price: OptionPrice | null;
   priceIssue: string | null;
+  /** Set when signed work makes the option read-only. */
+  lock: OptionLock | null;
 }
 
 /**
@@ -80,8 +121,11 @@ export interface OptionMaterials {
   /** The spaces the option works in, to label the work lines' spaceId. */
   spaces: { id: string; name: string }[];
   materials: MaterialsList;
-  /** Set when an accepted proposal released this list to the crew. */
-  release: { releasedAt: Date; proposalId: string; revision: number } | null;
+  /**
+   * Set when an accepted proposal released this list to the crew: the list is then the one frozen
+   * when that proposal was sent, changed only by the signed change orders named here.
+   */
+  release: { releasedAt: Date; proposalId: string; revision: number; changeOrders: number[] } | null;
 }
 export interface SkippedProposal {
   spaceId: string;
@@ -136,34 +180,59 @@ export function createOptionsService(deps: { repo: OptionsRepository; projects: 
   return {
     async list(actor: Actor, projectId: string): Promise<PresentedOption[]> {
       const project = await requireProject(actor, projectId);
-      const [ctx, options] = await Promise.all([contextFor(actor, project), repo.listForProject(actor, projectId)]);
-      return options.map((option) => presentOption(option, ctx));
+      const [ctx, options, accepted] = await Promise.all([contextFor(actor, project), repo.listForProject(actor, projectId), repo.acceptedRevisions(actor, projectId)]);
+      return options.map((option) => ({ ...presentOption(option, ctx), lock: lockOf(option.id, accepted) }));
     },
 
     async get(actor: Actor, id: string): Promise<PresentedOption> {
       const option = await requireOption(actor, id);
-      const ctx = await contextFor(actor, await requireProject(actor, option.projectId));
-      return presentOption(option, ctx);
+      const [ctx, accepted] = await Promise.all([contextFor(actor, await requireProject(actor, option.projectId)), repo.acceptedRevisions(actor, option.projectId)]);
+      return { ...presentOption(option, ctx), lock: lockOf(option.id, accepted) };
     },
 
     async create(actor: Actor, projectId: string, input: DesignOptionInput): Promise<PresentedOption> {
       const ctx = await contextFor(actor, await requireProject(actor, projectId));
       checkReferences(ctx, input.spaces);
-      return presentOption(await repo.insert(actor, projectId, input), ctx);
+      return { ...presentOption(await repo.insert(actor, projectId, input), ctx), lock: null };
+    },
+
+    /** A new draft with the same content: how an offered or signed option is reworked without touching it. */
+    async copy(actor: Actor, id: string): Promise<PresentedOption> {
+      const source = await requireOption(actor, id);
+      const ctx = await contextFor(actor, await requireProject(actor, source.projectId));
+      const name = `${source.name.slice(0, 113)} (copy)`;
+      const input: DesignOptionInput = {
+        name, notes: source.notes, spaces: source.spaces, laborLines: source.laborLines, discount: source.discount,
+        isKept: true, origin: source.origin, rationale: source.rationale,
+      };
+      return { ...presentOption(await repo.insert(actor, source.projectId, input), ctx), lock: null };
     },
 
     async update(actor: Actor, id: string, version: number, patch: Partial<DesignOptionInput>): Promise<PresentedOption> {
       const current = await requireOption(actor, id);
-      const ctx = await contextFor(actor, await requireProject(actor, current.projectId));
+      const project = await requireProject(actor, current.projectId);
+      const lock = lockOf(id, await repo.acceptedRevisions(actor, project.id));
+      if (lock) throw lockedError(lock);
+      const ctx = await contextFor(actor, project);
       if (patch.spaces) checkReferences(ctx, patch.spaces, current);
       const updated = await repo.updateIfVersion(actor, id, version, patch);
-      if (updated) return presentOption(updated, ctx);
+      if (updated) return { ...presentOption(updated, ctx), lock: null };
+      // Accepted meanwhile, or saved by someone else.
+      const accepted = await repo.acceptedRevisions(actor, project.id);
+      const lockNow = lockOf(id, accepted);
+      if (lockNow) throw lockedError(lockNow);
       const latest = await requireOption(actor, id);
-      throw new AppError("stale-version", STALE_OPTION_MESSAGE, 409, {}, { current: presentOption(latest, ctx) });
+      throw new AppError("stale-version", STALE_OPTION_MESSAGE, 409, {}, { current: { ...presentOption(latest, ctx), lock: null } });
     },
 
     async remove(actor: Actor, id: string): Promise<void> {
-      if (!(await repo.remove(actor, id))) throw notFound("That design option");
+      const option = await requireOption(actor, id);
+      const lock = lockOf(id, await repo.acceptedRevisions(actor, option.projectId));
+      if (lock) throw lockedError(lock);
+      if (await repo.remove(actor, id)) return;
+      const lockNow = lockOf(id, await repo.acceptedRevisions(actor, option.projectId));
+      if (lockNow) throw lockedError(lockNow);
+      throw notFound("That design option");
     },
 
     /**
@@ -195,11 +264,16 @@ export function createOptionsService(deps: { repo: OptionsRepository; projects: 
     async materials(actor: Actor, id: string): Promise<OptionMaterials> {
       const option = await requireOption(actor, id);
       const project = await requireProject(actor, option.projectId);
-      const [spaces, catalog, release] = await Promise.all([deps.spaces.listForProject(actor, project.id), deps.catalog.all(actor), repo.release(actor, option.id)]);
+      const released = await repo.release(actor, option.id);
+      const changes = released ? await repo.signedChanges(actor, released.proposalId) : [];
+      const release = released ? { releasedAt: released.releasedAt, proposalId: released.proposalId, revision: released.revision, changeOrders: changes.map((c) => c.number) } : null;
+      const base = { option: { id: option.id, name: option.name, version: option.version, projectId: project.id }, project: { id: project.id, title: project.title, siteAddress: project.siteAddress } };
+      // Released: the list frozen when the signed proposal was sent plus signed change orders, never recomputed from today's catalog or survey.
+      if (released?.plan) return { ...base, spaces: released.plan.spaces, materials: applyChangeOrders(released.plan.materials, changes), release };
+      const [spaces, catalog] = await Promise.all([deps.spaces.listForProject(actor, project.id), deps.catalog.all(actor)]);
       const surveyed = Object.fromEntries(spaces.map((space) => [space.id, surveyOf(space)]));
       return {
-        option: { id: option.id, name: option.name, version: option.version, projectId: project.id },
-        project: { id: project.id, title: project.title, siteAddress: project.siteAddress },
+        ...base,
         spaces: spaces.filter((space) => option.spaces.some((s) => s.spaceId === space.id)).map((space) => ({ id: space.id, name: space.name })),
         materials: materialsList(option, catalog, surveyed),
         release,

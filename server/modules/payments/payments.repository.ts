@@ -1,4 +1,4 @@
-import { and, desc, eq, inArray, sql } from "drizzle-orm";
+import { and, desc, eq, inArray, lt, sql } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
 import { auditEvents, companies, paymentEvents, payments, proposalEvents, proposals, users, type PaymentStatus } from "../../db/schema/index.ts";
 import type { RequestMeta } from "../../lib/request-context.ts";
@@ -10,6 +10,12 @@ export interface Tenant {
 
 export type PaymentRow = typeof payments.$inferSelect;
 export type PaymentWrite = Partial<Omit<typeof payments.$inferInsert, "id" | "companyId" | "proposalId" | "createdAt">>;
+
+/** When a provider event still has something to change: the payment is in one of these states, or has less refunded than this. */
+export interface EventGuard {
+  statuses?: PaymentStatus[];
+  refundedBelowCents?: number;
+}
 
 /** What a processed event writes beside the payment: one proposal event and one audit event. */
 export interface EventRecord {
@@ -63,15 +69,25 @@ export function createPaymentsRepository(db: Database) {
     /**
      * Applies one provider event exactly once: the event id is claimed, the payment changed and the
      * proposal and audit events written in one transaction. A replayed event finds its id taken and
-     * changes nothing (returns null).
+     * changes nothing (returns null). `guard` guards the change itself: different events saying the
+     * same thing (a checkout completed, then its payment succeeded) arriving at once queue on the
+     * payment's row lock, and only the first finds it still to do; the others claim their id and
+     * answer `isApplied: false` with no event, audit line or e-mail.
      */
-    applyEventOnce: (payment: PaymentRow, eventId: string, eventType: string, patch: PaymentWrite, record: EventRecord | null) =>
-      db.transaction(async (tx) => {
+    applyEventOnce: (payment: PaymentRow, eventId: string, eventType: string, patch: PaymentWrite, record: EventRecord | null, guard: EventGuard = {}) =>
+      db.transaction(async (tx): Promise<{ row: PaymentRow; isApplied: boolean } | null> => {
         const claimed = await tx.insert(paymentEvents).values({ eventId, companyId: payment.companyId, paymentId: payment.id, type: eventType })
           .onConflictDoNothing().returning({ eventId: paymentEvents.eventId });
         if (claimed.length === 0) return null;
         const [row] = await tx.update(payments).set({ ...patch, updatedAt: new Date() })
-          .where(and(eq(payments.id, payment.id), eq(payments.companyId, payment.companyId))).returning();
+          .where(and(eq(payments.id, payment.id), eq(payments.companyId, payment.companyId),
+            guard.statuses ? inArray(payments.status, guard.statuses) : undefined,
+            guard.refundedBelowCents !== undefined ? lt(payments.refundedCents, guard.refundedBelowCents) : undefined))
+          .returning();
+        if (!row) {
+          const [current] = await tx.select().from(payments).where(and(eq(payments.id, payment.id), eq(payments.companyId, payment.companyId)));
+          return { row: current!, isApplied: false };
+        }
         if (record) {
           await tx.insert(proposalEvents).values({
             companyId: payment.companyId, proposalId: payment.proposalId, event: record.event, ip: record.meta.ip, userAgent: record.meta.userAgent, detail: record.detail,
@@ -80,7 +96,7 @@ export function createPaymentsRepository(db: Database) {
             companyId: payment.companyId, event: record.event, detail: { proposalId: payment.proposalId, ...record.detail }, ip: record.meta.ip, userAgent: record.meta.userAgent,
           });
         }
-        return row!;
+        return { row, isApplied: true };
       }),
 
     /** A staff action on a payment (a refund request) with its proposal and audit events, in one transaction. */

@@ -7,7 +7,7 @@ import type { ProposalRow } from "../proposals/proposals.repository.ts";
 import type { ProposalsService } from "../proposals/proposals.service.ts";
 import { depositDue } from "./deposit-amount.ts";
 import type { CheckoutSessionFacts, PaymentProvider, ProviderEvent } from "./payment-provider.ts";
-import type { PaymentRow, PaymentsRepository, PaymentWrite } from "./payments.repository.ts";
+import type { PaymentRow, PaymentsRepository } from "./payments.repository.ts";
 import type { DepositView, Payment } from "../../../shared/schemas/deposits.ts";
 
 /** Deposits are charged in US dollars: the product serves US contractors. */
@@ -103,17 +103,19 @@ export function createPaymentsService(deps: {
     const now = deps.now();
     const paidCents = session.amountTotalCents ?? payment.amountCents;
     const currency = session.currency ?? payment.currency;
-    // Already settled by another event of the same payment (e.g. completed, then async succeeded): only the id is claimed.
-    const isSettled = payment.status === "paid" || payment.status === "refunded";
     const detail = {
       paymentId: payment.id, amountCents: paidCents, currency, checkoutSessionId: session.id, paymentIntentId: session.paymentIntentId,
       providerEventId: event.id, paidAt: now.toISOString(),
       ...(paidCents !== payment.amountCents || currency !== payment.currency ? { expectedCents: payment.amountCents, expectedCurrency: payment.currency, isMismatch: true } : {}),
     };
-    const patch: PaymentWrite = isSettled ? {} : { status: "paid", paidCents, currency, paymentIntentId: session.paymentIntentId, paidAt: now, failedAt: null, failureReason: null };
-    const updated = await repo.applyEventOnce(payment, event.id, event.type, patch, isSettled ? null : { event: "deposit-paid", detail, meta });
-    if (!updated) return { isApplied: false, isDuplicate: true, note: "This event was already processed." };
-    if (isSettled) return { isApplied: false, note: "The payment was already recorded." };
+    // Only a payment not yet settled becomes paid, decided under the row's lock: of several events
+    // saying "paid" (completed, then async succeeded, or retries under new ids) exactly one applies.
+    const outcome = await repo.applyEventOnce(payment, event.id, event.type,
+      { status: "paid", paidCents, currency, paymentIntentId: session.paymentIntentId, paidAt: now, failedAt: null, failureReason: null },
+      { event: "deposit-paid", detail, meta }, { statuses: ["pending", "failed"] });
+    if (!outcome) return { isApplied: false, isDuplicate: true, note: "This event was already processed." };
+    if (!outcome.isApplied) return { isApplied: false, note: "The payment was already recorded." };
+    const updated = outcome.row;
     if (detail.isMismatch) deps.logger.warn({ paymentId: payment.id, paidCents, expectedCents: payment.amountCents }, "the provider collected a different amount than asked");
     const option = (await repo.proposal(payment, payment.proposalId))?.snapshot?.options.find((o) => o.id === payment.optionId);
     await notifySeller(updated, `Deposit received: ${formatCents(paidCents)}`, [
@@ -132,9 +134,11 @@ export function createPaymentsService(deps: {
       return { isApplied: false, note: "Nothing to change." };
     }
     const isFailed = event.type === "checkout.session.async_payment_failed";
-    const updated = await repo.applyEventOnce(payment, event.id, event.type, { status: "failed", failedAt: deps.now(), failureReason: isFailed ? "the payment failed" : "the checkout expired" },
-      isFailed ? { event: "deposit-failed", detail: { paymentId: payment.id, checkoutSessionId: event.session.id, providerEventId: event.id }, meta } : null);
-    return updated ? { isApplied: true, note: "Checkout closed." } : { isApplied: false, isDuplicate: true, note: "This event was already processed." };
+    const outcome = await repo.applyEventOnce(payment, event.id, event.type, { status: "failed", failedAt: deps.now(), failureReason: isFailed ? "the payment failed" : "the checkout expired" },
+      isFailed ? { event: "deposit-failed", detail: { paymentId: payment.id, checkoutSessionId: event.session.id, providerEventId: event.id }, meta } : null,
+      { statuses: ["pending"] });
+    if (!outcome) return { isApplied: false, isDuplicate: true, note: "This event was already processed." };
+    return outcome.isApplied ? { isApplied: true, note: "Checkout closed." } : { isApplied: false, note: "Nothing to change." };
   }
 
   async function onRefunded(event: Extract<ProviderEvent, { type: "charge.refunded" }>, meta: RequestMeta) {
@@ -143,14 +147,17 @@ export function createPaymentsService(deps: {
     if (!payment) return { isApplied: false, note: "Not a payment of this app." };
     const now = deps.now();
     const isFull = charge.isFullyRefunded;
-    const updated = await repo.applyEventOnce(payment, event.id, event.type, {
+    const outcome = await repo.applyEventOnce(payment, event.id, event.type, {
       refundedCents: charge.amountRefundedCents, ...(isFull ? { status: "refunded", refundedAt: now } : {}),
     }, {
       event: "deposit-refunded",
       detail: { paymentId: payment.id, refundedCents: charge.amountRefundedCents, currency: charge.currency, isFullRefund: isFull, paymentIntentId: charge.paymentIntentId, refundId: payment.refundId, providerEventId: event.id, refundedAt: now.toISOString() },
       meta,
-    });
-    if (!updated) return { isApplied: false, isDuplicate: true, note: "This event was already processed." };
+    // Refunds only grow: an event reporting no more than is already recorded changes nothing.
+    }, { refundedBelowCents: charge.amountRefundedCents });
+    if (!outcome) return { isApplied: false, isDuplicate: true, note: "This event was already processed." };
+    if (!outcome.isApplied) return { isApplied: false, note: "This refund was already recorded." };
+    const updated = outcome.row;
     await notifySeller(updated, `Deposit refunded: ${formatCents(charge.amountRefundedCents)}`, [
       `The deposit was refunded${isFull ? " in full" : " in part"}: ${formatCents(charge.amountRefundedCents)} of ${formatCents(charge.amountCents)}.`,
       `Confirmed: ${utc(now)}`,

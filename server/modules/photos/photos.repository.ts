@@ -1,6 +1,6 @@
-import { asc, eq } from "drizzle-orm";
+import { asc, eq, sql } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
-import { photos } from "../../db/schema/index.ts";
+import { photos, proposals } from "../../db/schema/index.ts";
 import { scoped } from "../../lib/tenant.ts";
 import type { Actor } from "../../lib/request-context.ts";
 
@@ -26,8 +26,12 @@ export function createPhotosRepository(db: Database) {
       const [row] = await db.update(photos).set({ caption }).where(scoped(photos, actor, eq(photos.id, id))).returning(photoColumns);
       return row ?? null;
     },
+    /** Deletes a photo no accepted proposal shows (the signed PDF and the homeowner's page keep those). */
     async remove(actor: Actor, id: string) {
-      const [row] = await db.delete(photos).where(scoped(photos, actor, eq(photos.id, id))).returning(photoColumns);
+      const [row] = await db.delete(photos)
+        .where(scoped(photos, actor, eq(photos.id, id),
+          sql`not exists (select 1 from ${proposals} where ${proposals.companyId} = ${photos.companyId} and ${proposals.status} = 'accepted' and ${proposals.photoIds} @> jsonb_build_array(${photos.id}::text))`))
+        .returning(photoColumns);
       return row ?? null;
     },
   };

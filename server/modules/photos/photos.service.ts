@@ -84,7 +84,10 @@ export function createPhotosService(deps: { repo: PhotosRepository; storage: Sto
 
     async remove(actor: Actor, id: string) {
       const row = await repo.remove(actor, id);
-      if (!row) throw notFound("That photo");
+      if (!row) {
+        if (await repo.find(actor, id)) throw new AppError("accepted-locked", "This photo is part of a proposal the homeowner accepted, so it is kept with the signed work. Draft a change order to add new photos.", 409);
+        throw notFound("That photo");
+      }
       // The row is gone, so the photo is gone for every user; a file left by a storage hiccup is only an orphan.
       await Promise.allSettled([storage.delete(row.storageKey), storage.delete(row.thumbKey)]);
     },

@@ -1,7 +1,8 @@
+import { randomUUID } from "node:crypto";
 import type { EstimateConditions } from "../../../shared/airflow-model/schema.ts";
 import { and, asc, desc, eq, inArray, isNotNull, isNull, lt, lte, or, sql } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
-import { companies, customers, designOptions, photos, projects, proposalEvents, proposalMails, proposals, userSignatures, users } from "../../db/schema/index.ts";
+import { changeOrders, companies, customers, designOptions, photos, projects, proposalEvents, proposalMails, proposals, userSignatures, users } from "../../db/schema/index.ts";
 import { scoped } from "../../lib/tenant.ts";
 import type { ProposalStatus } from "../../../shared/proposals/types.ts";
 import type { OutgoingEmail } from "../../lib/mailer.ts";
@@ -122,17 +123,25 @@ export function createProposalsRepository(db: Database) {
 
     /**
      * The homeowner's acceptance, in one transaction: the proposal moves to accepted (only from sent or
-     * viewed, at the version read) and the accepted option's materials list is released to the crew.
+     * viewed, at the version read), the "accepted" event with the signing evidence is written, the
+     * accepted option's materials list is released to the crew and the project becomes sold. The
+     * signed PDF and its e-mails follow from `signedRenderStatus: "queued"` in the same commit (the
+     * recovery sweep queues them should the process die before its job is sent). A crash leaves all
+     * of it or none.
      */
-    acceptAndRelease: (tenant: Tenant, id: string, version: number, optionId: string, patch: ProposalWrite, now: Date) =>
+    acceptAndRelease: (tenant: Tenant, id: string, version: number, optionId: string, patch: ProposalWrite, event: NewProposalEvent, projectId: string, now: Date) =>
       db.transaction(async (tx) => {
         const [row] = await tx.update(proposals)
           .set({ ...patch, version: sql`${proposals.version} + 1`, updatedAt: now })
-          .where(scoped(proposals, tenant, eq(proposals.id, id), eq(proposals.version, version), inArray(proposals.status, ["sent", "viewed"])))
+          .where(scoped(proposals, tenant, eq(proposals.id, id), eq(proposals.version, version), inArray(proposals.status, ["sent", "viewed"]), isNull(proposals.supersededBy)))
           .returning();
         if (!row) return null;
+        await tx.insert(proposalEvents).values({ ...event, companyId: tenant.companyId, proposalId: id });
+        // Released once: a second proposal offering the same option leaves the first release (and its frozen list) in place.
         await tx.update(designOptions).set({ releasedAt: now, releasedByProposalId: id })
-          .where(scoped(designOptions, tenant, eq(designOptions.id, optionId)));
+          .where(scoped(designOptions, tenant, eq(designOptions.id, optionId), isNull(designOptions.releasedAt)));
+        await tx.update(projects).set({ status: "sold", version: sql`${projects.version} + 1`, updatedAt: now })
+          .where(scoped(projects, tenant, eq(projects.id, projectId)));
         return row;
       }),
 
@@ -143,19 +152,25 @@ export function createProposalsRepository(db: Database) {
       return row ?? null;
     },
 
-    /** A new draft revision made from a sent one; the old one then points at it. One transaction. */
-    reviseFrom: (tenant: Tenant, old: ProposalRow, values: ProposalWrite) =>
+    /**
+     * A new draft revision made from a sent one, and the old one pointing at it, in one transaction;
+     * null (nothing written) when the old one was accepted, revised or changed since it was read.
+     * The old row is claimed first, so a homeowner accepting at the same moment waits on its lock
+     * and then finds it superseded, or the revise finds it accepted.
+     */
+    reviseFrom: (tenant: Tenant, old: ProposalRow, values: ProposalWrite): Promise<ProposalRow | null> =>
       db.transaction(async (tx) => {
+        const nextId = randomUUID();
+        const [marked] = await tx.update(proposals).set({ supersededBy: nextId, updatedAt: new Date(), version: sql`${proposals.version} + 1` })
+          .where(scoped(proposals, tenant, eq(proposals.id, old.id), eq(proposals.version, old.version), isNull(proposals.supersededBy), inArray(proposals.status, ["sent", "viewed", "declined", "expired"])))
+          .returning({ id: proposals.id });
+        if (!marked) return null;
         const [next] = await tx.insert(proposals).values({
-          companyId: tenant.companyId, projectId: old.projectId, seriesId: old.seriesId, revision: old.revision + 1,
+          id: nextId, companyId: tenant.companyId, projectId: old.projectId, seriesId: old.seriesId, revision: old.revision + 1,
           validUntil: old.validUntil, coverNote: old.coverNote, terms: old.terms, depositRule: old.depositRule,
           optionIds: old.optionIds, photoIds: old.photoIds, findingCodes: old.findingCodes, scopes: old.scopes,
           createdBy: old.createdBy, ...values, status: "draft",
         }).returning();
-        const [marked] = await tx.update(proposals).set({ supersededBy: next!.id, updatedAt: new Date(), version: sql`${proposals.version} + 1` })
-          .where(scoped(proposals, tenant, eq(proposals.id, old.id), eq(proposals.version, old.version), isNull(proposals.supersededBy), sql`${proposals.status} <> 'accepted'`))
-          .returning({ id: proposals.id });
-        if (!marked) tx.rollback();
         return next!;
       }),
 
@@ -165,6 +180,15 @@ export function createProposalsRepository(db: Database) {
 
     events: (tenant: Tenant, proposalId: string) =>
       db.select().from(proposalEvents).where(scoped(proposalEvents, tenant, eq(proposalEvents.proposalId, proposalId))).orderBy(asc(proposalEvents.id)),
+
+    /** Is this hash one of a sent change order's PDF? Its accepted revision's number comes along. */
+    async findChangeOrderByPdfHash(sha256: string) {
+      const [row] = await db
+        .select({ number: changeOrders.number, status: changeOrders.status, sentAt: changeOrders.sentAt, decidedAt: changeOrders.decidedAt, revision: proposals.revision })
+        .from(changeOrders).innerJoin(proposals, eq(proposals.id, changeOrders.proposalId))
+        .where(eq(changeOrders.pdfSha256, sha256)).limit(1);
+      return row ?? null;
+    },
 
     /** Is this hash one of a recorded PDF (as sent, or signed)? */
     async findByPdfHash(sha256: string) {
@@ -246,11 +270,6 @@ export function createProposalsRepository(db: Database) {
       db.select({ id: proposals.id, companyId: proposals.companyId, tokenId: proposals.tokenId })
         .from(proposals)
         .where(and(inArray(proposals.status, ["sent", "viewed"]), isNull(proposals.supersededBy), lte(proposals.tokenExpiresAt, now))),
-
-    async setProjectStatus(tenant: Tenant, projectId: string, status: "proposed" | "sold", onlyFrom?: string[]) {
-      await db.update(projects).set({ status, version: sql`${projects.version} + 1`, updatedAt: new Date() })
-        .where(scoped(projects, tenant, eq(projects.id, projectId), onlyFrom ? sql`${projects.status}::text in (${sql.join(onlyFrom.map((s) => sql`${s}`), sql`, `)})` : undefined));
-    },
   };
 }
 export type ProposalsRepository = ReturnType<typeof createProposalsRepository>;

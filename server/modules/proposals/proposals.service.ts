@@ -7,12 +7,13 @@ import { hashToken, newToken } from "../../lib/tokens.ts";
 import { linkExpiresAt, linkState, validUntilProblem } from "../../../shared/proposals/lifecycle.ts";
 import { scopeOfWork } from "../../../shared/proposals/scope-of-work.ts";
 import type { AcceptInput, ProposalPatch } from "../../../shared/proposals/schemas.ts";
-import type { ProposalSnapshot, ScopeText, SignatureImage } from "../../../shared/proposals/types.ts";
+import type { CrewPlan, ProposalSnapshot, ScopeText, SignatureImage } from "../../../shared/proposals/types.ts";
+import { DesignError, materialsList } from "../../../shared/design/index.ts";
 import type { CatalogItem } from "../../../shared/schemas/catalog.ts";
 import type { ProjectsRepository } from "../projects/projects.repository.ts";
 import type { SpacesRepository } from "../spaces/spaces.repository.ts";
 import type { OptionRow, OptionsRepository } from "../options/options.repository.ts";
-import { pricingSettings } from "../options/options.service.ts";
+import { pricingSettings, surveyOf } from "../options/options.service.ts";
 import type { CatalogRepository } from "../catalog/catalog.repository.ts";
 import { buildSnapshot, sha256Hex, snapshotSha256 } from "./proposal-snapshot.ts";
 import type { ProposalJobs } from "./proposal-jobs.ts";
@@ -22,6 +23,9 @@ import { THUMB_CONTENT_TYPE } from "../photos/photos.service.ts";
 
 const DEFAULT_VALID_DAYS = 30;
 const EDITABLE = ["draft"] as const;
+
+const SIGNED_LOCKED = "The homeowner accepted this revision, so it is read-only. To change the signed work, draft a change order.";
+const signedLocked = () => conflict(SIGNED_LOCKED, "accepted-locked");
 
 const invalid = (field: string, message: string) => new AppError("invalid-input", `Please check ${field}: ${message}`, 400, { [field]: message });
 
@@ -132,6 +136,26 @@ export function createProposalsService(deps: {
     });
   }
 
+  /** The crew's list of each offered option as it stands now; frozen into the proposal when it is sent. */
+  async function crewPlansNow(actor: Actor, p: ProposalRow): Promise<Record<string, CrewPlan | null>> {
+    const [spaces, options, catalog] = await Promise.all([deps.spaces.listForProject(actor, p.projectId), deps.options.listForProject(actor, p.projectId), deps.catalog.all(actor)]);
+    const surveyed = Object.fromEntries(spaces.map((space) => [space.id, surveyOf(space)]));
+    return Object.fromEntries(p.optionIds.map((id) => {
+      const option = options.find((o) => o.id === id);
+      if (!option) return [id, null];
+      try {
+        return [id, {
+          optionId: id, optionName: option.name,
+          spaces: spaces.filter((space) => option.spaces.some((s) => s.spaceId === space.id)).map((space) => ({ id: space.id, name: space.name })),
+          materials: materialsList(option, catalog, surveyed),
+        }];
+      } catch (err) {
+        if (err instanceof DesignError) return [id, null];
+        throw err;
+      }
+    }));
+  }
+
   async function checkPhotos(actor: Actor, projectId: string, ids: string[]) {
     const found = await repo.photosFor(actor, projectId, ids);
     ids.forEach((id, i) => {
@@ -176,7 +200,7 @@ export function createProposalsService(deps: {
     /** A draft changes in place; a sent one makes a new draft revision and is marked superseded. */
     async update(actor: Actor, id: string, input: ProposalPatch, meta: RequestMeta) {
       const p = await requireProposal(actor, id);
-      if (p.status === "accepted") throw conflict("This proposal was accepted and can no longer be changed.", "accepted-locked");
+      if (p.status === "accepted") throw signedLocked();
       if (p.supersededBy) throw new AppError("superseded", "A newer revision of this proposal exists; edit that one.", 409, {}, { supersededBy: p.supersededBy });
       const { version, ...patch } = input;
       const dateProblem = patch.validUntil === undefined ? null : validUntilProblem(patch.validUntil, today());
@@ -202,10 +226,12 @@ export function createProposalsService(deps: {
         throw new AppError("stale-version", "Someone else saved this proposal since you opened it.", 409, {}, { current: presentProposal(current) });
       }
       if (p.version !== version) throw new AppError("stale-version", "Someone else saved this proposal since you opened it.", 409, {}, { current: presentProposal(p) });
-      const next = await repo.reviseFrom(actor, p, values as never).catch((err: unknown) => {
-        if ((err as { name?: string }).name === "TransactionRollbackError") throw conflict("This proposal changed meanwhile (accepted, or revised by someone else). Reload it.", "stale-version");
-        throw err;
-      });
+      const next = await repo.reviseFrom(actor, p, values as never);
+      if (!next) {
+        const now = await requireProposal(actor, id);
+        if (now.status === "accepted") throw signedLocked();
+        throw new AppError("stale-version", "This proposal changed meanwhile (revised by someone else, or answered by the homeowner). Reload it.", 409, {}, { current: presentProposal(now) });
+      }
       await repo.addEvent(actor, p.id, { event: "superseded", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId, detail: { supersededBy: next.id, revision: next.revision } });
       await repo.addEvent(actor, next.id, { event: "created", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, detail: { revisionOf: p.id } });
       return { proposal: presentProposal(next), revisedFrom: p.id };
@@ -215,6 +241,7 @@ export function createProposalsService(deps: {
     async render(actor: Actor, id: string) {
       const p = await requireProposal(actor, id);
       if (p.status !== "draft") {
+        if (p.status === "accepted" && p.renderStatus !== "failed") throw signedLocked();
         if (p.renderStatus !== "failed") throw conflict("A sent proposal's PDF is made once, when it is sent.", "already-rendered");
         const updated = await repo.update(actor, id, { renderStatus: "queued", renderError: null, renderUpdatedAt: deps.now() });
         await deps.jobs.enqueueRender(actor, id, p.snapshotSha256!);
@@ -248,6 +275,7 @@ export function createProposalsService(deps: {
     async send(actor: Actor, id: string, meta: RequestMeta) {
       const p = await requireProposal(actor, id);
       if (p.supersededBy) throw new AppError("superseded", "A newer revision of this proposal exists; send that one.", 409, {}, { supersededBy: p.supersededBy });
+      if (p.status === "accepted") throw signedLocked();
       if (p.status !== "draft") throw conflict("This proposal was already sent. Change it to make a new revision, then send that.", "already-sent");
       if (p.validUntil < today()) throw invalid("validUntil", "The validity date has passed; choose a later one before sending.");
       // A draft saved before the limit existed may still hold a far date; links and reminders are derived from it.
@@ -263,13 +291,14 @@ export function createProposalsService(deps: {
 
       const snapshot = await snapshotNow(actor, p, { userId: seller.id, name: seller.name, email: seller.email, signature: { typed: seller.signatureTyped, pngDataUrl: seller.signatureDataUrl } });
       const sha = snapshotSha256(snapshot);
+      const crewPlans = await crewPlansNow(actor, p);
       const { token, tokenHash } = newToken();
       const tokenId = randomUUID();
       const now = deps.now();
       const link = `${deps.appOrigin()}/p/${token}`;
       const dedupeKey = `send:${id}`;
       const sent = await repo.markSent(actor, id, p.version, {
-        status: "sent", snapshot, snapshotSha256: sha, sellerUserId: seller.id, sentAt: now,
+        status: "sent", snapshot, snapshotSha256: sha, crewPlans, sellerUserId: seller.id, sentAt: now,
         tokenHash, tokenId, tokenExpiresAt: linkExpiresAt(p.validUntil), tokenRevokedAt: null,
         renderStatus: "queued", renderError: null, renderAttempts: 0, renderUpdatedAt: now,
       }, { event: "sent", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, tokenId, snapshotSha256: sha, detail: { to: customer.email, revision: p.revision } }, {
@@ -365,15 +394,18 @@ export function createProposalsService(deps: {
         signature: { typed: input.signature.typed ?? null, pngStorageKey: pngKey, pngSha256 },
         consentTextVersion: input.consent.consentTextVersion, acceptedAt: now.toISOString(), ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId,
       };
-      const updated = await repo.acceptAndRelease(p, p.id, p.version, input.optionId, { status: "accepted", acceptance, decidedAt: now, signedRenderStatus: "queued", signedRenderUpdatedAt: now }, now);
-      if (!updated) throw conflict("This proposal changed meanwhile; please reload the page.", "stale-version");
-      await repo.addEvent(p, p.id, {
+      const updated = await repo.acceptAndRelease(p, p.id, p.version, input.optionId, { status: "accepted", acceptance, decidedAt: now, signedRenderStatus: "queued", signedRenderUpdatedAt: now }, {
         event: "accepted", at: now, ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId,
         snapshotSha256: p.snapshotSha256, pdfSha256: p.pdfSha256, consentTextVersion: input.consent.consentTextVersion,
         detail: { optionId: input.optionId, signerName: input.signerName, signature: png ? "drawn" : "typed", signaturePngSha256: pngSha256, esignConsent: true },
-      });
-      await repo.setProjectStatus(p, p.projectId, "sold");
-      await deps.jobs.enqueueSignedRender(p, p.id);
+      }, p.projectId, now);
+      if (!updated) {
+        const current = await repo.find(p, p.id);
+        if (current?.supersededBy) throw new AppError("superseded", "This proposal has just been replaced by a newer revision. Look for the newer e-mail, or contact the company that sent it.", 410, {}, { supersededByRevision: true });
+        throw conflict("This proposal changed meanwhile; please reload the page.", "stale-version");
+      }
+      // Committed with the acceptance; this only nudges the worker (the recovery sweep would queue it too).
+      await deps.jobs.enqueueSignedRender(p, p.id).catch(() => {});
       return publicView(updated, snapshot);
     },
 
@@ -391,7 +423,14 @@ export function createProposalsService(deps: {
     /** Does this SHA-256 belong to a PDF we recorded (as sent, or signed)? Says nothing else about it. */
     async verify(sha256: string) {
       const hit = await repo.findByPdfHash(sha256);
-      if (!hit) return { sha256, matches: false as const };
+      if (!hit) {
+        const change = await repo.findChangeOrderByPdfHash(sha256);
+        if (!change) return { sha256, matches: false as const };
+        return {
+          sha256, matches: true as const,
+          document: { kind: "change-order" as const, changeOrderNumber: change.number, revision: change.revision, status: change.status, sentAt: change.sentAt, decidedAt: change.decidedAt },
+        };
+      }
       return {
         sha256, matches: true as const,
         document: { kind: hit.signedPdfSha256 === sha256 ? "signed" : "sent", revision: hit.revision, status: hit.status, sentAt: hit.sentAt, decidedAt: hit.decidedAt },

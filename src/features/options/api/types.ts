@@ -24,6 +24,19 @@ export interface OptionRecord extends DesignOptionInput {
   analysis: { spaces: SpaceAnalysisRecord[] };
   price: OptionPrice | null;
   priceIssue: string | null;
+  /** Set when the homeowner signed this option, or signed another one offered beside it: the option is then read-only. */
+  lock: OptionLock | null;
+}
+
+export interface OptionLock {
+  reason: "accepted" | "offered";
+  proposalId: string;
+  revision: number;
+  acceptedAt: string | null;
+  /** What to do instead (draft a change order, or copy into a new draft). */
+  message: string;
+  /** The price in the signed revision; the live price follows today's catalog. */
+  signedPrice: { subtotalCents: number; discountCents: number; taxCents: number; totalCents: number } | null;
 }
 
 /** What the generator proposes (not saved): POST `option` back to keep it. */
@@ -55,7 +68,7 @@ export interface OptionMaterials {
   spaces: { id: string; name: string }[];
   materials: MaterialsList;
   /** Set once an accepted proposal released this list to the crew (ISO time). */
-  release: { releasedAt: string; proposalId: string; revision: number } | null;
+  release: { releasedAt: string; proposalId: string; revision: number; changeOrders: number[] } | null;
 }
 
 /** The project fields the options workspace needs, from GET /api/projects/:id. */

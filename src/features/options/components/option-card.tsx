@@ -5,7 +5,9 @@ import type { UnitSystem } from "@shared/units/format";
 import { Badge } from "@/components/ui/badge";
 import { Button, buttonStyles } from "@/components/ui/button";
 import { Card, CardBody, CardFooter, CardHeader } from "@/components/ui/card";
+import { LockIcon } from "@/components/ui/icons";
 import { paths } from "@/config/paths";
+import { lockLabel } from "./signed-lock-notice";
 import type { ProposalRecord, OptionRecord, SpaceAnalysisRecord } from "../api/types";
 import { ComplianceBadge, FindingCounts, VentAreaFigures } from "./analysis-summary";
 
@@ -49,6 +51,11 @@ export function OptionCard({ option, unitSystem, canEdit, onDelete }: OptionCard
         <div className="flex flex-wrap items-center gap-2">
           <Badge tone={option.isKept ? "brand" : "outline"}>{option.isKept ? "Offered" : "Draft, not offered"}</Badge>
           {option.origin === "generated" ? <Badge tone="neutral">Suggested</Badge> : null}
+          {option.lock ? (
+            <Badge tone="neutral" data-option-lock={option.lock.reason}>
+              <LockIcon className="size-3.5" /> {lockLabel(option.lock)}
+            </Badge>
+          ) : null}
         </div>
         <h3 className="text-lg font-semibold text-ink-900">
           <Link to={editHref} className="hover:underline">
@@ -58,21 +65,29 @@ export function OptionCard({ option, unitSystem, canEdit, onDelete }: OptionCard
       </CardHeader>
       <CardBody className="flex-1 space-y-4">
         <SpaceLines spaces={option.analysis.spaces} unitSystem={unitSystem} isDetailed={false} />
-        <p className="text-base">
-          <span className="text-ink-700">Total </span>
-          <span className="text-xl font-semibold tabular-nums text-ink-900">{option.price ? formatCents(option.price.totalCents) : "—"}</span>
-          {option.price ? <span className="text-sm text-ink-600"> incl. {formatCents(option.price.taxCents)} tax</span> : null}
-        </p>
+        {option.lock?.signedPrice ? (
+          <p className="text-base">
+            <span className="text-ink-700">Total as signed </span>
+            <span className="text-xl font-semibold tabular-nums text-ink-900">{formatCents(option.lock.signedPrice.totalCents)}</span>
+            <span className="text-sm text-ink-600"> incl. {formatCents(option.lock.signedPrice.taxCents)} tax</span>
+          </p>
+        ) : (
+          <p className="text-base">
+            <span className="text-ink-700">Total </span>
+            <span className="text-xl font-semibold tabular-nums text-ink-900">{option.price ? formatCents(option.price.totalCents) : "—"}</span>
+            {option.price ? <span className="text-sm text-ink-600"> incl. {formatCents(option.price.taxCents)} tax</span> : null}
+          </p>
+        )}
       </CardBody>
       <CardFooter className="sm:justify-start">
         <Link to={editHref} className={buttonStyles({ variant: "secondary", className: "w-full sm:w-auto" })}>
-          {canEdit ? "Edit" : "Open"}
+          {canEdit && !option.lock ? "Edit" : "Open"}
           <span className="sr-only"> {option.name}</span>
         </Link>
         <Link to={paths.app.projectOptionMaterials.getHref(option.projectId, option.id)} className={buttonStyles({ variant: "ghost", className: "w-full sm:w-auto" })}>
           Materials list<span className="sr-only"> for {option.name}</span>
         </Link>
-        {canEdit ? (
+        {canEdit && !option.lock ? (
           <Button variant="ghost" className="w-full text-critical-700 hover:bg-critical-50 sm:ml-auto sm:w-auto" onClick={() => onDelete(option)}>
             Delete<span className="sr-only"> {option.name}</span>
           </Button>

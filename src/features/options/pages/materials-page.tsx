@@ -33,7 +33,8 @@ function ReleaseBanner({ release }: { release: OptionMaterials["release"] }) {
       <p data-release="released" className="flex items-start gap-2 rounded-md border-2 border-ok-600 bg-ok-50 px-3 py-2 text-base font-semibold text-ok-900">
         <OkIcon className="mt-0.5 size-5 shrink-0 text-ok-600" />
         <span>
-          Released to the crew on {formatDate(release.releasedAt)} (accepted proposal rev. {release.revision})
+          Released to the crew on {formatDate(release.releasedAt)} (accepted proposal rev. {release.revision}
+          {release.changeOrders.length ? `, with signed change order${release.changeOrders.length > 1 ? "s" : ""} ${release.changeOrders.join(", ")}` : ""})
         </span>
       </p>
     );
@@ -70,7 +71,10 @@ export function MaterialsPage({ projectId, optionId }: { projectId: string; opti
         <p className="text-base">
           {project.title} · {project.siteAddress}
         </p>
-        <p className="text-sm text-ink-700">Option version {option.version}. Quantities are rounded up to what is bought.</p>
+        <p className="text-sm text-ink-700">
+          {release ? "The list as signed: later edits to the option, the catalog or the survey do not change it. " : `Option version ${option.version}. `}
+          Quantities are rounded up to what is bought.
+        </p>
       </header>
       <ReleaseBanner release={release} />
 

@@ -26,6 +26,7 @@ import { PriceSummary } from "../components/price-summary";
 import { SaveStatus } from "@/components/ui/save-status";
 import { SpacePlanEditor } from "../components/space-plan-editor";
 import { TermsEditor } from "../components/terms-editor";
+import { SignedLockNotice } from "../components/signed-lock-notice";
 import { fingerprint, useAutosave } from "@/lib/use-autosave";
 import { buildOption, draftFromOption, type OptionDraft, type OptionPayload } from "../lib/draft";
 import { analyzeOptionLive, priceOptionLive, pricingFrom } from "../lib/live";
@@ -78,7 +79,8 @@ function Editor({ projectId, optionId, unitSystem, canEdit, detail, option, cata
   const [draft, setDraft] = useState<OptionDraft>(() => draftFromOption(option, spaces));
   const [saved, setSaved] = useState<OptionRecord>(option);
   const [conflict, setConflict] = useState<{ isOpen: boolean; theirs: OptionRecord | null }>({ isOpen: false, theirs: null });
-  const isReadOnly = !canEdit;
+  // Signed work is read-only for everyone; the notice says what to do instead.
+  const isReadOnly = !canEdit || option.lock !== null;
 
   const built = useMemo(() => buildOption(draft, catalog), [draft, catalog]);
   const live = useMemo(() => analyzeOptionLive(project, spaces, built.option, catalog), [project, spaces, built.option, catalog]);
@@ -141,7 +143,9 @@ function Editor({ projectId, optionId, unitSystem, canEdit, detail, option, cata
           </>
         }
       />
-      {canEdit ? (
+      {option.lock ? (
+        <SignedLockNotice lock={option.lock} optionId={optionId} projectId={projectId} canEdit={canEdit} />
+      ) : canEdit ? (
         <div className="-mt-3 mb-4">
           <SaveStatus state={autosave.state} thing="option" onRetry={autosave.saveNow} onResolve={openConflict} />
         </div>

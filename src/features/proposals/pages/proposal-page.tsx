@@ -32,6 +32,8 @@ export interface ProposalPageProps {
   userName: string;
   /** The deposit's state for staff, composed in by the route (the deposits feature); shown once accepted. */
   depositStatus?: React.ReactNode;
+  /** Change orders and the job's current scope and total, composed in by the route (the change-orders feature); shown once accepted. */
+  changeOrders?: React.ReactNode;
 }
 
 function Times({ p }: { p: ProposalRecord }) {
@@ -59,7 +61,7 @@ function Times({ p }: { p: ProposalRecord }) {
 }
 
 /** One proposal revision: the builder while it is a draft, the frozen record with its audit trail once sent. */
-export function ProposalPage({ projectId, proposalId, canSend, userName, depositStatus }: ProposalPageProps) {
+export function ProposalPage({ projectId, proposalId, canSend, userName, depositStatus, changeOrders }: ProposalPageProps) {
   const queryClient = useQueryClient();
   const navigate = useNavigate();
   const detail = useQuery({
@@ -200,6 +202,14 @@ export function ProposalPage({ projectId, proposalId, canSend, userName, deposit
           </CardBody>
         </Card>
       )}
+      {proposal.status === "accepted" && changeOrders ? (
+        <Card aria-labelledby="pp-change-orders">
+          <CardHeader>
+            <CardTitle id="pp-change-orders">Change orders</CardTitle>
+          </CardHeader>
+          <CardBody>{changeOrders}</CardBody>
+        </Card>
+      ) : null}
       {proposal.status === "accepted" && depositStatus ? (
         <Card aria-labelledby="pp-deposit">
           <CardHeader>
@@ -229,7 +239,7 @@ export function ProposalPage({ projectId, proposalId, canSend, userName, deposit
       ) : !isDraft ? (
         <Alert severity={proposal.status === "accepted" ? "ok" : "info"} title={proposal.status === "accepted" ? "Accepted — locked" : "Sent — frozen"} className="mb-6">
           {proposal.status === "accepted"
-            ? "The homeowner accepted this proposal. It can no longer be changed."
+            ? "The homeowner accepted this proposal, so it is read-only. To change the signed work, draft a change order below; the homeowner signs it the same way."
             : "What the homeowner sees can't change. To change anything, make a new revision: the old link will then say it was replaced."}
         </Alert>
       ) : null}
@@ -253,7 +263,7 @@ export function ProposalPage({ projectId, proposalId, canSend, userName, deposit
       ) : (
         <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_24rem] lg:items-start">
           <div className="min-w-0">{snapshot ? <FrozenProposal proposal={proposal} snapshot={snapshot} /> : null}</div>
-          <aside className="space-y-6" aria-label="Status, PDF and link">
+          <aside className="min-w-0 space-y-6" aria-label="Status, PDF and link">
             {sideCards(true)}
           </aside>
         </div>
