@@ -86,6 +86,12 @@ export const AcceptSchema = z.object({
 }).strict();
 export type AcceptInput = z.infer<typeof AcceptSchema>;
 
+/** Sending: sales may give or correct the homeowner's e-mail address here; it is saved on the customer too. */
+export const SendSchema = z.object({
+  recipientEmail: z.string({ error: "The e-mail address must be text." }).trim().max(254, "The e-mail address is at most 254 characters.").email("That does not look like an e-mail address.").optional(),
+}).strict();
+export type SendInput = z.infer<typeof SendSchema>;
+
 export const DeclineSchema = z.object({ reason: optionalText("The reason", 2_000) }).strict();
 
 export const VerifyQuerySchema = z.object({ sha256: z.string().trim().toLowerCase().regex(/^[0-9a-f]{64}$/, "Give the SHA-256 as 64 hexadecimal characters.") });

@@ -61,6 +61,12 @@ export function createProposalsRepository(db: Database) {
         .onConflictDoUpdate({ target: userSignatures.userId, set: values, where: eq(userSignatures.companyId, tenant.companyId) });
     },
 
+    async setCustomerEmail(tenant: Tenant, id: string, email: string) {
+      const [row] = await db.update(customers).set({ email, updatedAt: new Date() }).where(scoped(customers, tenant, eq(customers.id, id)))
+        .returning({ id: customers.id, name: customers.name, email: customers.email, phone: customers.phone });
+      return row ?? null;
+    },
+
     async customer(tenant: Tenant, id: string) {
       const [row] = await db.select({ id: customers.id, name: customers.name, email: customers.email, phone: customers.phone })
         .from(customers).where(scoped(customers, tenant, eq(customers.id, id))).limit(1);

@@ -5,7 +5,7 @@ import type { Storage } from "../../lib/storage/index.ts";
 import { hashToken, newToken } from "../../lib/tokens.ts";
 import { linkExpiresAt, linkState } from "../../../shared/proposals/lifecycle.ts";
 import { scopeOfWork } from "../../../shared/proposals/scope-of-work.ts";
-import type { AcceptInput, ProposalPatch } from "../../../shared/proposals/schemas.ts";
+import type { AcceptInput, ProposalPatch, SendInput } from "../../../shared/proposals/schemas.ts";
 import type { ProposalSnapshot, ScopeText, SignatureImage } from "../../../shared/proposals/types.ts";
 import type { CatalogItem } from "../../../shared/schemas/catalog.ts";
 import type { ProjectsRepository } from "../projects/projects.repository.ts";
@@ -241,7 +241,7 @@ export function createProposalsService(deps: {
     },
 
     /** Signs with the seller's saved signature, freezes the snapshot, makes the link and mails it once. */
-    async send(actor: Actor, id: string, meta: RequestMeta) {
+    async send(actor: Actor, id: string, meta: RequestMeta, input: SendInput = {}) {
       const p = await requireProposal(actor, id);
       if (p.supersededBy) throw new AppError("superseded", "A newer revision of this proposal exists; send that one.", 409, {}, { supersededBy: p.supersededBy });
       if (p.status !== "draft") throw conflict("This proposal was already sent. Change it to make a new revision, then send that.", "already-sent");
@@ -251,8 +251,13 @@ export function createProposalsService(deps: {
         throw new AppError("signature-required", "Add your signature to your profile before sending (typed or drawn).", 409);
       }
       const project = await requireProject(actor, p.projectId);
-      const customer = await repo.customer(actor, project.customerId);
-      if (!customer?.email) throw new AppError("customer-email-missing", "The customer has no e-mail address; add one to the customer first.", 400, { customerEmail: "Add the customer's e-mail address." });
+      let customer = await repo.customer(actor, project.customerId);
+      if (customer && input.recipientEmail && input.recipientEmail !== customer.email) {
+        // The address sales typed at sending is the customer's address from now on (one record, no second copy to drift).
+        customer = await repo.setCustomerEmail(actor, customer.id, input.recipientEmail);
+        await repo.addEvent(actor, id, { event: "recipient-changed", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, detail: { to: input.recipientEmail } });
+      }
+      if (!customer?.email) throw new AppError("customer-email-missing", "The customer has no e-mail address: enter it in the send dialog.", 400, { recipientEmail: "Enter the homeowner's e-mail address." });
 
       const snapshot = await snapshotNow(actor, p, { userId: seller.id, name: seller.name, email: seller.email, signature: { typed: seller.signatureTyped, pngDataUrl: seller.signatureDataUrl } });
       const sha = snapshotSha256(snapshot);
