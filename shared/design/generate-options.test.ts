@@ -157,7 +157,7 @@ describe("generateOptions: edge cases", () => {
   it("when a labour rate is set, then the labour line uses it with hours from the catalog's minutes, rounded up to the quarter hour", () => {
     const result = generateOptions({ project: zone4Project, spaceId: SPACE_ID, space: smallRanch(), catalog, settings: { laborRateCentsPerHour: 10_000 } });
     // ridge option: 16 ft × 3 + 32 ft × 4 + 2 × 60 + 16 ft × 2 = 328 min → 5.5 h
-    expect(result.options[0]!.option.laborLines).toEqual([{ id: "labor-1", description: "Installation labour (from the catalog's minutes per unit)", hours: 5.5, rateCents: 10_000 }]);
+    expect(result.options[0]!.option.laborLines).toEqual([{ id: "labor-1", description: "Installation labour", hours: 5.5, rateCents: 10_000, hoursBasis: "catalog" }]);
     expect(result.options[0]!.price.laborCents).toBe(55_000);
   });
 });

@@ -584,7 +584,7 @@ function laborLine(ctx: Context, added: readonly AddedItem[], rationale: string[
     return [];
   }
   rationale.push(`Labour from the catalog's minutes per unit: ${fmt(minutes)} min → ${fmt(hours)} h, rounded up to the quarter hour (common practice), at ${source(rate)}.`);
-  return [{ id: "labor-1", description: "Installation labour (from the catalog's minutes per unit)", hours, rateCents: rate.rateCents }];
+  return [{ id: "labor-1", description: "Installation labour", hours, rateCents: rate.rateCents, hoursBasis: "catalog" }];
 }
 const source = (rate: { rateCents: number; source: string }) => `${formatCents(rate.rateCents)} per hour, ${rate.source}`;
 

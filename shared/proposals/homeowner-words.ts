@@ -72,7 +72,14 @@ export function isShownToHomeowner(code: string): boolean {
 export function withoutTechnicianCautions(detail: string): string {
   let text = detail;
   for (const caution of TECHNICIAN_CAUTIONS) text = text.split(caution).join("");
-  return text.replace(/\s{2,}/g, " ").trim();
+  return text.replace(/[ \t]{2,}/g, " ").trim();
+}
+
+/** An option's notes as the homeowner reads them: the generator's crew cautions left out (the proposal has its own safety section); null when nothing is left. */
+export function homeownerNotes(notes: string | null): string | null {
+  if (!notes) return null;
+  const text = withoutTechnicianCautions(notes).replace(/\n{3,}/g, "\n\n").trim();
+  return text === "" ? null : text;
 }
 
 /**

@@ -26,6 +26,11 @@ describe("what an option fixes", () => {
     expect(result.meetsCode).toBe(false);
   });
 
+  it("when the option meets the code, then the cured shortfall is said once, as meeting the code, not again as a fix", () => {
+    const below: SnapshotFinding = { code: "below-minimum", severity: "critical", title: "Below the code minimum", detail: "…" };
+    expect(optionFixes([space([below, blocked], false)], { after: [space([], true)] })).toEqual({ fixed: ["Insulation is blocking the vents under the eaves"], left: [], meetsCode: true });
+  });
+
   it("when the option's attic could not be analysed, then nothing is claimed as fixed", () => {
     const after: SnapshotSpace = { spaceId: "s1", name: "Main attic", analysis: null, picture: null, pictureDescription: [], issues: ["No attic floor was measured."] };
     expect(optionFixes([space([blocked], false)], { after: [after] })).toEqual({ fixed: [], left: ["Insulation is blocking the vents under the eaves"], meetsCode: false });

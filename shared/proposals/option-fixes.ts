@@ -1,7 +1,8 @@
 /**
  * What an option fixes, for the homeowner's side-by-side choice: the problems found today that
  * the option's "after" analysis no longer reports, space by space, in the homeowner's titles.
- * "Good to know" findings are not problems, so they are neither fixed nor left.
+ * "Good to know" findings are not problems, so they are neither fixed nor left; a shortfall the
+ * option cures is not listed, since `meetsCode` says so in one line.
  */
 import { homeownerFindings } from "./homeowner-words";
 import type { SnapshotOption, SnapshotSpace } from "./types";
@@ -30,7 +31,10 @@ export function optionFixes(before: readonly SnapshotSpace[], option: Pick<Snaps
     const remaining = new Set(problems(after).map((f) => f.code));
     for (const f of problems(today)) {
       const words = isSeveral ? `${today.name}: ${f.title}` : f.title;
-      const list = after?.analysis && !remaining.has(f.code) ? fixed : left;
+      const isFixed = Boolean(after?.analysis) && !remaining.has(f.code);
+      // "Meets the building code minimum" already says the shortfall is gone.
+      if (isFixed && f.code === "below-minimum" && after?.analysis?.compliant) continue;
+      const list = isFixed ? fixed : left;
       if (!list.includes(words)) list.push(words);
     }
   }

@@ -129,7 +129,7 @@ export function scopeOfWork(
   spaces: readonly ScopeSpace[],
   optionSpaces: readonly OptionSpace[],
   catalog: readonly CatalogItem[],
-  laborLines: readonly Pick<LaborLine, "description">[],
+  laborLines: readonly Pick<LaborLine, "description" | "hoursBasis">[],
 ): string[] {
   const byId = new Map(catalog.map((item) => [item.id, item]));
   const isSeveral = optionSpaces.length > 1;
@@ -155,9 +155,11 @@ export function scopeOfWork(
       const sentence = describeAdded(item, added.quantity);
       if (sentence) own.push(sentence);
     }
-    lines.push(...own.map((line) => prefix + line));
+    for (const line of own) if (!lines.includes(prefix + line)) lines.push(prefix + line);
   }
   for (const labor of laborLines) {
+    // The catalog's installation labour is the time to do the lines above, not more work.
+    if (labor.hoursBasis === "catalog" || labor.hoursBasis === "overridden") continue;
     const text = labor.description.trim().replace(/[.\s]+$/, "");
     if (text) lines.push(`${text}.`);
   }

@@ -35,6 +35,12 @@ export const LaborLineSchema = z.object({
   description: z.string().trim().min(1, "Describe the work.").max(300),
   hours: z.number().positive().max(1_000),
   rateCents: z.number().int().min(0).max(10_000_000),
+  /**
+   * Where the hours come from: typed by a person ("entered", the default), the catalog's minutes
+   * per unit of what the option adds ("catalog", kept in step with the quantities), or the
+   * catalog's line with hours a person typed over ("overridden").
+   */
+  hoursBasis: z.enum(["entered", "catalog", "overridden"]).optional(),
 });
 
 export const AdjustmentSchema = z.discriminatedUnion("kind", [

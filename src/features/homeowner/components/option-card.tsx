@@ -1,5 +1,6 @@
 import type { SnapshotOption } from "@shared/proposals/types";
 import { formatCents } from "@shared/pricing/index";
+import { homeownerNotes } from "@shared/proposals/homeowner-words";
 import { AirflowPicture } from "@/components/airflow/airflow-picture";
 import { Alert } from "@/components/ui/alert";
 import { OkIcon, WarningIcon } from "@/components/ui/icons";
@@ -49,7 +50,7 @@ export function OptionCard({ option, index, isChosen }: OptionCardProps) {
               <li key={line}>{line}</li>
             ))}
           </ul>
-          {option.notes ? <p className="mt-3 text-base text-ink-800">{option.notes}</p> : null}
+          {homeownerNotes(option.notes) ? <p className="mt-3 text-base whitespace-pre-line text-ink-800">{homeownerNotes(option.notes)}</p> : null}
         </section>
 
         {option.hasPoweredFan ? (
