@@ -8,15 +8,21 @@ describe("findings in a homeowner's words", () => {
     const f = toHomeownerFinding(interpretWindingResistance("open", ["fan-1"]));
     expect(f.title).toBe("The attic fan's motor has failed");
     expect(f.plain).toMatch(/motor has burned out/);
-    expect(f.title + f.plain).not.toMatch(/OL|winding/i);
+    expect(f.title + f.plain + f.detail).not.toMatch(/\bOL\b|winding/i);
     expect(f.detail).not.toContain(FAN_SAFETY_CAUTION);
     expect(f.detail).not.toMatch(/breaker|voltage tester/i);
   });
 
-  it("when a thermostat finding carries the live-voltage caution, then the homeowner's detail leaves it out", () => {
+  it("when a thermostat test failed, then the homeowner reads the plain sentence, not the voltages or the live-voltage caution", () => {
     const f = toHomeownerFinding(interpretThermostatTest({ switchedLegVoltsDialBelow: 0, switchedLegVoltsDialAbove: 0 }, ["fan-1"]));
+    expect(f.plain).toMatch(/switch that turns the fan on and off/);
     expect(f.detail).not.toContain(LIVE_VOLTAGE_TEST_CAUTION);
-    expect(f.detail).toMatch(/^With the dial below/);
+    expect(f.detail).toBe("");
+  });
+
+  it("when a finding is about the attic's venting, then its technical note (the rule and the numbers) is kept for the homeowner to unfold", () => {
+    const f = toHomeownerFinding({ code: "below-minimum", severity: "critical", title: "Below the code minimum", detail: "The attic has 780 sq in; at 1/150 it needs 1,752 sq in." });
+    expect(f.detail).toBe("The attic has 780 sq in; at 1/150 it needs 1,752 sq in.");
   });
 
   it("when the code is one the technician uses for their own checks, then the homeowner does not see it", () => {

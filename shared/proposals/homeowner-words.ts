@@ -51,6 +51,9 @@ const WORDS: Readonly<Record<string, HomeownerWords>> = {
 /** The technician's own checks: they say how the survey was done, not what is wrong with the house. */
 const TECHNICIAN_ONLY_CODES: ReadonlySet<string> = new Set(["fan-power-verified", "fan-power-not-verified", "fan-winding-ok", "fan-bearings-ok", "fan-thermostat-ok"]);
 
+/** Findings whose technical detail is a meter reading and a repair instruction for the technician: the homeowner gets the plain sentence alone. */
+const TECHNICIAN_DETAIL_CODES: ReadonlySet<string> = new Set(["fan-winding-open", "fan-winding-suspect", "fan-bearings-seized", "fan-thermostat-failed", "fan-thermostat-inconclusive"]);
+
 /** Cautions written for whoever does the work; a homeowner's copy of a finding leaves them out. */
 const TECHNICIAN_CAUTIONS = [LIVE_VOLTAGE_TEST_CAUTION, FAN_SAFETY_CAUTION, ATTIC_SAFETY_CAUTION, ROOF_SAFETY_CAUTION, COMBUSTION_SAFETY_CAUTION];
 
@@ -75,6 +78,11 @@ export function withoutTechnicianCautions(detail: string): string {
   return text.replace(/[ \t]{2,}/g, " ").trim();
 }
 
+/** The technical note a homeowner may unfold: the rule and the arithmetic, never a meter reading or a technician's safety steps ("" when there is none). */
+export function homeownerDetail(code: string, detail: string): string {
+  return TECHNICIAN_DETAIL_CODES.has(code) ? "" : withoutTechnicianCautions(detail);
+}
+
 /** An option's notes as the homeowner reads them: the generator's crew cautions left out (the proposal has its own safety section); null when nothing is left. */
 export function homeownerNotes(notes: string | null): string | null {
   if (!notes) return null;
@@ -93,7 +101,7 @@ export function toHomeownerFinding(finding: Pick<Finding, "code" | "severity" | 
     severity: finding.severity,
     title: homeownerTitle(finding.code, finding.title),
     plain: homeownerSentence(finding.code),
-    detail: withoutTechnicianCautions(finding.detail),
+    detail: homeownerDetail(finding.code, finding.detail),
   };
 }
 
@@ -101,5 +109,5 @@ export function toHomeownerFinding(finding: Pick<Finding, "code" | "severity" | 
 export function homeownerFindings<T extends SnapshotFinding>(findings: readonly T[]): (T & { plain: string | null })[] {
   return findings
     .filter((f) => isShownToHomeowner(f.code))
-    .map((f) => ({ ...f, title: homeownerTitle(f.code, f.title), plain: f.plain ?? homeownerSentence(f.code), detail: withoutTechnicianCautions(f.detail) }));
+    .map((f) => ({ ...f, title: homeownerTitle(f.code, f.title), plain: f.plain ?? homeownerSentence(f.code), detail: homeownerDetail(f.code, f.detail) }));
 }

@@ -362,7 +362,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
           </View>
         ) : null}
 
-        <View break={snapshot.photos.length === 0}>
+        <View>
           <Text style={s.h2}>Terms</Text>
           {(snapshot.terms ?? "Payment terms and warranty are as agreed with your contact.").split(/\n+/).map((p, i) => <Text key={i} style={s.para}>{p}</Text>)}
           <Text style={s.para}>This proposal is valid until {formatDate(snapshot.validUntil)}. Prices are in US dollars and include the sales tax shown.</Text>
