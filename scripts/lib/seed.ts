@@ -282,6 +282,7 @@ export const DEMO_CATALOG: DemoCatalogItem[] = [
   { sku: "TG-SEAL-GABLE", name: "Seal a gable fan opening (blocking, sheathing, siding)", kind: "seal-gable-opening", unit: "each", materialCostCents: 2_200, sellPriceCents: 12_500, laborMinutesPerUnit: 90 },
   { sku: "TG-ELEC-DISC", name: "Electrical disconnect of a fan by a licensed electrician", kind: "electrical-disconnect", unit: "each", materialCostCents: 9_000, sellPriceCents: 17_500, laborMinutesPerUnit: 0 },
   { sku: "TG-INSUL-CLEAR", name: "Clear insulation at the eaves", kind: "insulation-clearing", unit: "hour", materialCostCents: 0, sellPriceCents: 8_500, laborMinutesPerUnit: 60 },
+  { sku: "TG-BATH-DUCT", name: "Duct a bath fan to a roof cap (insulated duct, cap and flashing)", kind: "bath-fan-duct", unit: "each", materialCostCents: 6_500, sellPriceCents: 34_500, laborMinutesPerUnit: 120 },
   { sku: "TG-LABOR", name: "Labour", kind: "labor", unit: "hour", materialCostCents: 0, sellPriceCents: 7_500, laborMinutesPerUnit: 60 },
 ];
 

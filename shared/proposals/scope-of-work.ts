@@ -82,6 +82,8 @@ function describeAdded(item: CatalogItem, quantity: number): string | null {
       return quantity === 1 ? "Seal the gable opening from inside the attic." : `Seal ${q} gable openings from inside the attic.`;
     case "electrical-disconnect":
       return quantity === 1 ? "Have a licensed electrician disconnect the fan circuit and make it safe." : `Have a licensed electrician disconnect ${q} fan circuits and make them safe.`;
+    case "bath-fan-duct":
+      return quantity === 1 ? "Duct the bathroom fan to a roof or wall cap so its damp air leaves the house instead of the attic." : `Duct ${q} bathroom fans to roof or wall caps so their damp air leaves the house instead of the attic.`;
     case "deck-cut":
       return `Cut ${feet(quantity)} of vent slot in the roof deck at the ridge.`;
     case "labor":

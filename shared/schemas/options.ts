@@ -27,7 +27,7 @@ export const OptionSpaceSchema = z.object({
   ventActions: z.record(z.string().max(100), z.enum(VENT_ACTIONS)).default({}),
   added: z.array(AddedItemSchema).max(200).default([]),
   /** Site fixes the option includes, e.g. clearing blocked soffits, sealing a gable fan opening. */
-  siteFixes: z.object({ clearsBlockedSoffits: z.boolean().optional(), sealsGableFan: z.boolean().optional() }).default({}),
+  siteFixes: z.object({ clearsBlockedSoffits: z.boolean().optional(), sealsGableFan: z.boolean().optional(), ductsBathFan: z.boolean().optional() }).default({}),
 });
 
 export const LaborLineSchema = z.object({

@@ -137,7 +137,7 @@ function Picture({ space, heading, notes }: { space: SnapshotSpace; heading: str
   return (
     // One block, the full width of the page: a page never starts with a picture's notes cut off from it.
     <View style={{ marginBottom: 6, width: CONTENT_WIDTH_PT }} wrap={false}>
-      <Text style={s.h3}>{heading}</Text>
+      <Text style={s.h3} minPresenceAhead={60}>{heading}</Text>
       <AirflowSvg picture={space.picture} widthPt={pictureWidthPt(space.picture)} />
       {own.captions.map((c, i) => (
         <Text key={`c${i}`} style={s.caption}>{c}</Text>
@@ -155,7 +155,7 @@ const unique = (lines: readonly string[]) => [...new Set(lines.map((l) => l.trim
 function AtAGlance({ snapshot }: { snapshot: ProposalSnapshot }) {
   return (
     <View>
-      <Text style={s.h2}>{snapshot.options.length === 1 ? "What we propose" : `Your ${snapshot.options.length} options at a glance`}</Text>
+      <Text style={s.h2} minPresenceAhead={90}>{snapshot.options.length === 1 ? "What we propose" : `Your ${snapshot.options.length} options at a glance`}</Text>
       {snapshot.options.map((o, i) => {
         const fixes = optionFixes(snapshot.before, o);
         return (
@@ -179,9 +179,9 @@ function OptionSection({ option, index, notes }: { option: SnapshotOption; index
   const price = option.price;
   return (
     <View break>
-      <Text style={s.h2}>Option {index + 1}: {option.name}</Text>
+      <Text style={s.h2} minPresenceAhead={90}>Option {index + 1}: {option.name}</Text>
       {homeownerNotes(option.notes) ? <Text style={s.para}>{homeownerNotes(option.notes)}</Text> : null}
-      <Text style={s.h3}>What we would do</Text>
+      <Text style={s.h3} minPresenceAhead={60}>What we would do</Text>
       <Bullets items={unique(option.scope)} />
       {price ? (
         <View style={s.priceBox} wrap={false}>
@@ -223,7 +223,7 @@ function TechnicalNotes({ snapshot }: { snapshot: ProposalSnapshot }) {
   const once = (lines: readonly string[]) => lines.filter((l) => (seen.has(l) ? false : (seen.add(l), true)));
   return (
     <View>
-      <Text style={s.h2}>Technical notes</Text>
+      <Text style={s.h2} minPresenceAhead={90}>Technical notes</Text>
       <Text style={s.small}>For anyone who wants the rules and the arithmetic behind the figures in this proposal.</Text>
       {snapshot.before.map((space) => {
         const reasons = once(space.analysis?.requirement.reasons ?? []);
@@ -234,7 +234,7 @@ function TechnicalNotes({ snapshot }: { snapshot: ProposalSnapshot }) {
         if (!reasons.length && !details.length) return null;
         return (
           <View key={space.spaceId}>
-            {snapshot.before.length > 1 ? <Text style={s.h3}>{space.name}</Text> : null}
+            {snapshot.before.length > 1 ? <Text style={s.h3} minPresenceAhead={60}>{space.name}</Text> : null}
             {reasons.map((r, i) => <Text key={`r${i}`} style={s.note}>{r}</Text>)}
             {details.map((f) => (
               <Text key={f.code} style={s.note}>
@@ -318,7 +318,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
 
         <AtAGlance snapshot={snapshot} />
 
-        <Text style={s.h2}>What we found</Text>
+        <Text style={s.h2} minPresenceAhead={90}>What we found</Text>
         {snapshot.explanation[0] ? <Text style={s.para}>{snapshot.explanation[0]}</Text> : null}
         {findings.map((f, i) => (
           <View key={i} style={[s.finding, { borderLeftColor: severityColour[f.severity] }]} wrap={false}>
@@ -328,7 +328,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
         ))}
 
         <View>
-          <Text style={s.h2}>{snapshot.before.length > 1 ? "Your attics today" : "Your attic today"}</Text>
+          <Text style={s.h2} minPresenceAhead={90}>{snapshot.before.length > 1 ? "Your attics today" : "Your attic today"}</Text>
           {snapshot.before.map((space) => (
             <View key={space.spaceId}>
               {space.analysis ? (
@@ -338,7 +338,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
                 </>
               ) : (
                 <>
-                  <Text style={s.h3}>{space.name}: not analysed</Text>
+                  <Text style={s.h3} minPresenceAhead={60}>{space.name}: not analysed</Text>
                   <Bullets items={space.issues} />
                 </>
               )}
@@ -350,7 +350,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
 
         {snapshot.photos.length ? (
           <View break>
-            <Text style={s.h2}>Photos from the survey</Text>
+            <Text style={s.h2} minPresenceAhead={90}>Photos from the survey</Text>
             <View style={{ flexDirection: "row", flexWrap: "wrap", gap: 10 }}>
               {snapshot.photos.map((p) => photoDataUrls[p.id] ? (
                 <View key={p.id} style={{ width: 240 }} wrap={false}>
@@ -363,18 +363,18 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
         ) : null}
 
         <View>
-          <Text style={s.h2}>Terms</Text>
+          <Text style={s.h2} minPresenceAhead={90}>Terms</Text>
           {(snapshot.terms ?? "Payment terms and warranty are as agreed with your contact.").split(/\n+/).map((p, i) => <Text key={i} style={s.para}>{p}</Text>)}
           <Text style={s.para}>This proposal is valid until {formatDate(snapshot.validUntil)}. Prices are in US dollars and include the sales tax shown.</Text>
         </View>
 
         <View>
-          <Text style={s.h2}>Safety and codes</Text>
+          <Text style={s.h2} minPresenceAhead={90}>Safety and codes</Text>
           {unique(snapshot.cautions).map((text, i) => <Text key={i} style={s.caution} wrap={false}>{text}</Text>)}
         </View>
 
         <View wrap={false} style={{ marginTop: 16 }}>
-          <Text style={s.h2}>Signatures</Text>
+          <Text style={s.h2} minPresenceAhead={90}>Signatures</Text>
           <Text style={s.para}>
             {accepted ? `Accepted: option ${snapshot.options.indexOf(accepted) + 1}, ${accepted.name}${accepted.price ? `, total ${formatCents(accepted.price.totalCents)}` : ""}.` : "To accept, choose one option and sign. Option accepted: ______________________"}
           </Text>
@@ -402,7 +402,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
 
         {snapshot.coolingOff.isEnabled ? (
           <View break>
-            <Text style={s.h2}>Your right to cancel</Text>
+            <Text style={s.h2} minPresenceAhead={90}>Your right to cancel</Text>
             {snapshot.coolingOff.notice.map((p, i) => (
               <Text key={i} style={p === "NOTICE OF CANCELLATION" ? [s.h3, { textAlign: "center", fontSize: 12 }] : s.para}>{p}</Text>
             ))}
@@ -428,13 +428,13 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
             <Figure label="Link id" value={signed.acceptance.tokenId ?? "—"} />
             <Figure label="Consent to e-sign, text version" value={signed.acceptance.consentTextVersion} />
           </View>
-          <Text style={s.h3}>Browser</Text>
+          <Text style={s.h3} minPresenceAhead={60}>Browser</Text>
           <Text style={s.mono}>{signed.acceptance.userAgent ?? "unknown"}</Text>
-          <Text style={s.h3}>Fingerprints</Text>
+          <Text style={s.h3} minPresenceAhead={60}>Fingerprints</Text>
           <Text style={s.mono}>Proposal content (snapshot) SHA-256: {signed.snapshotSha256}</Text>
           <Text style={s.mono}>Proposal PDF as sent, SHA-256: {signed.originalPdfSha256 ?? "—"}</Text>
           {signed.acceptance.signature.pngSha256 ? <Text style={s.mono}>Drawn signature image SHA-256: {signed.acceptance.signature.pngSha256}</Text> : null}
-          <Text style={s.h3}>Trail</Text>
+          <Text style={s.h3} minPresenceAhead={60}>Trail</Text>
           {signed.events.map((e, i) => (
             <View key={i} style={s.figureRow} wrap={false}>
               <Text style={s.cell}>{e.event}</Text>
