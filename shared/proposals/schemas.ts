@@ -48,6 +48,10 @@ export const CompanyProfilePatchSchema = z.object({
   isCoolingOffNoticeEnabled: z.boolean(),
   /** Remind the homeowner when the proposal is still unopened after this many days; null = never. */
   reminderDays: z.number().int().min(1, "Remind after at least 1 day.").max(60).nullable(),
+  /** New projects start with these unless the estimator picks others. */
+  defaultCodeBasis: z.enum(["irc-2018", "irc-2012", "irc-2009", "strict-150"], { error: "Choose a code edition." }),
+  defaultClimateZone: z.number({ error: "The climate zone is a number 1–8." }).int("The climate zone is a whole number 1–8.").min(1, "The climate zone is 1–8.").max(8, "The climate zone is 1–8."),
+  unitSystem: z.enum(["imperial", "metric"], { error: "Choose feet and inches or metric." }),
 }).partial().strict();
 export type CompanyProfilePatch = z.infer<typeof CompanyProfilePatchSchema>;
 

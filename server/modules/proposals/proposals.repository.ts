@@ -26,7 +26,10 @@ export type ProposalEventRow = typeof proposalEvents.$inferSelect;
 export type NewProposalEvent = Omit<typeof proposalEvents.$inferInsert, "id" | "at" | "companyId" | "proposalId"> & { at?: Date };
 
 export interface CompanySettings {
+  /** Absent = on: the three-day notice is the law for sales made at the buyer's home (16 CFR 429), where these jobs are sold. */
   isCoolingOffNoticeEnabled?: boolean;
+  defaultClimateZone?: number;
+  unitSystem?: "imperial" | "metric";
   reminderDays?: number | null;
   logoStorageKey?: string | null;
   logoContentType?: string | null;

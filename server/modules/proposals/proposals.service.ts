@@ -14,6 +14,7 @@ import type { OptionRow, OptionsRepository } from "../options/options.repository
 import { pricingSettings } from "../options/options.service.ts";
 import type { CatalogRepository } from "../catalog/catalog.repository.ts";
 import { buildSnapshot, sha256Hex, snapshotSha256 } from "./proposal-snapshot.ts";
+import { isCoolingOffNoticeOn } from "./company.service.ts";
 import type { ProposalJobs } from "./proposal-jobs.ts";
 import type { CompanySettings, ProposalRow, ProposalsRepository, Tenant } from "./proposals.repository.ts";
 import { checkedSignaturePng } from "./signature-image.ts";
@@ -121,7 +122,7 @@ export function createProposalsService(deps: {
       company: {
         name: company.name, licenseNumber: company.licenseNumber, addressLine: company.addressLine, phone: company.phone, email: company.email,
         logo: settings.logoStorageKey && settings.logoContentType && settings.logoSha256 ? { storageKey: settings.logoStorageKey, contentType: settings.logoContentType, sha256: settings.logoSha256 } : null,
-        isCoolingOffNoticeEnabled: settings.isCoolingOffNoticeEnabled ?? false,
+        isCoolingOffNoticeEnabled: isCoolingOffNoticeOn(settings),
       },
       customer, project, spaces, options: chosen, catalog,
       pricing: pricingSettings({ taxRateBasisPoints: company.taxRateBasisPoints, depositRule: p.depositRule ?? company.depositRule ?? null }),

@@ -1,3 +1,4 @@
+import type { CodeBasis } from "@shared/ventilation/index";
 import type { DepositRule } from "@shared/proposals/types";
 
 /** The company profile as GET|PATCH /api/company answer it (server/modules/proposals/company.service.ts). */
@@ -13,5 +14,9 @@ export interface CompanyProfile {
   depositRule: DepositRule | null;
   isCoolingOffNoticeEnabled: boolean;
   reminderDays: number | null;
+  /** What new projects start with. */
+  defaultCodeBasis: CodeBasis;
+  defaultClimateZone: number;
+  unitSystem: "imperial" | "metric";
   logo: { contentType: string | null; sha256: string | null; url: string } | null;
 }
