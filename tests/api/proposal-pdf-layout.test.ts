@@ -8,6 +8,7 @@ import { openSync, type Font } from "fontkit";
 import { and, eq, isNotNull } from "drizzle-orm";
 import { companies, projects, proposals } from "../../server/db/schema/index.ts";
 import { renderProposalPdf } from "../../server/modules/proposals/pdf/render-pdf.tsx";
+import { optionFixes } from "../../shared/proposals/option-fixes.ts";
 import type { ProposalSnapshot } from "../../shared/proposals/types.ts";
 import { startTestApp, type TestApp } from "../setup/test-app.ts";
 
@@ -71,14 +72,31 @@ function overlaps(ws: Word[]): string[] {
   return found;
 }
 
+const norm = (text: string) => text.replace(/\s+/g, " ").replace(/^•\s*/, "").trim();
+
+/**
+ * What two options may both print: a scope line they share (both remove the old turbines) and the
+ * same "Fixes: …" on the summary. Anything else printed twice is a repeat.
+ */
+function sharedByOptions(snapshot: ProposalSnapshot): string[] {
+  const count = new Map<string, number>();
+  for (const o of snapshot.options) {
+    const fixes = optionFixes(snapshot.before, o);
+    const own = new Set([...o.scope, `Fixes: ${fixes.fixed.join("; ")}.`, `Leaves as it is: ${fixes.left.join("; ")}.`].map(norm));
+    for (const text of own) count.set(text, (count.get(text) ?? 0) + 1);
+  }
+  return [...count].filter(([, n]) => n > 1).map(([text]) => text);
+}
+
 /** Lines of running text (long enough to be a sentence, not a table label) printed more than once; an option's name is its heading on the summary and on its page. */
 function repeatedLines(file: string, snapshot: ProposalSnapshot): string[] {
   const text = execFileSync("pdftotext", [file, "-"]).toString();
   const headings = new Set(snapshot.options.map((o, i) => `Option ${i + 1}: ${o.name}`));
+  const shared = sharedByOptions(snapshot);
   const seen = new Map<string, number>();
   for (const raw of text.split("\n")) {
-    const line = raw.replace(/\s+/g, " ").trim();
-    if (line.length < 50 || /Page \d+ of \d+/.test(line) || headings.has(line)) continue;
+    const line = norm(raw);
+    if (line.length < 50 || /Page \d+ of \d+/.test(line) || headings.has(line) || shared.some((t) => t.includes(line))) continue;
     seen.set(line, (seen.get(line) ?? 0) + 1);
   }
   return [...seen].filter(([, n]) => n > 1).map(([line, n]) => `${n}× ${line}`);

@@ -44,6 +44,7 @@ const s = StyleSheet.create({
   caption: { fontSize: 8.5, color: INK, lineHeight: "12pt", marginTop: 3 },
   glance: { borderWidth: 0.75, borderColor: RULE, borderRadius: 3, padding: 8, marginBottom: 6 },
   note: { fontSize: 8, color: INK, lineHeight: "11pt", marginBottom: 3 },
+  cancelForm: { borderWidth: 0.75, borderColor: INK, borderStyle: "dashed", padding: 8, marginTop: 4 },
   caution: { borderWidth: 0.75, borderColor: "#b4411b", borderRadius: 3, padding: 8, marginBottom: 6, fontSize: 9, lineHeight: "12.5pt" },
   sigRow: { flexDirection: "row", gap: 24, marginTop: 12 },
   sigBox: { flex: 1 },
@@ -217,34 +218,45 @@ function AfterFigures({ analysis }: { analysis: SnapshotAnalysis }) {
   );
 }
 
-/** The rule, the inputs and the arithmetic behind every figure, in small type at the end, each line once. */
-function TechnicalNotes({ snapshot }: { snapshot: ProposalSnapshot }) {
-  const seen = new Set<string>();
-  const once = (lines: readonly string[]) => lines.filter((l) => (seen.has(l) ? false : (seen.add(l), true)));
+const SAID_BY_REASONS: ReadonlySet<string> = new Set(["below-minimum", "exception-not-met"]);
+
+/** The rule, the inputs and the arithmetic behind today's figures, in small type under them; each line once in the document. */
+function SpaceNotes({ space, seen }: { space: SnapshotSpace; seen: Set<string> }) {
+  const once = (text: string) => (text && !seen.has(text) ? (seen.add(text), true) : false);
+  const reasons = (space.analysis?.requirement.reasons ?? []).filter(once);
+  // The requirement's reasons already give the arithmetic of a shortfall and of the 1/300 conditions.
+  const details = homeownerFindings(space.analysis?.findings ?? []).filter((f) => !SAID_BY_REASONS.has(f.code) && once(f.detail));
+  if (!reasons.length && !details.length) return null;
+  return (
+    <View style={{ marginTop: 6 }}>
+      <Text style={s.h3} minPresenceAhead={40}>The rules and the arithmetic</Text>
+      {reasons.map((r, i) => <Text key={`r${i}`} style={s.note}>{r}</Text>)}
+      {details.map((f) => (
+        <Text key={f.code} style={s.note}>
+          <Text style={{ fontWeight: 600 }}>{f.title}. </Text>
+          {f.detail}
+        </Text>
+      ))}
+    </View>
+  );
+}
+
+/** The buyer's right to cancel; the notice-of-cancellation form itself is kept on one page so it can be cut out and sent. */
+function CancellationNotice({ notice }: { notice: string[] }) {
+  const formAt = notice.indexOf("NOTICE OF CANCELLATION");
+  const lead = formAt >= 0 ? notice.slice(0, formAt) : notice;
+  const form = formAt >= 0 ? notice.slice(formAt) : [];
   return (
     <View>
-      <Text style={s.h2} minPresenceAhead={90}>Technical notes</Text>
-      <Text style={s.small}>For anyone who wants the rules and the arithmetic behind the figures in this proposal.</Text>
-      {snapshot.before.map((space) => {
-        const reasons = once(space.analysis?.requirement.reasons ?? []);
-        const details = homeownerFindings(space.analysis?.findings ?? []).filter((f) => f.detail && !seen.has(f.detail)).map((f) => {
-          seen.add(f.detail);
-          return f;
-        });
-        if (!reasons.length && !details.length) return null;
-        return (
-          <View key={space.spaceId}>
-            {snapshot.before.length > 1 ? <Text style={s.h3} minPresenceAhead={60}>{space.name}</Text> : null}
-            {reasons.map((r, i) => <Text key={`r${i}`} style={s.note}>{r}</Text>)}
-            {details.map((f) => (
-              <Text key={f.code} style={s.note}>
-                <Text style={{ fontWeight: 600 }}>{f.title}. </Text>
-                {f.detail}
-              </Text>
-            ))}
-          </View>
-        );
-      })}
+      <Text style={s.h2} minPresenceAhead={90}>Your right to cancel</Text>
+      {lead.map((p, i) => <Text key={i} style={s.para}>{p}</Text>)}
+      {form.length ? (
+        <View wrap={false} style={s.cancelForm}>
+          {form.map((p, i) => (
+            <Text key={i} style={i === 0 ? [s.h3, { textAlign: "center", fontSize: 11 }] : s.note}>{p}</Text>
+          ))}
+        </View>
+      ) : null}
     </View>
   );
 }
@@ -270,6 +282,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
   const accepted = signed ? snapshot.options.find((o) => o.id === signed.acceptance.optionId) : undefined;
   const findings = snapshot.before.flatMap((space) => homeownerFindings(space.analysis?.findings ?? []).map((f) => ({ ...f, space: space.name })));
   const notes = pictureNotes(picturesInOrder(snapshot));
+  const notesSeen = new Set<string>();
   return (
     <Document title={`Proposal for ${snapshot.customer.name}`} author={c.name} subject="Attic ventilation proposal" creator="Eavesight" producer="Eavesight">
       <Page size="LETTER" style={s.page}>
@@ -327,7 +340,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
           </View>
         ))}
 
-        <View>
+        <View break>
           <Text style={s.h2} minPresenceAhead={90}>{snapshot.before.length > 1 ? "Your attics today" : "Your attic today"}</Text>
           {snapshot.before.map((space) => (
             <View key={space.spaceId}>
@@ -335,6 +348,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
                 <>
                   <Picture space={space} heading={snapshot.before.length > 1 ? `How air moves in the ${space.name.toLowerCase()}` : "How air moves through the attic"} notes={notes} />
                   <Figures analysis={space.analysis} />
+                  <SpaceNotes space={space} seen={notesSeen} />
                 </>
               ) : (
                 <>
@@ -369,8 +383,13 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
         </View>
 
         <View>
-          <Text style={s.h2} minPresenceAhead={90}>Safety and codes</Text>
-          {unique(snapshot.cautions).map((text, i) => <Text key={i} style={s.caution} wrap={false}>{text}</Text>)}
+          {unique(snapshot.cautions).map((text, i) => (
+            // The heading travels with the first caution, so it never ends a page alone.
+            <View key={i} wrap={false}>
+              {i === 0 ? <Text style={s.h2}>Safety and codes</Text> : null}
+              <Text style={s.caution}>{text}</Text>
+            </View>
+          ))}
         </View>
 
         <View wrap={false} style={{ marginTop: 16 }}>
@@ -398,16 +417,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
           </View>
         </View>
 
-        <TechnicalNotes snapshot={snapshot} />
-
-        {snapshot.coolingOff.isEnabled ? (
-          <View break>
-            <Text style={s.h2} minPresenceAhead={90}>Your right to cancel</Text>
-            {snapshot.coolingOff.notice.map((p, i) => (
-              <Text key={i} style={p === "NOTICE OF CANCELLATION" ? [s.h3, { textAlign: "center", fontSize: 12 }] : s.para}>{p}</Text>
-            ))}
-          </View>
-        ) : null}
+        {snapshot.coolingOff.isEnabled ? <CancellationNotice notice={snapshot.coolingOff.notice} /> : null}
 
       </Page>
 
