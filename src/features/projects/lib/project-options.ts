@@ -1,5 +1,5 @@
 import { CODE_BASIS_LABELS, PROJECT_STATUSES, type ProjectStatus } from "@shared/schemas/projects";
-import { CODE_BASES, type CodeBasis, type RoofColor, type VaporRetarder } from "@shared/ventilation/index";
+import { CODE_BASES, type RoofColor, type VaporRetarder } from "@shared/ventilation/index";
 import type { SelectOption } from "@/components/ui/select";
 
 export const STATUS_LABELS: Record<ProjectStatus, string> = {
