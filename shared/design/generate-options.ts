@@ -675,7 +675,7 @@ function propose(ctx: Context, plan: Plan): GeneratedOption | { failure: string 
 export function generateOptions(input: GenerateOptionsInput): GenerateOptionsResult {
   const tried = tryAnalyzeAttic(toAtticInput(input.project, input.space));
   if (!tried.ok) {
-    const reason = `The survey can't be analysed yet: ${tried.issues.map((i) => `${i.path || "attic"}: ${i.message}`).join("; ")}`;
+    const reason = `The survey can't be analysed yet: ${tried.issues.map((i) => i.message).join("; ")}`;
     return { baseline: null, options: [], skipped: OPTION_TYPES.map((type) => ({ type, reason: clip(reason) })) };
   }
   const ctx = buildContext(input, tried.analysis);
