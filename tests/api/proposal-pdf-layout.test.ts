@@ -88,18 +88,22 @@ function sharedByOptions(snapshot: ProposalSnapshot): string[] {
   return [...count].filter(([, n]) => n > 1).map(([text]) => text);
 }
 
-/** Lines of running text (long enough to be a sentence, not a table label) printed more than once; an option's name is its heading on the summary and on its page. */
-function repeatedLines(file: string, snapshot: ProposalSnapshot): string[] {
+/**
+ * Paragraphs of running text (pdftotext separates blocks with a blank line; a table label is
+ * shorter than 70 characters) printed more than once. An option's name is its heading on the
+ * summary and on its own page, and two options may share a scope line.
+ */
+function repeatedParagraphs(file: string, snapshot: ProposalSnapshot): string[] {
   const text = execFileSync("pdftotext", [file, "-"]).toString();
   const headings = new Set(snapshot.options.map((o, i) => `Option ${i + 1}: ${o.name}`));
   const shared = sharedByOptions(snapshot);
   const seen = new Map<string, number>();
-  for (const raw of text.split("\n")) {
-    const line = norm(raw);
-    if (line.length < 50 || /Page \d+ of \d+/.test(line) || headings.has(line) || shared.some((t) => t.includes(line))) continue;
-    seen.set(line, (seen.get(line) ?? 0) + 1);
+  for (const block of text.split(/\n\s*\n/)) {
+    const paragraph = norm(block);
+    if (paragraph.length < 70 || /Page \d+ of \d+/.test(paragraph) || headings.has(paragraph) || shared.some((t) => t.includes(paragraph))) continue;
+    seen.set(paragraph, (seen.get(paragraph) ?? 0) + 1);
   }
-  return [...seen].filter(([, n]) => n > 1).map(([line, n]) => `${n}× ${line}`);
+  return [...seen].filter(([, n]) => n > 1).map(([paragraph, n]) => `${n}× ${paragraph}`);
 }
 
 const require = createRequire(import.meta.url);
@@ -126,8 +130,8 @@ describe("the demo proposals as PDFs", () => {
     for (const r of twoOptionsOneAttic) expect(pageCount(r.file), r.title).toBeLessThanOrEqual(5);
   });
 
-  it("when read back as text, then no sentence is printed twice (cautions, captions and scope lines appear once)", () => {
-    for (const r of rendered) expect(repeatedLines(r.file, r.snapshot), r.title).toEqual([]);
+  it("when read back as text, then no paragraph is printed twice (cautions, captions, findings and scope lines appear once)", () => {
+    for (const r of rendered) expect(repeatedParagraphs(r.file, r.snapshot), r.title).toEqual([]);
   });
 
   it("when the word boxes are read, then no text is drawn over other text", () => {

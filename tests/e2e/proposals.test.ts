@@ -92,7 +92,8 @@ async function sendProposal(page: Page): Promise<string> {
   const since = new Date(Date.now() - 2_000);
   await page.getByRole("button", { name: "Send to the homeowner" }).click();
   const dialog = page.getByRole("dialog", { name: "Send this proposal?" });
-  await dialog.getByText(HOMEOWNER_EMAIL).first().waitFor();
+  // The address is filled in from the customer and can be corrected here.
+  await expect.poll(() => dialog.getByRole("textbox", { name: /Homeowner's e-mail/ }).inputValue()).toBe(HOMEOWNER_EMAIL);
   await page.waitForTimeout(300); // let the dialog finish rising before the picture
   await shot(page, "proposal-send-confirm");
   await dialog.getByRole("button", { name: "Sign and send" }).click();

@@ -150,6 +150,16 @@ function Picture({ space, heading, notes }: { space: SnapshotSpace; heading: str
   );
 }
 
+function groupBySpace<T extends { code: string; space: string }>(findings: readonly T[]): (T & { spaces: string[] })[] {
+  const byCode = new Map<string, T & { spaces: string[] }>();
+  for (const f of findings) {
+    const seen = byCode.get(f.code);
+    if (seen) seen.spaces.push(f.space);
+    else byCode.set(f.code, { ...f, spaces: [f.space] });
+  }
+  return [...byCode.values()];
+}
+
 /** Each line once, in the order first written (a scope edited by hand can repeat one). */
 const unique = (lines: readonly string[]) => [...new Set(lines.map((l) => l.trim()).filter(Boolean))];
 
@@ -280,7 +290,8 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
   const c = snapshot.company;
   const footerLeft = `${c.name} · Proposal ${snapshot.proposalId.slice(0, 8)} rev. ${snapshot.revision}`;
   const accepted = signed ? snapshot.options.find((o) => o.id === signed.acceptance.optionId) : undefined;
-  const findings = snapshot.before.flatMap((space) => homeownerFindings(space.analysis?.findings ?? []).map((f) => ({ ...f, space: space.name })));
+  // One entry per finding, naming every space it was found in, so its sentence is read once.
+  const findings = groupBySpace(snapshot.before.flatMap((space) => homeownerFindings(space.analysis?.findings ?? []).map((f) => ({ ...f, space: space.name }))));
   const notes = pictureNotes(picturesInOrder(snapshot));
   const notesSeen = new Set<string>();
   return (
@@ -335,7 +346,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
         {snapshot.explanation[0] ? <Text style={s.para}>{snapshot.explanation[0]}</Text> : null}
         {findings.map((f, i) => (
           <View key={i} style={[s.finding, { borderLeftColor: severityColour[f.severity] }]} wrap={false}>
-            <Text style={[s.body, { fontWeight: 600 }]}>{f.title}{snapshot.before.length > 1 ? ` (${f.space})` : ""}</Text>
+            <Text style={[s.body, { fontWeight: 600 }]}>{f.title}{snapshot.before.length > 1 ? ` (${f.spaces.join(", ")})` : ""}</Text>
             {f.plain ? <Text style={s.body}>{f.plain}</Text> : null}
           </View>
         ))}
