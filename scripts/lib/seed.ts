@@ -19,6 +19,7 @@ import { toAtticInput } from "../../shared/survey/to-attic-input.ts";
 import { analyzeAttic } from "../../shared/ventilation/index.ts";
 import type { CodeBasis, RoofColor, VaporRetarder } from "../../shared/ventilation/index.ts";
 import { log } from "./paths.ts";
+import { seedProposalStory } from "./seed-story.ts";
 
 export const DEMO_PASSWORD = "eavesight-demo";
 
@@ -143,7 +144,7 @@ export const DEMO_PROJECTS: DemoProject[] = [
   {
     // (c) An L-shaped ranch: the main attic as one outline, the attached garage vented on its own.
     company: "tallgrass", title: "Farrowby ranch — L-shaped attic and garage", customer: "Imogen Farrowby",
-    siteAddress: "5 Cattail Court, Marrow Creek", status: "surveyed", estimatorEmail: TALLGRASS_ESTIMATOR,
+    siteAddress: "5 Cattail Court, Marrow Creek", status: "proposed", estimatorEmail: TALLGRASS_ESTIMATOR,
     ...zone4, roofColor: "light",
     spaces: [
       {
@@ -191,11 +192,30 @@ export const DEMO_PROJECTS: DemoProject[] = [
   },
   {
     company: "tallgrass", title: "Whitcombe rental — turbine replacement", customer: "Amos Whitcombe",
-    siteAddress: "402 Old Mill Crossing, Marrow Creek", status: "lost", estimatorEmail: TALLGRASS_ESTIMATOR, ...zone4, roofColor: "dark", spaces: [],
+    siteAddress: "402 Old Mill Crossing, Marrow Creek", status: "lost", estimatorEmail: TALLGRASS_ESTIMATOR, ...zone4, roofColor: "dark",
+    notes: "Owner wanted the two seized turbines swapped like for like.",
+    spaces: [{
+      name: "Main attic",
+      roof: { form: "gable", pitchIn12: 5, ridgeLengthFt: 32, eaveLengthFt: 64 },
+      sections: [{ kind: "rect", lengthFt: 32, widthFt: 26 }],
+      vents: [
+        { id: "turbine-1", kind: "turbine", location: "upper", quantity: 2, nfaSqInPerUnit: 112, dropBelowRidgeFt: 1, label: "Seized turbines" },
+        { id: "soffit-1", kind: "soffit-individual", location: "lower", quantity: 8, nfaSqInPerUnit: 28, label: "Small soffit vents" },
+      ],
+      site: { bafflesPresent: true },
+    }],
   },
   {
     company: "tallgrass", title: "Varnum garage — soffit repair", customer: "Odette Varnum",
-    siteAddress: "214 Thistledown Lane, Marrow Creek", status: "completed", estimatorEmail: TALLGRASS_ESTIMATOR, ...zone4, roofColor: "dark", spaces: [],
+    siteAddress: "214 Thistledown Lane, Marrow Creek", status: "completed", estimatorEmail: TALLGRASS_ESTIMATOR, ...zone4, roofColor: "dark",
+    spaces: [{
+      name: "Garage attic",
+      roof: { form: "gable", pitchIn12: 4, ridgeLengthFt: 22, eaveLengthFt: 44 },
+      sections: [{ kind: "rect", lengthFt: 22, widthFt: 20 }],
+      vents: [{ id: "box-1", kind: "box", location: "upper", quantity: 2, nfaSqInPerUnit: 50, dropBelowRidgeFt: 1, label: "Box vents" }],
+      site: {},
+      notes: "Rotted soffit boards, no intake left.",
+    }],
   },
   {
     company: "bluestem", title: "Pettibone attic survey", customer: "Lorna Pettibone",
@@ -262,6 +282,7 @@ export const DEMO_CATALOG: DemoCatalogItem[] = [
   { sku: "TG-SEAL-GABLE", name: "Seal a gable fan opening (blocking, sheathing, siding)", kind: "seal-gable-opening", unit: "each", materialCostCents: 2_200, sellPriceCents: 12_500, laborMinutesPerUnit: 90 },
   { sku: "TG-ELEC-DISC", name: "Electrical disconnect of a fan by a licensed electrician", kind: "electrical-disconnect", unit: "each", materialCostCents: 9_000, sellPriceCents: 17_500, laborMinutesPerUnit: 0 },
   { sku: "TG-INSUL-CLEAR", name: "Clear insulation at the eaves", kind: "insulation-clearing", unit: "hour", materialCostCents: 0, sellPriceCents: 8_500, laborMinutesPerUnit: 60 },
+  { sku: "TG-BATH-DUCT", name: "Duct a bath fan to a roof cap (insulated duct, cap and flashing)", kind: "bath-fan-duct", unit: "each", materialCostCents: 6_500, sellPriceCents: 34_500, laborMinutesPerUnit: 120 },
   { sku: "TG-LABOR", name: "Labour", kind: "labor", unit: "hour", materialCostCents: 0, sellPriceCents: 7_500, laborMinutesPerUnit: 60 },
 ];
 
@@ -352,6 +373,7 @@ export async function seedDemo(databaseUrl: string): Promise<void> {
     await seedSurveys(db, companyIds);
     await seedCatalog(db, companyIds);
     await seedOptions(db, companyIds);
+    await seedProposalStory(db, companyIds);
     log("demo data seeded (Tallgrass Exteriors, Bluestem Roofing)");
   } finally {
     await sql.end();

@@ -9,7 +9,8 @@
  *   section and drop below the ridge unless it has its own.
  * - Accessories and labour (baffles, patches, seals, deck cuts…) change no vent; the site fixes do:
  *   `clearsBlockedSoffits` leaves the soffits unblocked with baffles in (IRC R806.3), and
- *   `sealsGableFan` seals every gable fan to its opening.
+ *   `sealsGableFan` seals every gable fan to its opening, and `ductsBathFan` takes a bath fan's
+ *   air out of the attic to a roof or wall cap.
  */
 import type { CatalogItem } from "../schemas/catalog";
 import type { AddedItem, OptionSpace } from "../schemas/options";
@@ -96,6 +97,7 @@ export function applyOption(space: SpaceSurvey, optionSpace: OptionSpace, catalo
   }
   const sealsGableFan = optionSpace.siteFixes.sealsGableFan === true;
   if (sealsGableFan) site.gableFanSealed = true;
+  if (optionSpace.siteFixes.ductsBathFan === true) site.bathFanIntoAttic = false;
   const sealedVents = sealsGableFan
     ? vents.map((vent) => (vent.kind === "powered-gable" || vent.mounting === "gable" ? { ...vent, sealedToOpening: true } : vent))
     : vents;

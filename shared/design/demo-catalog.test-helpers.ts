@@ -23,6 +23,7 @@ export const DEMO_IDS = {
   deckCut: id(13),
   labor: id(14),
   retiredStatic: id(15),
+  bathFanDuct: id(16),
 } as const;
 
 const item = (fields: Partial<CatalogItem> & Pick<CatalogItem, "id" | "sku" | "name" | "kind" | "unit" | "sellPriceCents">): CatalogItem => ({
@@ -53,6 +54,7 @@ export function demoCatalog(): CatalogItem[] {
     item({ id: DEMO_IDS.disconnect, sku: "DISC", name: "Disconnect a fan circuit (licensed electrician)", kind: "electrical-disconnect", unit: "each", sellPriceCents: 15_000 }),
     item({ id: DEMO_IDS.deckCut, sku: "CUT", name: "Cut the ridge slot in the roof deck", kind: "deck-cut", unit: "linear-ft", sellPriceCents: 200, laborMinutesPerUnit: 2 }),
     item({ id: DEMO_IDS.labor, sku: "LAB", name: "Installation labour", kind: "labor", unit: "hour", sellPriceCents: 9_500 }),
+    item({ id: DEMO_IDS.bathFanDuct, sku: "BATH-DUCT", name: "Duct a bath fan to a roof cap", kind: "bath-fan-duct", unit: "each", sellPriceCents: 28_500, laborMinutesPerUnit: 90 }),
     item({ id: DEMO_IDS.retiredStatic, sku: "OLD-SRV", name: "Static roof vent (discontinued)", kind: "box", unit: "each", nfaSqInPerUnit: 60, sellPriceCents: 1_000, isActive: false }),
   ];
 }

@@ -95,6 +95,29 @@ describe("generateOptions on varied attics (IRC 2018, zone 4)", () => {
   });
 });
 
+describe("generateOptions: a bath fan that blows into the attic", () => {
+  const withBathFan = (): SpaceSurvey => ({ ...smallRanch(), site: { ...smallRanch().site, bathFanIntoAttic: true } });
+
+  it("when the survey found a bath fan ducted into the attic, then every option ducts it to a roof or wall cap as a line item with its reason, and the finding is gone after", () => {
+    const result = run(withBathFan());
+    expect(result.options.length).toBeGreaterThan(0);
+    for (const o of result.options) {
+      const duct = o.option.spaces[0]!.added.find((a) => a.catalogItemId === DEMO_IDS.bathFanDuct);
+      expect(duct, o.type).toMatchObject({ quantity: 1 });
+      expect(o.option.spaces[0]!.siteFixes.ductsBathFan, o.type).toBe(true);
+      expect(o.option.rationale.join(" "), o.type).toMatch(/roof or wall cap/);
+      expect(o.analysis.findings.map((f) => f.code), o.type).not.toContain("bath-fan-into-attic");
+    }
+  });
+
+  it("when the catalog has no bath-fan duct item, then the reason says to price that work by hand, in words, not an internal id", () => {
+    const result = generateOptions({ project: zone4Project, spaceId: SPACE_ID, space: withBathFan(), catalog: catalog.filter((c) => c.kind !== "bath-fan-duct") });
+    const words = result.options[0]!.option.rationale.join(" ");
+    expect(words).toMatch(/no item to duct a bath fan outside; price that work by hand/);
+    expect(words).not.toMatch(/bath-fan-duct/);
+  });
+});
+
 describe("generateOptions: ratio by code basis", () => {
   it("when the 2018 text applies in zone 6 without a Class I/II retarder, then it sizes at 1/150 and says why", () => {
     const project: ProjectBasis = { ...zone4Project, climateZone: 6 };
@@ -161,7 +184,7 @@ describe("generateOptions: edge cases", () => {
   it("when a labour rate is set, then the labour line uses it with hours from the catalog's minutes, rounded up to the quarter hour", () => {
     const result = generateOptions({ project: zone4Project, spaceId: SPACE_ID, space: smallRanch(), catalog, settings: { laborRateCentsPerHour: 10_000 } });
     // ridge option: 12 ft × 3 + 24 ft × 4 + 2 × 60 + 12 ft × 2 = 276 min → 4.75 h (the ridge held to 50 % of the required area)
-    expect(result.options[0]!.option.laborLines).toEqual([{ id: "labor-1", description: "Installation labour (from the catalog's minutes per unit)", hours: 4.75, rateCents: 10_000 }]);
+    expect(result.options[0]!.option.laborLines).toEqual([{ id: "labor-1", description: "Installation labour", hours: 4.75, rateCents: 10_000, hoursBasis: "catalog" }]);
     expect(result.options[0]!.price.laborCents).toBe(47_500);
   });
 });

@@ -27,7 +27,7 @@
  *   compliant proposals with one exhaust type, intake ≥ exhaust and no powered fan are returned.
  */
 import { formatCents, priceOption, DEFAULT_PRICING_SETTINGS, type OptionPrice, type PricingSettings } from "../pricing/index";
-import type { CatalogItem } from "../schemas/catalog";
+import { ACCESSORY_LABELS, type CatalogItem } from "../schemas/catalog";
 import type { AddedItem, DesignOptionInput, OptionSpace, VentAction } from "../schemas/options";
 import type { SpaceSurvey } from "../schemas/survey";
 import { toAtticInput, type ProjectBasis } from "../survey/to-attic-input";
@@ -524,7 +524,7 @@ function designAt(ctx: Context, plan: Plan, ratio: Ratio): Design | { failure: s
     if (quantity <= 0) return;
     const item = pickWorkItem(catalog, kind, ["each"]);
     if (!item) {
-      rationale.push(`${what}: ${fmt(quantity)}; the catalog has no ${kind} item, so price that work by hand.`);
+      rationale.push(`${what}: ${fmt(quantity)}; the catalog has no item to ${ACCESSORY_LABELS[kind as keyof typeof ACCESSORY_LABELS] ?? "do this"}, so price that work by hand.`);
       return;
     }
     added.push({ id: ids.next(), catalogItemId: item.id, quantity, note });
@@ -588,10 +588,24 @@ function designAt(ctx: Context, plan: Plan, ratio: Ratio): Design | { failure: s
     }
   }
 
-  return {
-    optionSpace: { spaceId, ventActions, added, siteFixes: clearsBlockedSoffits ? { clearsBlockedSoffits: true } : {} },
-    rationale,
-  };
+  // A bath fan dumping shower steam into the attic wets the roof deck whatever the vents do.
+  let ductsBathFan = false;
+  if (site.bathFanIntoAttic === true) {
+    ductsBathFan = true;
+    const reason = "A bath fan blows damp air into the attic: it is ducted to a roof or wall cap so the moisture leaves the house (IRC M1501.1: exhaust air goes outdoors, never into an attic; section from memory, check the edition in force).";
+    const duct = pickWorkItem(catalog, "bath-fan-duct", ["each"]);
+    if (duct) {
+      added.push({ id: ids.next(), catalogItemId: duct.id, quantity: 1, note: "Duct the bath fan to a roof or wall cap." });
+      rationale.push(`${reason} 1 × ${duct.name}.`);
+    } else {
+      rationale.push(`${reason} The catalog has no item to duct a bath fan outside; price that work by hand.`);
+    }
+  }
+
+  const siteFixes: OptionSpace["siteFixes"] = {};
+  if (clearsBlockedSoffits) siteFixes.clearsBlockedSoffits = true;
+  if (ductsBathFan) siteFixes.ductsBathFan = true;
+  return { optionSpace: { spaceId, ventActions, added, siteFixes }, rationale };
 }
 
 /* ---------- checks, labour, price ---------- */
@@ -625,7 +639,7 @@ function laborLine(ctx: Context, added: readonly AddedItem[], rationale: string[
     return [];
   }
   rationale.push(`Labour from the catalog's minutes per unit: ${fmt(minutes)} min → ${fmt(hours)} h, rounded up to the quarter hour (common practice), at ${source(rate)}.`);
-  return [{ id: "labor-1", description: "Installation labour (from the catalog's minutes per unit)", hours, rateCents: rate.rateCents }];
+  return [{ id: "labor-1", description: "Installation labour", hours, rateCents: rate.rateCents, hoursBasis: "catalog" }];
 }
 const source = (rate: { rateCents: number; source: string }) => `${formatCents(rate.rateCents)} per hour, ${rate.source}`;
 
@@ -702,7 +716,7 @@ function propose(ctx: Context, plan: Plan): GeneratedOption | { failure: string 
 export function generateOptions(input: GenerateOptionsInput): GenerateOptionsResult {
   const tried = tryAnalyzeAttic(toAtticInput(input.project, input.space));
   if (!tried.ok) {
-    const reason = `The survey can't be analysed yet: ${tried.issues.map((i) => `${i.path || "attic"}: ${i.message}`).join("; ")}`;
+    const reason = `The survey can't be analysed yet: ${tried.issues.map((i) => i.message).join("; ")}`;
     return { baseline: null, options: [], skipped: OPTION_TYPES.map((type) => ({ type, reason: clip(reason) })) };
   }
   if (tried.analysis.assembly === "unvented") {

@@ -16,3 +16,4 @@ export type { RoofConstraints, LengthEstimate } from "./roof-constraints";
 export { sizeVentItem } from "./size-vent-item";
 export type { SizeResult, VentRoom } from "./size-vent-item";
 export { pickVentItem, pickWorkItem } from "./pick-catalog-item";
+export { catalogLaborHours, withCatalogLabor } from "./catalog-labor";

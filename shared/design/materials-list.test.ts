@@ -50,7 +50,7 @@ describe("materialsList", () => {
     expect(work).toContain("Remove powered gable fan: have a licensed electrician disconnect and make safe the circuit, seal the opening from inside.");
     expect(work).toContain("Remove gable louver: seal the opening from inside.");
     expect(list.work.find((w) => w.description.includes("powered gable fan"))?.caution).toContain("confirm the circuit is dead with a voltage tester");
-    expect(work.at(-1)).toBe("Installation labour (from the catalog's minutes per unit): 1.5 h.");
+    expect(work.at(-1)).toBe("Installation labour: 1.5 h.");
     expect(list.items.map((i) => [i.sku, i.buyCount])).toEqual([["SEAL-G", 2], ["DISC", 1]]);
   });
 

@@ -5,7 +5,6 @@
  * 16 CFR 429.1, whose wording is prescribed), and the safety cautions of DESIGN.md §7.
  * A change to the consent text must bump its version: acceptances record the version signed.
  */
-import { ATTIC_SAFETY_CAUTION, COMBUSTION_SAFETY_CAUTION, FAN_SAFETY_CAUTION, ROOF_SAFETY_CAUTION } from "../diagnostics/cautions";
 import { isLegalPublicHoliday } from "./legal-holidays";
 
 export const ESIGN_CONSENT_VERSION = "esign-2026-12-01";
@@ -54,13 +53,24 @@ export function thirdBusinessDayAfter(isoDate: string): string {
 }
 
 /**
- * The cautions for the work a proposal describes: attic and roof work always; fan and wiring
- * whenever a fan is there, removed or added; the backdraft caution whenever the existing attic
- * or any option includes a powered fan.
+ * The cautions a proposal gives the homeowner (DESIGN.md §7), in their words: how the crew works
+ * safely, who does the electrical work, and the backdraft danger of a powered fan, whenever the
+ * attic has one now or any option includes one. The technician's step-by-step instructions
+ * (cautions.ts) belong to the survey and the crew's sheet, not to the homeowner's copy.
  */
+export const HOMEOWNER_WORK_CAUTION =
+  "Our crew works in your attic and on your roof with fall protection and the usual precautions for attic heat and insulation dust. Please keep children and pets away from the work area while we are there.";
+export const HOMEOWNER_FAN_WIRING_CAUTION =
+  "Any work on an attic fan's wiring is done by a licensed electrician, with the circuit switched off at the breaker and confirmed dead with a voltage tester first.";
+export const HOMEOWNER_BACKDRAFT_CAUTION =
+  "A powered attic fan can pull air out of the house through gaps in the ceiling and make a natural-draft gas water heater, furnace or boiler spill its exhaust, including carbon monoxide, into your home. " +
+  "Where a fan stays or is added, a qualified technician should run a combustion safety test with the fan running and the ceiling's air leaks should be sealed; keep working carbon monoxide alarms on every floor.";
+export const HOMEOWNER_CODES_NOTE =
+  "All work follows the manufacturers' instructions, the local building code and the authority having jurisdiction; electrical work is done by a licensed electrician.";
+
 export function proposalCautions(opts: { hasPoweredFanNow: boolean; hasPoweredFanInAnyOption: boolean }): string[] {
-  const cautions = [ATTIC_SAFETY_CAUTION, ROOF_SAFETY_CAUTION];
-  if (opts.hasPoweredFanNow || opts.hasPoweredFanInAnyOption) cautions.push(FAN_SAFETY_CAUTION, COMBUSTION_SAFETY_CAUTION);
-  cautions.push("All work follows the manufacturers' instructions, the local building code and the authority having jurisdiction; electrical work is done by a licensed electrician.");
+  const cautions = [HOMEOWNER_WORK_CAUTION];
+  if (opts.hasPoweredFanNow || opts.hasPoweredFanInAnyOption) cautions.push(HOMEOWNER_FAN_WIRING_CAUTION, HOMEOWNER_BACKDRAFT_CAUTION);
+  cautions.push(HOMEOWNER_CODES_NOTE);
   return cautions;
 }

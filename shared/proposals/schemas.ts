@@ -3,7 +3,7 @@
  * homeowner's answers: shared by the client's forms and the server's validation.
  */
 import { z } from "zod";
-import { UpperShareBaseSchema } from "../ventilation/schema";
+import { CodeBasisSchema, UpperShareBaseSchema } from "../ventilation/schema";
 import { versionField } from "../schemas/input-safety.ts";
 import { EstimateConditionsSchema } from "../airflow-model/schema";
 
@@ -58,6 +58,10 @@ export const CompanyProfilePatchSchema = z.object({
   upperShareBase: UpperShareBaseSchema,
   /** Summer and winter conditions for the airflow estimates shown in surveys, options and proposals. */
   estimateConditions: EstimateConditionsSchema,
+  /** New projects start with these unless the estimator picks others. */
+  defaultCodeBasis: CodeBasisSchema,
+  defaultClimateZone: z.number({ error: "The climate zone is a number 1–8." }).int("The climate zone is a whole number 1–8.").min(1, "The climate zone is 1–8.").max(8, "The climate zone is 1–8."),
+  unitSystem: z.enum(["imperial", "metric"], { error: "Choose feet and inches or metric." }),
 }).partial().strict();
 export type CompanyProfilePatch = z.infer<typeof CompanyProfilePatchSchema>;
 
@@ -101,6 +105,12 @@ export const AcceptSchema = z.object({
   }).strict(),
 }).strict();
 export type AcceptInput = z.infer<typeof AcceptSchema>;
+
+/** Sending: sales may give or correct the homeowner's e-mail address here; it is saved on the customer too. */
+export const SendSchema = z.object({
+  recipientEmail: z.string({ error: "The e-mail address must be text." }).trim().max(254, "The e-mail address is at most 254 characters.").email("That does not look like an e-mail address.").optional(),
+}).strict();
+export type SendInput = z.infer<typeof SendSchema>;
 
 export const DeclineSchema = z.object({ reason: optionalText("The reason", 2_000) }).strict();
 

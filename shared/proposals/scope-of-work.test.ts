@@ -26,7 +26,7 @@ describe("scopeOfWork", () => {
     expect(lines).toEqual(["Add 12 round soffit vents (4 in) to the soffits, spaced evenly along the eaves."]);
   });
 
-  it("when box vents are removed and openings patched, fixes and labour lines are included, then each is a sentence", () => {
+  it("when box vents are removed and a patch item closes the openings, fixes and labour lines are included, then each is a sentence and the patching is said once", () => {
     const lines = scopeOfWork(
       [space],
       [plan({ ventActions: { "box-1": "remove" }, siteFixes: { clearsBlockedSoffits: true }, added: [{ id: "p", catalogItemId: DEMO_IDS.patch, quantity: 4 }, { id: "l", catalogItemId: DEMO_IDS.labor, quantity: 3 }] })],
@@ -34,11 +34,21 @@ describe("scopeOfWork", () => {
       [{ description: "Haul away the old vents " }],
     );
     expect(lines).toEqual([
-      "Remove the 4 existing box (static) vents and patch each opening with roof decking and matching shingles.",
+      "Remove the 4 existing box (static) vents.",
       "Clear the insulation that blocks the soffit vents and fit a baffle in each rafter bay to keep it clear.",
       "Patch 4 old vent openings with roof decking and matching shingles.",
       "Haul away the old vents.",
     ]);
+  });
+
+  it("when a gable fan is removed and a seal item closes the opening, then closing it is said once", () => {
+    const lines = scopeOfWork([space], [plan({ ventActions: { "fan-1": "remove" }, added: [{ id: "s", catalogItemId: DEMO_IDS.sealGable, quantity: 1 }] })], catalog, []);
+    expect(lines).toEqual(["Remove the gable-mounted fan.", "Seal the gable opening from inside the attic."]);
+  });
+
+  it("when the catalog's installation labour is a line, then it is priced but not listed as work", () => {
+    const lines = scopeOfWork([space], [plan({})], catalog, [{ description: "Installation labour", hoursBasis: "catalog" }, { description: "Haul away the old fan", hoursBasis: "entered" }]);
+    expect(lines).toEqual(["Haul away the old fan."]);
   });
 
   it("when an option covers two spaces, then each sentence names its space", () => {

@@ -82,6 +82,8 @@ function describeAdded(item: CatalogItem, quantity: number): string | null {
       return quantity === 1 ? "Seal the gable opening from inside the attic." : `Seal ${q} gable openings from inside the attic.`;
     case "electrical-disconnect":
       return quantity === 1 ? "Have a licensed electrician disconnect the fan circuit and make it safe." : `Have a licensed electrician disconnect ${q} fan circuits and make them safe.`;
+    case "bath-fan-duct":
+      return quantity === 1 ? "Duct the bathroom fan to a roof or wall cap so its damp air leaves the house instead of the attic." : `Duct ${q} bathroom fans to roof or wall caps so their damp air leaves the house instead of the attic.`;
     case "deck-cut":
       return `Cut ${feet(quantity)} of vent slot in the roof deck at the ridge.`;
     case "labor":
@@ -98,20 +100,29 @@ function ventWords(vent: Vent): string {
   return `the existing ${label}`;
 }
 
-function describeRemoved(vent: Vent): string {
+/** What closes the openings is said once: by the removal sentence, or by the patch or seal item when the option adds one. */
+interface Closers {
+  patchesRoof: boolean;
+  sealsGable: boolean;
+}
+
+function describeRemoved(vent: Vent, closers: Closers): string {
   const isGableFan = vent.kind === "powered-gable" || ((vent.kind === "powered-roof" || vent.kind === "solar-powered") && vent.mounting === "gable");
-  if (isGableFan) return "Remove the gable-mounted fan and close the opening from inside the attic.";
-  if (vent.kind === "powered-roof" || vent.kind === "solar-powered") return "Remove the roof-mounted fan and patch the opening with roof decking and matching shingles.";
+  if (isGableFan) return closers.sealsGable ? "Remove the gable-mounted fan." : "Remove the gable-mounted fan and close the opening from inside the attic.";
+  if (vent.kind === "powered-roof" || vent.kind === "solar-powered") {
+    return closers.patchesRoof ? "Remove the roof-mounted fan." : "Remove the roof-mounted fan and patch the opening with roof decking and matching shingles.";
+  }
   switch (vent.kind) {
     case "box":
     case "turbine":
     case "off-ridge":
     case "cupola":
+      if (closers.patchesRoof) return `Remove ${ventWords(vent)}.`;
       return `Remove ${ventWords(vent)} and patch ${(vent.quantity ?? 1) > 1 ? "each opening" : "the opening"} with roof decking and matching shingles.`;
     case "ridge":
       return `Remove ${ventWords(vent)} and close the ridge slot.`;
     case "gable-louver":
-      return `Remove ${ventWords(vent)} and close the opening.`;
+      return closers.sealsGable ? `Remove ${ventWords(vent)}.` : `Remove ${ventWords(vent)} and close the opening.`;
     default:
       return `Remove ${ventWords(vent)} and close the opening.`;
   }
@@ -129,7 +140,7 @@ export function scopeOfWork(
   spaces: readonly ScopeSpace[],
   optionSpaces: readonly OptionSpace[],
   catalog: readonly CatalogItem[],
-  laborLines: readonly Pick<LaborLine, "description">[],
+  laborLines: readonly Pick<LaborLine, "description" | "hoursBasis">[],
 ): string[] {
   const byId = new Map(catalog.map((item) => [item.id, item]));
   const isSeveral = optionSpaces.length > 1;
@@ -138,13 +149,15 @@ export function scopeOfWork(
     const space = spaces.find((s) => s.id === optionSpace.spaceId);
     const prefix = isSeveral && space ? `${space.name}: ` : "";
     const own: string[] = [];
+    const addedKinds = new Set(optionSpace.added.map((a) => byId.get(a.catalogItemId)?.kind));
+    const closers: Closers = { patchesRoof: addedKinds.has("patch-vent-opening"), sealsGable: addedKinds.has("seal-gable-opening") };
     for (const vent of space?.vents ?? []) {
       const action = optionSpace.ventActions[vent.id];
-      if (action === "remove") own.push(describeRemoved(vent));
+      if (action === "remove") own.push(describeRemoved(vent, closers));
       if (action === "replace") {
         const replacement = optionSpace.added.find((a) => a.replacesVentId === vent.id);
         const item = replacement ? byId.get(replacement.catalogItemId) : undefined;
-        own.push(item ? `Take out ${ventWords(vent)} to make way for the new ${productWords(item.name).noun}.` : describeRemoved(vent));
+        own.push(item ? `Take out ${ventWords(vent)} to make way for the new ${productWords(item.name).noun}.` : describeRemoved(vent, closers));
       }
     }
     if (optionSpace.siteFixes.clearsBlockedSoffits) own.push("Clear the insulation that blocks the soffit vents and fit a baffle in each rafter bay to keep it clear.");
@@ -155,9 +168,11 @@ export function scopeOfWork(
       const sentence = describeAdded(item, added.quantity);
       if (sentence) own.push(sentence);
     }
-    lines.push(...own.map((line) => prefix + line));
+    for (const line of own) if (!lines.includes(prefix + line)) lines.push(prefix + line);
   }
   for (const labor of laborLines) {
+    // The catalog's installation labour is the time to do the lines above, not more work.
+    if (labor.hoursBasis === "catalog" || labor.hoursBasis === "overridden") continue;
     const text = labor.description.trim().replace(/[.\s]+$/, "");
     if (text) lines.push(`${text}.`);
   }

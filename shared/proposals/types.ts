@@ -39,6 +39,9 @@ export interface SnapshotFinding {
   severity: Severity;
   /** The homeowner's words for the finding. */
   title: string;
+  /** What it means for the house in one plain sentence (absent in snapshots taken before it existed). */
+  plain?: string | null;
+  /** The core's technical detail: the rule, the inputs and the arithmetic. */
   detail: string;
 }
 

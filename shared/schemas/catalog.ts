@@ -9,10 +9,24 @@ export const ACCESSORY_KINDS = [
   "seal-gable-opening",
   "electrical-disconnect",
   "insulation-clearing",
+  "bath-fan-duct",
   "labor",
   "other",
 ] as const;
 export const CATALOG_KINDS = [...VENT_KINDS, ...ACCESSORY_KINDS] as const;
+
+/** Accessories in words, for anything people read (the generator's reasons, the catalog page). */
+export const ACCESSORY_LABELS: Record<(typeof ACCESSORY_KINDS)[number], string> = {
+  baffle: "insulation baffle",
+  "deck-cut": "roof deck cut",
+  "patch-vent-opening": "patch a removed vent",
+  "seal-gable-opening": "seal a gable opening",
+  "electrical-disconnect": "electrical disconnect",
+  "insulation-clearing": "clear insulation",
+  "bath-fan-duct": "duct a bath fan outside",
+  labor: "labour",
+  other: "other",
+};
 export type CatalogKind = (typeof CATALOG_KINDS)[number];
 
 export const CATALOG_UNITS = ["each", "linear-ft", "hour"] as const;

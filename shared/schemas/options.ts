@@ -29,7 +29,7 @@ export const OptionSpaceSchema = z.object({
   ventActions: z.record(z.string().max(100), z.enum(VENT_ACTIONS)).default({}),
   added: z.array(AddedItemSchema).max(40, "At most 40 added items per space.").default([]),
   /** Site fixes the option includes, e.g. clearing blocked soffits, sealing a gable fan opening. */
-  siteFixes: z.object({ clearsBlockedSoffits: z.boolean().optional(), sealsGableFan: z.boolean().optional() }).default({}),
+  siteFixes: z.object({ clearsBlockedSoffits: z.boolean().optional(), sealsGableFan: z.boolean().optional(), ductsBathFan: z.boolean().optional() }).default({}),
 });
 
 export const LaborLineSchema = z.object({
@@ -37,6 +37,12 @@ export const LaborLineSchema = z.object({
   description: z.string().trim().min(1, "Describe the work.").max(300),
   hours: z.number().positive().max(1_000),
   rateCents: z.number().int().min(0).max(10_000_000),
+  /**
+   * Where the hours come from: typed by a person ("entered", the default), the catalog's minutes
+   * per unit of what the option adds ("catalog", kept in step with the quantities), or the
+   * catalog's line with hours a person typed over ("overridden").
+   */
+  hoursBasis: z.enum(["entered", "catalog", "overridden"]).optional(),
 });
 
 export const AdjustmentSchema = z.discriminatedUnion("kind", [

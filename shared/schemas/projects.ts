@@ -15,6 +15,16 @@ export const CustomerInputSchema = z.object({
 }).strict();
 export const CustomerPatchSchema = CustomerInputSchema.partial().strict();
 
+/** The code editions in words, for every place a person picks one (projects, the company's default). */
+export const CODE_BASIS_LABELS: Record<z.infer<typeof CodeBasisSchema>, string> = {
+  "irc-2024": "IRC 2024 (same vent rule as 2018)",
+  "irc-2021": "IRC 2021 (same vent rule as 2018)",
+  "irc-2018": "IRC 2018 text",
+  "irc-2012": "IRC 2012 or 2015 text",
+  "irc-2009": "IRC 2009 text",
+  "strict-150": "Strict 1/150, no exceptions",
+};
+
 export const PROJECT_STATUSES = ["lead", "surveyed", "proposed", "sold", "lost", "completed"] as const;
 export const ProjectStatusSchema = z.enum(PROJECT_STATUSES, { error: "Choose a status." });
 export const MoistureRegimeSchema = z.enum(["A", "B", "C"], { error: "Moisture regime is A (moist), B (dry) or C (marine)." });
@@ -41,6 +51,7 @@ export const ProjectInputSchema = z
     estimatorId: projectFields.estimatorId.optional(),
     moistureRegime: projectFields.moistureRegime.optional(),
     codeBasis: CodeBasisSchema.optional(), // the company default when omitted
+    climateZone: projectFields.climateZone.optional(), // the company default when omitted
     ceilingVaporRetarder: VaporRetarderSchema.default("none"),
     roofColor: RoofColorSchema.default("medium"),
   })

@@ -11,6 +11,8 @@ export const PERMISSIONS = {
   "catalog:edit": ["owner"],
   "customers:read": ["owner", "estimator", "sales"],
   "customers:edit": ["owner", "estimator"],
+  /** Correct a customer's name and contact details (sales fix an e-mail address before sending). */
+  "customers:contact": ["owner", "estimator", "sales"],
   "projects:read": ["owner", "estimator", "sales"],
   "projects:edit": ["owner", "estimator"],
   "options:edit": ["owner", "estimator", "sales"],

@@ -294,7 +294,7 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
         title: "Risk of backdrafting a gas appliance",
         detail:
           "This house has a natural-draft (atmospheric) combustion appliance and a powered attic fan. " + COMBUSTION_SAFETY_CAUTION +
-          " Until then, consider switching the fan off; passive ventilation avoids the risk.",
+          " Until a combustion safety test has passed, consider switching the fan off; passive ventilation avoids the risk.",
         ventIds: ids(powered),
         caution: COMBUSTION_SAFETY_CAUTION,
       });

@@ -36,12 +36,18 @@ describe("customers", () => {
     expect(kept.body.customer.projectCount).toBe(1);
   });
 
-  it("when sales tries to create, edit or delete a customer, then it is refused with 403 (sales may only read)", async () => {
-    const customer = await createCustomer(team.asOwner, { name: "Sales Cannot Edit" });
+  it("when sales tries to create or delete a customer, then it is refused with 403", async () => {
+    const customer = await createCustomer(team.asOwner, { name: "Sales Cannot Delete" });
     expect((await send(team.asSales, "post", "/api/customers", { name: "X" })).status).toBe(403);
-    expect((await send(team.asSales, "patch", `/api/customers/${customer.id}`, { name: "X" })).status).toBe(403);
     expect((await send(team.asSales, "delete", `/api/customers/${customer.id}`)).status).toBe(403);
     await team.asSales.get("/api/customers").expect(200);
+  });
+
+  it("when sales corrects a customer's contact details, then they are saved (sales fix an e-mail address before sending)", async () => {
+    const customer = await createCustomer(team.asOwner, { name: "Sales Can Correct" });
+    const res = await send(team.asSales, "patch", `/api/customers/${customer.id}`, { email: "corrected@homeowner.example", phone: "(555) 014-0000" });
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    expect(res.body.customer).toMatchObject({ email: "corrected@homeowner.example", phone: "(555) 014-0000" });
   });
 
   it("when not signed in, then the customer routes answer 401", async () => {

@@ -230,7 +230,9 @@ describe("proposals: draft, render, send, the homeowner's link, acceptance", () 
     expect(text).toContain("1,440 sq in");
     expect(text).toMatch(/natural-draft gas water heater/);
     expect(text).toMatch(/fall\s+protection/);
-    expect(text).toMatch(/voltage\s+tester/);
+    expect(text).toMatch(/licensed\s+electrician/);
+    // The homeowner's copy carries no technician's instructions (those are on the survey and the crew's sheet).
+    expect(text).not.toMatch(/bring\s+water|work\s+early\s+in\s+the\s+day/);
     expect(text).toContain("NOTICE OF CANCELLATION");
     expect(text).toContain("Signed electronically when sent");
     expect(text).toContain("Remove the gable-mounted fan and close the opening");

@@ -123,6 +123,7 @@ describe("axe-core on the homeowner's proposal page (Chromium)", () => {
     const { context, page } = await newPage(browser, { width: 390, height: 844 });
     try {
       await page.goto(link);
+      await page.getByRole("button", { name: "Choose option 1" }).click();
       await page.getByRole("radio", { name: /Option 1: Balanced intake/ }).waitFor();
       await settle(page);
       expect(await seriousViolations(page)).toEqual([]);

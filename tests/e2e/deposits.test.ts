@@ -65,7 +65,8 @@ describe("the deposit after signing", () => {
       try {
         const hp = home.page;
         await hp.goto(link);
-        await hp.getByRole("radio", { name: new RegExp(`Option 1: ${optionName}`) }).check();
+        await hp.getByRole("button", { name: "Choose option 1" }).click();
+        expect(await hp.getByRole("radio", { name: new RegExp(`Option 1: ${optionName}`) }).isChecked()).toBe(true);
         await hp.getByLabel("2. Your full name").fill("Silas Brennock");
         await hp.getByRole("radio", { name: /Type it/ }).check();
         await hp.getByLabel("Type your name to sign").fill("Silas Brennock");

@@ -307,8 +307,14 @@ describe("the homeowner's acceptance with the keyboard alone", () => {
     await page.goto(homeownerPath);
     await page.getByRole("heading", { name: "Your 2 options" }).waitFor();
 
+    // The options side by side come first: Enter on "Choose option 1" opens the form and moves focus to it.
+    const choose = await tabTo(page, /^Choose option 1$/, { role: "button", maxTabs: 30 });
+    expectFocusRing(choose);
+    await page.keyboard.press("Enter");
+    await expect.poll(() => page.evaluate(() => document.activeElement?.id)).toBe("accept-title");
+
     // The option radios are one Tab stop; the down arrow moves to, and chooses, option 2.
-    const first = await tabTo(page, /^Option 1: /, { role: "radio", maxTabs: 60 });
+    const first = await tabTo(page, /^Option 1: /, { role: "radio", maxTabs: 5 });
     expectFocusRing(first);
     await page.keyboard.press("ArrowDown");
     await expectFocusOn(page, new RegExp(`^Option 2: ${OPTIONS[1]}`), "radio");

@@ -329,6 +329,9 @@ describe("markup in every field of a job, from the survey to the signed PDF", ()
     const { customer } = await api<{ customer: { firstName: string } }>(homeowner.context.request, "get", `/api/public/proposals/${job.declined.token}`);
     expect(customer.firstName.startsWith("<script>")).toBe(true);
     await hp.goto(`/p/${job.declined.token}`);
+    // The details are folded away on the page: open them all, and open the accept form with "Choose option 1".
+    await hp.getByRole("button", { name: "Choose option 1" }).click();
+    await hp.locator("details").evaluateAll((all) => all.forEach((d) => ((d as HTMLDetailsElement).open = true)));
     await expectShownAsText(hp, [
       V.company, V.companyAddress, `Licence ${V.licence}`, V.phone, `Hello ${customer.firstName},`, V.siteAddress, V.ownerName,
       V.coverNote, V.option, V.scope, V.optionNotes, V.terms, V.caption, `the ridge vent "${V.ridgeLabel}"`,

@@ -23,7 +23,7 @@ export function customersRouter(service: CustomersService) {
       handler: async (req, res) => { res.json({ customer: await service.get(actorOf(req), customerId(req)) }); },
     },
     {
-      method: "patch", path: "/customers/:id", access: "customers:edit", idParams: ["id"],
+      method: "patch", path: "/customers/:id", access: "customers:contact", idParams: ["id"],
       handler: async (req, res) => {
         const id = customerId(req);
         res.json({ customer: await service.update(actorOf(req), id, parse(CustomerPatchSchema, req.body)) });

@@ -3,7 +3,7 @@ import type { Actor } from "../../lib/request-context.ts";
 import { OptionSpaceSchema, type DesignOptionInput, type OptionSpace } from "../../../shared/schemas/options.ts";
 import type { CatalogItem } from "../../../shared/schemas/catalog.ts";
 import type { SpaceSurvey } from "../../../shared/schemas/survey.ts";
-import { applyOption, DesignError, generateOptions, materialsList, type MaterialsList, type OptionType } from "../../../shared/design/index.ts";
+import { applyOption, DesignError, generateOptions, materialsList, withCatalogLabor, type MaterialsList, type OptionType } from "../../../shared/design/index.ts";
 import { priceOption, PricingError, NO_DEPOSIT, type OptionPrice, type PricingSettings } from "../../../shared/pricing/index.ts";
 import { analyzeSpace, type SpaceAnalysis } from "../projects/projects.service.ts";
 import type { ProjectRow, ProjectsRepository } from "../projects/projects.repository.ts";
@@ -193,7 +193,7 @@ export function createOptionsService(deps: { repo: OptionsRepository; projects: 
     async create(actor: Actor, projectId: string, input: DesignOptionInput): Promise<PresentedOption> {
       const ctx = await contextFor(actor, await requireProject(actor, projectId));
       checkReferences(ctx, input.spaces);
-      return { ...presentOption(await repo.insert(actor, projectId, input), ctx), lock: null };
+      return { ...presentOption(await repo.insert(actor, projectId, withCatalogLabor(input, ctx.catalog)), ctx), lock: null };
     },
 
     /** A new draft with the same content: how an offered or signed option is reworked without touching it. */
@@ -215,7 +215,10 @@ export function createOptionsService(deps: { repo: OptionsRepository; projects: 
       if (lock) throw lockedError(lock);
       const ctx = await contextFor(actor, project);
       if (patch.spaces) checkReferences(ctx, patch.spaces, current);
-      const updated = await repo.updateIfVersion(actor, id, version, patch);
+      // Catalog labour follows the quantities, whichever of the two this patch changes.
+      const synced = withCatalogLabor({ spaces: patch.spaces ?? current.spaces, laborLines: patch.laborLines ?? current.laborLines }, ctx.catalog);
+      const laborChanged = JSON.stringify(synced.laborLines) !== JSON.stringify(patch.laborLines ?? current.laborLines);
+      const updated = await repo.updateIfVersion(actor, id, version, laborChanged || patch.laborLines ? { ...patch, laborLines: synced.laborLines } : patch);
       if (updated) return { ...presentOption(updated, ctx), lock: null };
       // Accepted meanwhile, or saved by someone else.
       const accepted = await repo.acceptedRevisions(actor, project.id);

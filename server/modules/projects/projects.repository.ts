@@ -110,10 +110,12 @@ export function createProjectsRepository(db: Database) {
     },
 
     /** The company's own row: the tenant itself, looked up by the actor's company. */
-    async defaultCodeBasis(actor: Actor): Promise<CodeBasis> {
-      const [row] = await db.select({ codeBasis: companies.defaultCodeBasis }).from(companies).where(eq(companies.id, actor.companyId)).limit(1);
+    /** What a new project starts with when the estimator leaves it: the company profile's code edition and climate zone. */
+    async projectDefaults(actor: Actor): Promise<{ codeBasis: CodeBasis; climateZone: number }> {
+      const [row] = await db.select({ codeBasis: companies.defaultCodeBasis, settings: companies.settings }).from(companies).where(eq(companies.id, actor.companyId)).limit(1);
       const parsed = CodeBasisSchema.safeParse(row?.codeBasis);
-      return parsed.success ? parsed.data : "irc-2018";
+      const zone = (row?.settings as { defaultClimateZone?: unknown } | undefined)?.defaultClimateZone;
+      return { codeBasis: parsed.success ? parsed.data : "irc-2018", climateZone: typeof zone === "number" && zone >= 1 && zone <= 8 ? zone : 4 };
     },
   };
 }

@@ -65,9 +65,11 @@ export function createProjectsService(deps: { repo: ProjectsRepository; spaces: 
 
     async create(actor: Actor, input: ProjectInput, meta: RequestMeta): Promise<ProjectRow> {
       await checkReferences(actor, input);
+      const defaults = input.codeBasis && input.climateZone ? null : await repo.projectDefaults(actor);
       const project = await repo.insert(actor, {
         ...input,
-        codeBasis: input.codeBasis ?? (await repo.defaultCodeBasis(actor)),
+        codeBasis: input.codeBasis ?? defaults!.codeBasis,
+        climateZone: input.climateZone ?? defaults!.climateZone,
         estimatorId: input.estimatorId ?? null,
         moistureRegime: input.moistureRegime ?? null,
         notes: input.notes ?? null,

@@ -12,15 +12,21 @@ export const MAX_LOGO_BYTES = 2 * 1024 * 1024;
 
 type CompanyRow = NonNullable<Awaited<ReturnType<ProposalsRepository["company"]>>>;
 
+/** On unless the owner turned it off: sales made at the home need the notice (FTC Cooling-Off Rule, 16 CFR 429.1). */
+export const isCoolingOffNoticeOn = (settings: CompanySettings) => settings.isCoolingOffNoticeEnabled ?? true;
+
 /** The company profile as settings shows it and proposals print it. */
 export function presentCompany(c: CompanyRow) {
   const settings = c.settings as CompanySettings;
   return {
     id: c.id, name: c.name, licenseNumber: c.licenseNumber, addressLine: c.addressLine, phone: c.phone, email: c.email,
     defaultTerms: c.defaultTerms, taxRateBasisPoints: c.taxRateBasisPoints, depositRule: c.depositRule ?? null,
-    isCoolingOffNoticeEnabled: settings.isCoolingOffNoticeEnabled ?? false,
+    isCoolingOffNoticeEnabled: isCoolingOffNoticeOn(settings),
     reminderDays: settings.reminderDays ?? null,
     upperShareBase: settings.upperShareBase ?? "required",
+    defaultCodeBasis: c.defaultCodeBasis ?? "irc-2018",
+    defaultClimateZone: settings.defaultClimateZone ?? 4,
+    unitSystem: settings.unitSystem ?? "imperial",
     logo: settings.logoStorageKey ? { contentType: settings.logoContentType, sha256: settings.logoSha256, url: "/api/company/logo" } : null,
     estimateConditions: estimateConditionsOf(settings),
   };
@@ -50,12 +56,14 @@ export function createCompanyService(deps: { repo: ProposalsRepository; storage:
 
     async update(actor: Actor, patch: CompanyProfilePatch) {
       const c = await current(actor);
-      const { isCoolingOffNoticeEnabled, reminderDays, upperShareBase, estimateConditions, ...columns } = patch;
+      const { isCoolingOffNoticeEnabled, reminderDays, upperShareBase, estimateConditions, defaultClimateZone, unitSystem, ...columns } = patch;
       const settings: CompanySettings = { ...(c.settings as CompanySettings) };
       if (isCoolingOffNoticeEnabled !== undefined) settings.isCoolingOffNoticeEnabled = isCoolingOffNoticeEnabled;
       if (reminderDays !== undefined) settings.reminderDays = reminderDays;
       if (upperShareBase !== undefined) settings.upperShareBase = upperShareBase;
       if (estimateConditions !== undefined) settings.estimateConditions = estimateConditions;
+      if (defaultClimateZone !== undefined) settings.defaultClimateZone = defaultClimateZone;
+      if (unitSystem !== undefined) settings.unitSystem = unitSystem;
       const updated = await repo.updateCompany(actor, { ...columns, settings: settings as Record<string, unknown> });
       return presentCompany(updated!);
     },

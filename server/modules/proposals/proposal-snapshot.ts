@@ -4,7 +4,7 @@ import { describeConditions, ESTIMATE_DISCLAIMER, estimateAirflow, type AirflowE
 import { applyOption, DesignError } from "../../../shared/design/apply-option.ts";
 import { priceOption, PricingError, type PricingSettings } from "../../../shared/pricing/index.ts";
 import { coolingOffNotice, esignDisclosure, ESIGN_CONSENT_VERSION, proposalCautions } from "../../../shared/proposals/disclosures.ts";
-import { toHomeownerFinding } from "../../../shared/proposals/homeowner-words.ts";
+import { homeownerNotes, toHomeownerFinding } from "../../../shared/proposals/homeowner-words.ts";
 import type { ProposalSnapshot, ScopeText, SignatureImage, SnapshotAirflow, SnapshotAnalysis, SnapshotOption, SnapshotSpace } from "../../../shared/proposals/types.ts";
 import { OptionSpaceSchema, type OptionSpace } from "../../../shared/schemas/options.ts";
 import type { CatalogItem } from "../../../shared/schemas/catalog.ts";
@@ -111,7 +111,7 @@ function optionView(input: SnapshotInput, option: OptionRow): SnapshotOption {
   const byId = new Map(input.catalog.map((c) => [c.id, c]));
   const addsFan = option.spaces.some((s) => s.added.some((a) => isPoweredKind((byId.get(a.catalogItemId)?.kind ?? "other") as never)));
   return {
-    id: option.id, name: option.name, notes: option.notes,
+    id: option.id, name: option.name, notes: homeownerNotes(option.notes),
     scope: input.proposal.scopes[option.id]?.lines ?? [],
     materials, price, after,
     hasPoweredFan: addsFan || after.some((s) => s.analysis?.hasPoweredFan),
@@ -130,7 +130,7 @@ export function buildSnapshot(input: SnapshotInput): ProposalSnapshot {
   const explanation = [
     `${firstName(input.customer.name)}, we surveyed ${before.length === 1 ? "your attic" : `the ${before.length} attic spaces`} at ${input.project.siteAddress} and measured every vent. An attic needs air to come in low, at the eaves, and leave high, near the ridge; that keeps the roof deck dry in winter and the attic cooler in summer.`,
     ...before.map((s) => `${s.name}: ${s.analysis?.summary ?? "not analysed yet."}`),
-    findingCount ? `Below are the ${findingCount === 1 ? "one thing" : `${findingCount} things`} we found, then ${options.length === 1 ? "the fix we propose" : `${options.length} ways to fix them`}.` : "We found nothing that needs fixing.",
+    findingCount ? `We found ${findingCount === 1 ? "one thing" : `${findingCount} things`} worth knowing about the attic; each is explained in this proposal.` : "We found nothing that needs fixing.",
   ];
   return {
     formatVersion: 1,

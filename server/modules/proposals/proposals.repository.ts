@@ -28,7 +28,10 @@ export type ProposalEventRow = typeof proposalEvents.$inferSelect;
 export type NewProposalEvent = Omit<typeof proposalEvents.$inferInsert, "id" | "at" | "companyId" | "proposalId"> & { at?: Date };
 
 export interface CompanySettings {
+  /** Absent = on: the three-day notice is the law for sales made at the buyer's home (16 CFR 429), where these jobs are sold. */
   isCoolingOffNoticeEnabled?: boolean;
+  defaultClimateZone?: number;
+  unitSystem?: "imperial" | "metric";
   reminderDays?: number | null;
   /** The 1/300 upper-vent share reading; "required" (literal) when absent. */
   upperShareBase?: "required" | "provided";
@@ -65,6 +68,12 @@ export function createProposalsRepository(db: Database) {
       const values = { typed: signature.signatureTyped, drawnPngDataUrl: signature.signatureDataUrl, updatedAt: new Date() };
       await db.insert(userSignatures).values({ userId, companyId: tenant.companyId, ...values })
         .onConflictDoUpdate({ target: userSignatures.userId, set: values, where: eq(userSignatures.companyId, tenant.companyId) });
+    },
+
+    async setCustomerEmail(tenant: Tenant, id: string, email: string) {
+      const [row] = await db.update(customers).set({ email, updatedAt: new Date() }).where(scoped(customers, tenant, eq(customers.id, id)))
+        .returning({ id: customers.id, name: customers.name, email: customers.email, phone: customers.phone });
+      return row ?? null;
     },
 
     async customer(tenant: Tenant, id: string) {

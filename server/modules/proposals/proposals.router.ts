@@ -4,7 +4,7 @@ import { z } from "zod";
 import { parse } from "../../lib/validate.ts";
 import { actorOf, metaOf } from "../../lib/request-context.ts";
 import { idParam, routesRouter } from "../../lib/routes.ts";
-import { CompanyProfilePatchSchema, ProposalCreateSchema, ProposalPatchSchema, SignatureInputSchema } from "../../../shared/proposals/schemas.ts";
+import { CompanyProfilePatchSchema, ProposalCreateSchema, ProposalPatchSchema, SendSchema, SignatureInputSchema } from "../../../shared/proposals/schemas.ts";
 import type { CompanyService } from "./company.service.ts";
 import { MAX_LOGO_BYTES } from "./company.service.ts";
 import type { ProposalsService } from "./proposals.service.ts";
@@ -94,7 +94,10 @@ export function proposalsRouter(service: ProposalsService, company: CompanyServi
     },
     {
       method: "post", path: "/proposals/:id/send", access: "proposals:send", idParams: ["id"],
-      handler: async (req, res) => { res.json(await service.send(actorOf(req), proposalId(req), metaOf(req))); },
+      handler: async (req, res) => {
+        const id = proposalId(req);
+        res.json(await service.send(actorOf(req), id, metaOf(req), parse(SendSchema, req.body ?? {})));
+      },
     },
     {
       method: "post", path: "/proposals/:id/revoke-link", access: "proposals:send", idParams: ["id"],

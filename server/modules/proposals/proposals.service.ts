@@ -6,7 +6,7 @@ import type { Storage } from "../../lib/storage/index.ts";
 import { hashToken, newToken } from "../../lib/tokens.ts";
 import { linkExpiresAt, linkState, validUntilProblem } from "../../../shared/proposals/lifecycle.ts";
 import { scopeOfWork } from "../../../shared/proposals/scope-of-work.ts";
-import type { AcceptInput, ProposalPatch } from "../../../shared/proposals/schemas.ts";
+import type { AcceptInput, ProposalPatch, SendInput } from "../../../shared/proposals/schemas.ts";
 import type { CrewPlan, ProposalSnapshot, ScopeText, SignatureImage } from "../../../shared/proposals/types.ts";
 import { DesignError, materialsList } from "../../../shared/design/index.ts";
 import type { CatalogItem } from "../../../shared/schemas/catalog.ts";
@@ -16,6 +16,7 @@ import type { OptionRow, OptionsRepository } from "../options/options.repository
 import { pricingSettings, surveyOf } from "../options/options.service.ts";
 import type { CatalogRepository } from "../catalog/catalog.repository.ts";
 import { buildSnapshot, sha256Hex, snapshotSha256 } from "./proposal-snapshot.ts";
+import { isCoolingOffNoticeOn } from "./company.service.ts";
 import type { ProposalJobs } from "./proposal-jobs.ts";
 import type { CompanySettings, ProposalRow, ProposalsRepository, Tenant } from "./proposals.repository.ts";
 import { checkedSignaturePng } from "./signature-image.ts";
@@ -126,7 +127,7 @@ export function createProposalsService(deps: {
       company: {
         name: company.name, licenseNumber: company.licenseNumber, addressLine: company.addressLine, phone: company.phone, email: company.email,
         logo: settings.logoStorageKey && settings.logoContentType && settings.logoSha256 ? { storageKey: settings.logoStorageKey, contentType: settings.logoContentType, sha256: settings.logoSha256 } : null,
-        isCoolingOffNoticeEnabled: settings.isCoolingOffNoticeEnabled ?? false,
+        isCoolingOffNoticeEnabled: isCoolingOffNoticeOn(settings),
         estimateConditions: estimateConditionsOf(settings),
       },
       customer, project, spaces, options: chosen, catalog,
@@ -272,7 +273,7 @@ export function createProposalsService(deps: {
     },
 
     /** Signs with the seller's saved signature, freezes the snapshot, makes the link and mails it once. */
-    async send(actor: Actor, id: string, meta: RequestMeta) {
+    async send(actor: Actor, id: string, meta: RequestMeta, input: SendInput = {}) {
       const p = await requireProposal(actor, id);
       if (p.supersededBy) throw new AppError("superseded", "A newer revision of this proposal exists; send that one.", 409, {}, { supersededBy: p.supersededBy });
       if (p.status === "accepted") throw signedLocked();
@@ -286,8 +287,13 @@ export function createProposalsService(deps: {
         throw new AppError("signature-required", "Add your signature to your profile before sending (typed or drawn).", 409);
       }
       const project = await requireProject(actor, p.projectId);
-      const customer = await repo.customer(actor, project.customerId);
-      if (!customer?.email) throw new AppError("customer-email-missing", "The customer has no e-mail address; add one to the customer first.", 400, { customerEmail: "Add the customer's e-mail address." });
+      let customer = await repo.customer(actor, project.customerId);
+      if (customer && input.recipientEmail && input.recipientEmail !== customer.email) {
+        // The address sales typed at sending is the customer's address from now on (one record, no second copy to drift).
+        customer = await repo.setCustomerEmail(actor, customer.id, input.recipientEmail);
+        await repo.addEvent(actor, id, { event: "recipient-changed", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, detail: { to: input.recipientEmail } });
+      }
+      if (!customer?.email) throw new AppError("customer-email-missing", "The customer has no e-mail address: enter it in the send dialog.", 400, { recipientEmail: "Enter the homeowner's e-mail address." });
 
       const snapshot = await snapshotNow(actor, p, { userId: seller.id, name: seller.name, email: seller.email, signature: { typed: seller.signatureTyped, pngDataUrl: seller.signatureDataUrl } });
       const sha = snapshotSha256(snapshot);

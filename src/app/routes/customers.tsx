@@ -6,6 +6,6 @@ import { useSession } from "@/lib/session";
 export function Component() {
   const { user } = useSession();
   return (
-    <CustomersPage canEdit={can(user.role, "customers:edit")} newProjectHref={(id) => paths.app.newProject.getHref(id)} />
+    <CustomersPage canEdit={can(user.role, "customers:edit")} canEditContact={can(user.role, "customers:contact")} newProjectHref={(id) => paths.app.newProject.getHref(id)} />
   );
 }

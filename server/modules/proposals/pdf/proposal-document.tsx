@@ -1,4 +1,7 @@
 import { Document, Image, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
+import type { AirflowPicture } from "../../../../shared/airflow/index.ts";
+import { homeownerFindings, homeownerNotes } from "../../../../shared/proposals/homeowner-words.ts";
+import { optionFixes } from "../../../../shared/proposals/option-fixes.ts";
 import type { ProposalAcceptance, ProposalSnapshot, SnapshotAnalysis, SnapshotOption, SnapshotSpace } from "../../../../shared/proposals/types.ts";
 import { formatCents, formatBasisPoints } from "../../../../shared/pricing/index.ts";
 import { formatNumber } from "../../../../shared/units/format.ts";
@@ -12,6 +15,9 @@ const MUTED = "#5d646d";
 const RULE = "#d5d9de";
 const ACCENT = "#1f5c4a";
 const PAPER_TINT = "#f4f6f5";
+
+/** Letter, 612 pt wide, less 50 pt margins on each side. */
+const CONTENT_WIDTH_PT = 512;
 
 const s = StyleSheet.create({
   page: { paddingTop: 48, paddingBottom: 56, paddingHorizontal: 50, fontFamily: PLEX_FAMILIES as unknown as string, fontSize: 10, color: INK },
@@ -36,7 +42,10 @@ const s = StyleSheet.create({
   figureRow: { flexDirection: "row", justifyContent: "space-between", borderBottomWidth: 0.5, borderBottomColor: RULE, paddingVertical: 3 },
   figureStrong: { fontWeight: 700 },
   priceBox: { borderWidth: 1, borderColor: ACCENT, borderRadius: 3, padding: 10, marginTop: 6, marginBottom: 6 },
-  caption: { fontSize: 8, color: MUTED, lineHeight: "11pt", marginTop: 3 },
+  caption: { fontSize: 8.5, color: INK, lineHeight: "12pt", marginTop: 3 },
+  glance: { borderWidth: 0.75, borderColor: RULE, borderRadius: 3, padding: 8, marginBottom: 6 },
+  note: { fontSize: 8, color: INK, lineHeight: "11pt", marginBottom: 3 },
+  cancelForm: { borderWidth: 0.75, borderColor: INK, borderStyle: "dashed", padding: 8, marginTop: 4 },
   caution: { borderWidth: 0.75, borderColor: "#b4411b", borderRadius: 3, padding: 8, marginBottom: 6, fontSize: 9, lineHeight: "12.5pt" },
   sigRow: { flexDirection: "row", gap: 24, marginTop: 12 },
   sigBox: { flex: 1 },
@@ -100,40 +109,96 @@ function Figures({ analysis }: { analysis: SnapshotAnalysis }) {
   );
 }
 
-function Picture({ space, heading, widthPt = 495 }: { space: SnapshotSpace; heading: string; widthPt?: number }) {
+/**
+ * What each picture prints under it: its captions and the legend entries not already printed
+ * under an earlier picture, so a note or a key is read once in the document.
+ */
+export type PictureNotes = Map<AirflowPicture, { captions: string[]; legend: string[] }>;
+
+export function pictureNotes(pictures: readonly AirflowPicture[]): PictureNotes {
+  const seen = new Set<string>();
+  const notes: PictureNotes = new Map();
+  const firstTime = (text: string) => (seen.has(text) ? false : (seen.add(text), true));
+  for (const picture of pictures) {
+    notes.set(picture, {
+      captions: picture.captions.map((c) => c.text).filter(firstTime),
+      legend: picture.legend.map((l) => l.words).filter(firstTime),
+    });
+  }
+  return notes;
+}
+
+/** As wide as the page allows while at most PICTURE_MAX_HEIGHT_PT tall, so an option's picture, price and figures share one page. */
+const PICTURE_MAX_HEIGHT_PT = 185;
+const pictureWidthPt = (picture: AirflowPicture) => Math.min(CONTENT_WIDTH_PT, (PICTURE_MAX_HEIGHT_PT * picture.viewBox.widthFt) / picture.viewBox.heightFt);
+
+/** The pictures in the order the document prints them. */
+function picturesInOrder(snapshot: ProposalSnapshot): AirflowPicture[] {
+  return [...snapshot.before, ...snapshot.options.flatMap((o) => o.after)].map((s) => s.picture).filter((p): p is AirflowPicture => Boolean(p));
+}
+
+function Picture({ space, heading, notes }: { space: SnapshotSpace; heading: string; notes: PictureNotes }) {
   if (!space.picture) return null;
+  const own = notes.get(space.picture) ?? { captions: [], legend: [] };
   return (
-    // One block: a page never starts with a picture's captions or legend cut off from the picture.
-    <View style={{ marginBottom: 8, width: widthPt }} wrap={false}>
-      <Text style={s.h3}>{heading}</Text>
-      <AirflowSvg picture={space.picture} widthPt={widthPt} />
-      {space.picture.captions.map((c) => (
-        <Text key={c.id} style={s.caption}>{c.text}</Text>
+    // One block, the full width of the page: a page never starts with a picture's notes cut off from it.
+    <View style={{ marginBottom: 6, width: CONTENT_WIDTH_PT }} wrap={false}>
+      <Text style={s.h3} minPresenceAhead={60}>{heading}</Text>
+      <AirflowSvg picture={space.picture} widthPt={pictureWidthPt(space.picture)} />
+      {own.captions.map((c, i) => (
+        <Text key={`c${i}`} style={s.caption}>{c}</Text>
       ))}
-      <Text style={s.caption}>{space.picture.legend.map((l) => l.words).join("  ·  ")}</Text>
+      {own.legend.map((l, i) => (
+        <Text key={`l${i}`} style={s.caption}>{l}</Text>
+      ))}
     </View>
   );
 }
 
-/** Today and after the option, side by side, so the difference is seen at a glance. */
-function BeforeAfter({ before, after, index }: { before: SnapshotSpace | undefined; after: SnapshotSpace; index: number }) {
-  if (!after.picture) return null;
+function groupBySpace<T extends { code: string; space: string }>(findings: readonly T[]): (T & { spaces: string[] })[] {
+  const byCode = new Map<string, T & { spaces: string[] }>();
+  for (const f of findings) {
+    const seen = byCode.get(f.code);
+    if (seen) seen.spaces.push(f.space);
+    else byCode.set(f.code, { ...f, spaces: [f.space] });
+  }
+  return [...byCode.values()];
+}
+
+/** Each line once, in the order first written (a scope edited by hand can repeat one). */
+const unique = (lines: readonly string[]) => [...new Set(lines.map((l) => l.trim()).filter(Boolean))];
+
+function AtAGlance({ snapshot }: { snapshot: ProposalSnapshot }) {
   return (
-    <View style={{ flexDirection: "row", gap: 15 }}>
-      {before?.picture ? <Picture space={before} heading={`${before.name} today`} widthPt={240} /> : null}
-      <Picture space={after} heading={`After option ${index + 1}`} widthPt={240} />
+    <View>
+      <Text style={s.h2} minPresenceAhead={90}>{snapshot.options.length === 1 ? "What we propose" : `Your ${snapshot.options.length} options at a glance`}</Text>
+      {snapshot.options.map((o, i) => {
+        const fixes = optionFixes(snapshot.before, o);
+        return (
+          <View key={o.id} style={s.glance} wrap={false}>
+            <View style={{ flexDirection: "row", justifyContent: "space-between", gap: 12 }}>
+              <Text style={[s.body, { fontWeight: 700, flex: 1 }]}>Option {i + 1}: {o.name}</Text>
+              <Text style={[s.body, { fontWeight: 700 }]}>{o.price ? formatCents(o.price.totalCents) : "Price to be confirmed"}</Text>
+            </View>
+            {o.price && o.price.depositCents > 0 ? <Text style={s.small}>Deposit when you sign: {formatCents(o.price.depositCents)}</Text> : null}
+            <Text style={s.small}>{fixes.meetsCode ? "Meets the building code minimum." : "Does not on its own bring the attic to the building code minimum."}</Text>
+            {fixes.fixed.length ? <Text style={s.small}>Fixes: {fixes.fixed.join("; ")}.</Text> : null}
+            {fixes.left.length ? <Text style={s.small}>Leaves as it is: {fixes.left.join("; ")}.</Text> : null}
+          </View>
+        );
+      })}
     </View>
   );
 }
 
-function OptionSection({ option, index, snapshot }: { option: SnapshotOption; index: number; snapshot: ProposalSnapshot }) {
+function OptionSection({ option, index, notes, before }: { option: SnapshotOption; index: number; notes: PictureNotes; before: ProposalSnapshot["before"] }) {
   const price = option.price;
   return (
     <View break>
-      <Text style={s.h2}>Option {index + 1}: {option.name}</Text>
-      {option.notes ? <Text style={s.para}>{option.notes}</Text> : null}
-      <Text style={s.h3}>Scope of work</Text>
-      <Bullets items={option.scope} />
+      <Text style={s.h2} minPresenceAhead={90}>Option {index + 1}: {option.name}</Text>
+      {homeownerNotes(option.notes) ? <Text style={s.para}>{homeownerNotes(option.notes)}</Text> : null}
+      <Text style={s.h3} minPresenceAhead={60}>What we would do</Text>
+      <Bullets items={unique(option.scope)} />
       {price ? (
         <View style={s.priceBox} wrap={false}>
           <Text style={s.label}>Price of option {index + 1}</Text>
@@ -146,33 +211,68 @@ function OptionSection({ option, index, snapshot }: { option: SnapshotOption; in
       ) : (
         <Text style={s.para}>This option could not be priced; ask us for the figure.</Text>
       )}
-      {option.materials.length ? (
-        <View wrap={false}>
-          <Text style={s.h3}>Materials</Text>
-          <View style={s.table}>
-            {option.materials.map((m, i) => (
-              <View key={i} style={s.figureRow}>
-                <Text style={s.cell}>{m.description}</Text>
-                <Text style={s.cell}>{formatNumber(m.quantity)} {m.unit === "linear-ft" ? "ft" : m.unit === "hour" ? "h" : "×"}</Text>
-              </View>
-            ))}
-          </View>
-        </View>
-      ) : null}
       {option.after.map((space) => (
         <View key={space.spaceId}>
-          <BeforeAfter before={snapshot.before.find((b) => b.spaceId === space.spaceId)} after={space} index={index} />
-          <AirflowEstimatePdf spaceName={space.name} before={snapshot.before.find((b) => b.spaceId === space.spaceId)?.airflow} after={space.airflow} />
-          {space.analysis ? (
-            <View wrap={false}>
-              <Text style={s.h3}>{space.name} after the work</Text>
-              <Figures analysis={space.analysis} />
-            </View>
-          ) : (
-            <Bullets items={space.issues} />
-          )}
+          <Picture space={space} heading={option.after.length > 1 ? `${space.name} after option ${index + 1}` : `Your attic after option ${index + 1}`} notes={notes} />
+          {space.analysis ? <AfterFigures analysis={space.analysis} /> : <Bullets items={space.issues} />}
+          <AirflowEstimatePdf spaceName={space.name} before={before.find((b) => b.spaceId === space.spaceId)?.airflow} after={space.airflow} />
         </View>
       ))}
+    </View>
+  );
+}
+
+/** The attic after the work in four lines: enough to compare with today's figures. */
+function AfterFigures({ analysis }: { analysis: SnapshotAnalysis }) {
+  return (
+    <View wrap={false}>
+      <Figure label="Intake provided (low, at the eaves)" value={sqIn(analysis.provided.intakeSqIn)} />
+      <Figure label="Exhaust provided (high, near the ridge)" value={sqIn(analysis.provided.exhaustSqIn)} />
+      <Figure label={`Total provided (the code asks for ${sqIn(analysis.requirement.totalSqIn)})`} value={sqIn(analysis.provided.totalSqIn)} isStrong />
+      <Figure label="Meets the code minimum" value={analysis.compliant ? "Yes" : "No"} isStrong />
+    </View>
+  );
+}
+
+const SAID_BY_REASONS: ReadonlySet<string> = new Set(["below-minimum", "exception-not-met"]);
+
+/** The rule, the inputs and the arithmetic behind today's figures, in small type under them; each line once in the document. */
+function SpaceNotes({ space, seen }: { space: SnapshotSpace; seen: Set<string> }) {
+  const once = (text: string) => (text && !seen.has(text) ? (seen.add(text), true) : false);
+  const reasons = (space.analysis?.requirement.reasons ?? []).filter(once);
+  // The requirement's reasons already give the arithmetic of a shortfall and of the 1/300 conditions.
+  const details = homeownerFindings(space.analysis?.findings ?? []).filter((f) => !SAID_BY_REASONS.has(f.code) && once(f.detail));
+  if (!reasons.length && !details.length) return null;
+  return (
+    <View style={{ marginTop: 6 }}>
+      <Text style={s.h3} minPresenceAhead={40}>The rules and the arithmetic</Text>
+      {reasons.map((r, i) => <Text key={`r${i}`} style={s.note}>{r}</Text>)}
+      {details.map((f) => (
+        <Text key={f.code} style={s.note}>
+          <Text style={{ fontWeight: 600 }}>{f.title}. </Text>
+          {f.detail}
+        </Text>
+      ))}
+    </View>
+  );
+}
+
+/** The buyer's right to cancel; the notice-of-cancellation form itself is kept on one page so it can be cut out and sent. */
+function CancellationNotice({ notice }: { notice: string[] }) {
+  const formAt = notice.indexOf("NOTICE OF CANCELLATION");
+  const lead = formAt >= 0 ? notice.slice(0, formAt) : notice;
+  const form = formAt >= 0 ? notice.slice(formAt) : [];
+  return (
+    <View>
+      <Text style={s.h2} minPresenceAhead={90}>Your right to cancel</Text>
+      {lead.map((p, i) => <Text key={i} style={s.para}>{p}</Text>)}
+      {form.length ? (
+        <View wrap={false} style={s.cancelForm}>
+          {form.map((p, i) => (
+            <Text key={i} style={i === 0 ? [s.h3, { textAlign: "center", fontSize: 11 }] : s.note}>{p}</Text>
+          ))}
+        </View>
+      ) : null}
     </View>
   );
 }
@@ -196,7 +296,10 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
   const c = snapshot.company;
   const footerLeft = `${c.name} · Proposal ${snapshot.proposalId.slice(0, 8)} rev. ${snapshot.revision}`;
   const accepted = signed ? snapshot.options.find((o) => o.id === signed.acceptance.optionId) : undefined;
-  const findings = snapshot.before.flatMap((space) => (space.analysis?.findings ?? []).map((f) => ({ ...f, space: space.name })));
+  // One entry per finding, naming every space it was found in, so its sentence is read once.
+  const findings = groupBySpace(snapshot.before.flatMap((space) => homeownerFindings(space.analysis?.findings ?? []).map((f) => ({ ...f, space: space.name }))));
+  const notes = pictureNotes(picturesInOrder(snapshot));
+  const notesSeen = new Set<string>();
   return (
     <Document title={`Proposal for ${snapshot.customer.name}`} author={c.name} subject="Attic ventilation proposal" creator="Eavesight" producer="Eavesight">
       <Page size="LETTER" style={s.page}>
@@ -243,39 +346,42 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
           </View>
         ) : null}
 
-        <Text style={s.h2}>What we found</Text>
-        {snapshot.explanation.map((p, i) => <Text key={i} style={s.para}>{p}</Text>)}
+        <AtAGlance snapshot={snapshot} />
+
+        <Text style={s.h2} minPresenceAhead={90}>What we found</Text>
+        {snapshot.explanation[0] ? <Text style={s.para}>{snapshot.explanation[0]}</Text> : null}
         {findings.map((f, i) => (
           <View key={i} style={[s.finding, { borderLeftColor: severityColour[f.severity] }]} wrap={false}>
-            <Text style={[s.body, { fontWeight: 600 }]}>{f.title}{snapshot.before.length > 1 ? ` (${f.space})` : ""}</Text>
-            <Text style={s.small}>{f.detail}</Text>
+            <Text style={[s.body, { fontWeight: 600 }]}>{f.title}{snapshot.before.length > 1 ? ` (${f.spaces.join(", ")})` : ""}</Text>
+            {f.plain ? <Text style={s.body}>{f.plain}</Text> : null}
           </View>
         ))}
 
-        <Text style={s.h2} break>What the building code asks for</Text>
-        {snapshot.before.map((space) => (
-          <View key={space.spaceId} style={{ marginBottom: 8 }}>
-            <Text style={s.h3}>{space.name}{space.analysis ? "" : " — not analysed"}</Text>
-            {space.analysis ? (
-              <>
-                <Bullets items={space.analysis.requirement.reasons} />
-                <Text style={s.h3}>Today</Text>
-                <Figures analysis={space.analysis} />
-              </>
-            ) : (
-              <Bullets items={space.issues} />
-            )}
-          </View>
-        ))}
-        {snapshot.before.map((space) => (
-          <Picture key={space.spaceId} space={space} heading={`How air moves in the ${space.name.toLowerCase()} today`} />
-        ))}
+        <View break>
+          <Text style={s.h2} minPresenceAhead={90}>{snapshot.before.length > 1 ? "Your attics today" : "Your attic today"}</Text>
+          {snapshot.before.map((space) => (
+            <View key={space.spaceId}>
+              {space.analysis ? (
+                <>
+                  <Picture space={space} heading={snapshot.before.length > 1 ? `How air moves in the ${space.name.toLowerCase()}` : "How air moves through the attic"} notes={notes} />
+                  <Figures analysis={space.analysis} />
+                  <SpaceNotes space={space} seen={notesSeen} />
+                </>
+              ) : (
+                <>
+                  <Text style={s.h3} minPresenceAhead={60}>{space.name}: not analysed</Text>
+                  <Bullets items={space.issues} />
+                </>
+              )}
+            </View>
+          ))}
+        </View>
 
-        {snapshot.options.map((option, i) => <OptionSection key={option.id} option={option} index={i} snapshot={snapshot} />)}
+        {snapshot.options.map((option, i) => <OptionSection key={option.id} option={option} index={i} notes={notes} before={snapshot.before} />)}
 
         {snapshot.photos.length ? (
           <View break>
-            <Text style={s.h2}>Photos from the survey</Text>
+            <Text style={s.h2} minPresenceAhead={90}>Photos from the survey</Text>
             <View style={{ flexDirection: "row", flexWrap: "wrap", gap: 10 }}>
               {snapshot.photos.map((p) => photoDataUrls[p.id] ? (
                 <View key={p.id} style={{ width: 240 }} wrap={false}>
@@ -287,28 +393,24 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
           </View>
         ) : null}
 
-        <View break>
-          <Text style={s.h2}>Terms</Text>
+        <View>
+          <Text style={s.h2} minPresenceAhead={90}>Terms</Text>
           {(snapshot.terms ?? "Payment terms and warranty are as agreed with your contact.").split(/\n+/).map((p, i) => <Text key={i} style={s.para}>{p}</Text>)}
           <Text style={s.para}>This proposal is valid until {formatDate(snapshot.validUntil)}. Prices are in US dollars and include the sales tax shown.</Text>
         </View>
 
         <View>
-          <Text style={s.h2}>Safety and codes</Text>
-          {snapshot.cautions.map((text, i) => <Text key={i} style={s.caution} wrap={false}>{text}</Text>)}
+          {unique(snapshot.cautions).map((text, i) => (
+            // The heading travels with the first caution, so it never ends a page alone.
+            <View key={i} wrap={false}>
+              {i === 0 ? <Text style={s.h2}>Safety and codes</Text> : null}
+              <Text style={s.caution}>{text}</Text>
+            </View>
+          ))}
         </View>
 
-        {snapshot.coolingOff.isEnabled ? (
-          <View break>
-            <Text style={s.h2}>Your right to cancel</Text>
-            {snapshot.coolingOff.notice.map((p, i) => (
-              <Text key={i} style={p === "NOTICE OF CANCELLATION" ? [s.h3, { textAlign: "center", fontSize: 12 }] : s.para}>{p}</Text>
-            ))}
-          </View>
-        ) : null}
-
         <View wrap={false} style={{ marginTop: 16 }}>
-          <Text style={s.h2}>Signatures</Text>
+          <Text style={s.h2} minPresenceAhead={90}>Signatures</Text>
           <Text style={s.para}>
             {accepted ? `Accepted: option ${snapshot.options.indexOf(accepted) + 1}, ${accepted.name}${accepted.price ? `, total ${formatCents(accepted.price.totalCents)}` : ""}.` : "To accept, choose one option and sign. Option accepted: ______________________"}
           </Text>
@@ -331,6 +433,9 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
             </View>
           </View>
         </View>
+
+        {snapshot.coolingOff.isEnabled ? <CancellationNotice notice={snapshot.coolingOff.notice} /> : null}
+
       </Page>
 
       {signed ? (
@@ -350,13 +455,13 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
             <Figure label="Link id" value={signed.acceptance.tokenId ?? "—"} />
             <Figure label="Consent to e-sign, text version" value={signed.acceptance.consentTextVersion} />
           </View>
-          <Text style={s.h3}>Browser</Text>
+          <Text style={s.h3} minPresenceAhead={60}>Browser</Text>
           <Text style={s.mono}>{signed.acceptance.userAgent ?? "unknown"}</Text>
-          <Text style={s.h3}>Fingerprints</Text>
+          <Text style={s.h3} minPresenceAhead={60}>Fingerprints</Text>
           <Text style={s.mono}>Proposal content (snapshot) SHA-256: {signed.snapshotSha256}</Text>
           <Text style={s.mono}>Proposal PDF as sent, SHA-256: {signed.originalPdfSha256 ?? "—"}</Text>
           {signed.acceptance.signature.pngSha256 ? <Text style={s.mono}>Drawn signature image SHA-256: {signed.acceptance.signature.pngSha256}</Text> : null}
-          <Text style={s.h3}>Trail</Text>
+          <Text style={s.h3} minPresenceAhead={60}>Trail</Text>
           {signed.events.map((e, i) => (
             <View key={i} style={s.figureRow} wrap={false}>
               <Text style={s.cell}>{e.event}</Text>

@@ -41,27 +41,24 @@ export function CatalogTable({ items, canEdit, onEdit, onToggleActive, pendingId
       },
       { id: "kind", header: "Kind", accessorFn: (i) => kindLabel(i.kind), cell: ({ getValue }) => String(getValue()) },
       { id: "unit", header: "Sold by", accessorFn: (i) => UNIT_LABELS[i.unit] + (i.soldInLengthFt ? ` (${formatNumber(i.soldInLengthFt)} ft pieces)` : "") },
-      { id: "nfa", header: "NFA", accessorFn: (i) => i.nfaSqInPerFt ?? i.nfaSqInPerUnit ?? -1, cell: ({ row }) => nfaText(row.original) },
-      { id: "cfm", header: "Airflow", accessorFn: (i) => i.cfm ?? -1, cell: ({ row }) => (row.original.cfm === null ? "—" : `${formatNumber(row.original.cfm)} cfm`) },
+      // One rating column (a vent has a net free area, a fan an airflow) and one price column keep Edit and Retire in view on a desk.
       {
-        id: "cost",
-        header: "Cost",
-        accessorFn: (i) => i.materialCostCents,
-        cell: ({ row }) => (
-          <span>
-            {formatCents(row.original.materialCostCents)}
-            <span className="text-ink-600 md:sr-only"> {UNIT_SHORT[row.original.unit]}</span>
-          </span>
-        ),
+        id: "rating",
+        header: "Rating",
+        accessorFn: (i) => i.nfaSqInPerFt ?? i.nfaSqInPerUnit ?? i.cfm ?? -1,
+        cell: ({ row }) => (row.original.cfm !== null ? `${formatNumber(row.original.cfm)} cfm` : nfaText(row.original)),
       },
       {
         id: "price",
-        header: "Sell price",
+        header: "Sell / cost",
         accessorFn: (i) => i.sellPriceCents,
         cell: ({ row }) => (
-          <span className="font-semibold">
-            {formatCents(row.original.sellPriceCents)}
-            <span className="font-normal text-ink-600 md:sr-only"> {UNIT_SHORT[row.original.unit]}</span>
+          <span className="block">
+            <span className="block font-semibold">
+              {formatCents(row.original.sellPriceCents)}
+              <span className="font-normal text-ink-600 md:sr-only"> {UNIT_SHORT[row.original.unit]}</span>
+            </span>
+            <span className="block text-sm text-ink-600">cost {formatCents(row.original.materialCostCents)}</span>
           </span>
         ),
       },
@@ -111,7 +108,7 @@ export function CatalogTable({ items, canEdit, onEdit, onToggleActive, pendingId
     getRowId: (row) => row.id,
   });
 
-  const HALF = new Set(["kind", "unit", "nfa", "cfm", "cost", "price", "labor", "active"]);
+  const HALF = new Set(["kind", "unit", "rating", "price", "labor", "active"]);
   return (
     // relative: the sort buttons' screen-reader text is absolutely placed and must stay inside the scroll box.
     <TableContainer className="relative">

@@ -1,16 +1,6 @@
-import { ACCESSORY_KINDS, type CatalogKind, type CatalogUnit } from "@shared/schemas/catalog";
+import { ACCESSORY_KINDS, ACCESSORY_LABELS, type CatalogKind, type CatalogUnit } from "@shared/schemas/catalog";
 import { VENT_KIND_LABELS, VENT_KINDS, isPoweredKind, type VentKind } from "@shared/ventilation/index";
 
-const ACCESSORY_LABELS: Record<(typeof ACCESSORY_KINDS)[number], string> = {
-  baffle: "insulation baffle",
-  "deck-cut": "roof deck cut",
-  "patch-vent-opening": "patch a removed vent",
-  "seal-gable-opening": "seal a gable opening",
-  "electrical-disconnect": "electrical disconnect",
-  "insulation-clearing": "clear insulation",
-  labor: "labour",
-  other: "other",
-};
 
 const capitalize = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 

@@ -1,4 +1,5 @@
 import type { EstimateConditions } from "@shared/airflow-model/index";
+import type { CodeBasis } from "@shared/ventilation/index";
 import type { DepositRule } from "@shared/proposals/types";
 
 /** The company profile as GET|PATCH /api/company answer it (server/modules/proposals/company.service.ts). */
@@ -17,5 +18,9 @@ export interface CompanyProfile {
   /** How the 1/300 route's 40–50 % is read: of the required area (the code text) or of the area provided. */
   upperShareBase: "required" | "provided";
   estimateConditions: EstimateConditions;
+  /** What new projects start with. */
+  defaultCodeBasis: CodeBasis;
+  defaultClimateZone: number;
+  unitSystem: "imperial" | "metric";
   logo: { contentType: string | null; sha256: string | null; url: string } | null;
 }

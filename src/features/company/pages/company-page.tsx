@@ -2,11 +2,14 @@ import { useQuery } from "@tanstack/react-query";
 import { useState, type FormEvent } from "react";
 import { EstimateConditionsSchema, SEASONS, type EstimateConditions, type Season } from "@shared/airflow-model/index";
 import type { CompanyProfilePatch } from "@shared/proposals/schemas";
+import { CODE_BASIS_LABELS } from "@shared/schemas/projects";
+import { CODE_BASES } from "@shared/ventilation/index";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Card, CardBody, CardDescription, CardFooter, CardHeader, CardTitle } from "@/components/ui/card";
 import { Checkbox, Radio, RadioGroup } from "@/components/ui/checkbox";
 import { Hint, Label, TextArea, TextField } from "@/components/ui/field";
+import { Select } from "@/components/ui/select";
 import { PageHeader } from "@/components/ui/page-header";
 import { LoadingBlock } from "@/components/ui/spinner";
 import { toast } from "@/components/ui/toaster";
@@ -34,6 +37,9 @@ interface FormState {
   isReminderOn: boolean;
   reminderDays: string;
   upperShareBase: "required" | "provided";
+  defaultCodeBasis: CompanyProfile["defaultCodeBasis"];
+  defaultClimateZone: string;
+  unitSystem: CompanyProfile["unitSystem"];
   /** Airflow-estimate conditions as typed: "summer.atticTempF" → "130". */
   conditions: Record<string, string>;
 }
@@ -69,6 +75,9 @@ function toForm(c: CompanyProfile): FormState {
     reminderDays: String(c.reminderDays ?? 3),
     upperShareBase: c.upperShareBase ?? "required",
     conditions: conditionsText(c.estimateConditions),
+    defaultCodeBasis: c.defaultCodeBasis,
+    defaultClimateZone: String(c.defaultClimateZone),
+    unitSystem: c.unitSystem,
   };
 }
 
@@ -124,6 +133,9 @@ function toPatch(f: FormState): { patch: CompanyProfilePatch | null; errors: Rec
       reminderDays,
       upperShareBase: f.upperShareBase,
       estimateConditions: conditions.data,
+      defaultCodeBasis: f.defaultCodeBasis,
+      defaultClimateZone: Number(f.defaultClimateZone),
+      unitSystem: f.unitSystem,
     },
   };
 }
@@ -229,6 +241,35 @@ function ProfileForm({ company }: { company: CompanyProfile }) {
           <TextField label="Phone" type="tel" autoComplete="tel" isOptional error={errors.phone} {...text("phone")} />
           <TextField label="E-mail" type="email" autoComplete="email" isOptional error={errors.email} {...text("email")} />
           <TextField label="Address" autoComplete="street-address" isOptional error={errors.addressLine} {...text("addressLine")} className="sm:col-span-2" />
+        </CardBody>
+      </Card>
+
+      <Card aria-labelledby="company-defaults-title">
+        <CardHeader>
+          <CardTitle id="company-defaults-title">New projects start with</CardTitle>
+          <CardDescription>The estimator can change these on each project.</CardDescription>
+        </CardHeader>
+        <CardBody className="grid gap-5 sm:grid-cols-2">
+          <Select
+            label="Code edition"
+            hint="The code text your building departments enforce."
+            options={CODE_BASES.map((c) => ({ value: c, label: CODE_BASIS_LABELS[c] }))}
+            value={form.defaultCodeBasis}
+            error={errors.defaultCodeBasis}
+            onChange={(e) => set("defaultCodeBasis", e.target.value as FormState["defaultCodeBasis"])}
+          />
+          <Select
+            label="Climate zone"
+            hint="From the IECC map, for where you work most."
+            options={[1, 2, 3, 4, 5, 6, 7, 8].map((z) => ({ value: String(z), label: `Zone ${z}` }))}
+            value={form.defaultClimateZone}
+            error={errors.defaultClimateZone}
+            onChange={(e) => set("defaultClimateZone", e.target.value)}
+          />
+          <RadioGroup legend="Units" isInline className="sm:col-span-2">
+            <Radio name="unit-system" value="imperial" label="Feet and inches" checked={form.unitSystem === "imperial"} onChange={() => set("unitSystem", "imperial")} />
+            <Radio name="unit-system" value="metric" label="Metric" checked={form.unitSystem === "metric"} onChange={() => set("unitSystem", "metric")} />
+          </RadioGroup>
         </CardBody>
       </Card>
 

@@ -26,13 +26,15 @@ export interface CustomerFormDialogProps {
   onOpenChange: (open: boolean) => void;
   /** The customer to edit; omit to add a new one. */
   customer?: Customer | null;
-  /** Sales can look but not change. */
+  /** Only look, change nothing. */
   isReadOnly?: boolean;
+  /** Sales correct contact details but do not delete customers. */
+  canDelete?: boolean;
   onSaved?: (customer: Customer) => void;
 }
 
 /** Add or edit a customer: name, phone, e-mail, billing address and notes. */
-export function CustomerFormDialog({ open, onOpenChange, customer, isReadOnly = false, onSaved }: CustomerFormDialogProps) {
+export function CustomerFormDialog({ open, onOpenChange, customer, isReadOnly = false, canDelete = true, onSaved }: CustomerFormDialogProps) {
   return (
     <Dialog open={open} onOpenChange={onOpenChange}>
       {open ? (
@@ -40,6 +42,7 @@ export function CustomerFormDialog({ open, onOpenChange, customer, isReadOnly = 
           key={customer?.id ?? "new"}
           customer={customer ?? null}
           isReadOnly={isReadOnly}
+          canDelete={canDelete}
           onDone={(saved) => {
             onOpenChange(false);
             if (saved) onSaved?.(saved);
@@ -53,10 +56,12 @@ export function CustomerFormDialog({ open, onOpenChange, customer, isReadOnly = 
 function CustomerFormBody({
   customer,
   isReadOnly,
+  canDelete,
   onDone,
 }: {
   customer: Customer | null;
   isReadOnly: boolean;
+  canDelete: boolean;
   onDone: (saved: Customer | null) => void;
 }) {
   const create = useCreateCustomer();
@@ -128,7 +133,7 @@ function CustomerFormBody({
             </DialogClose>
           ) : (
             <>
-              {customer ? (
+              {customer && canDelete ? (
                 <Button
                   variant="ghost"
                   className="w-full text-critical-700 hover:bg-critical-50 sm:mr-auto sm:w-auto"

@@ -23,6 +23,8 @@ const SORTS: readonly CustomerSort[] = ["name", "createdAt", "updatedAt"];
 
 export interface CustomersPageProps {
   canEdit: boolean;
+  /** Sales may correct a customer's contact details (to send a proposal) but not add or delete customers. */
+  canEditContact: boolean;
   /** Link to start a project for a customer (built by the route, so features stay apart). */
   newProjectHref: (customerId: string) => string;
 }
@@ -39,7 +41,7 @@ function readParams(search: URLSearchParams): CustomerListParams {
   };
 }
 
-export function CustomersPage({ canEdit, newProjectHref }: CustomersPageProps) {
+export function CustomersPage({ canEdit, canEditContact, newProjectHref }: CustomersPageProps) {
   const [search, setSearch] = useSearchParams();
   const params = readParams(search);
   const [typed, setTyped] = useState(params.q);
@@ -252,7 +254,8 @@ export function CustomersPage({ canEdit, newProjectHref }: CustomersPageProps) {
           }
         }}
         customer={editing}
-        isReadOnly={!canEdit}
+        isReadOnly={editing ? !canEditContact : !canEdit}
+        canDelete={canEdit}
       />
     </>
   );

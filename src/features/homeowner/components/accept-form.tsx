@@ -12,10 +12,19 @@ import { SignatureCanvas } from "@/components/ui/signature-canvas";
 
 type Errors = Partial<Record<"optionId" | "signerName" | "signature" | "consent", string>>;
 
+export interface AcceptFormProps {
+  token: string;
+  view: PublicProposal;
+  /** The chosen option (chosen here or with an option's "Choose" button above); "" when none yet. */
+  optionId: string;
+  onOptionChange: (optionId: string) => void;
+  /** Called once the acceptance is recorded, so the page can bring the confirmation into view. */
+  onAccepted?: () => void;
+}
+
 /** Accept one option: choose it, give your full name, sign (drawn or typed), and agree to sign electronically. */
-export function AcceptForm({ token, view }: { token: string; view: PublicProposal }) {
+export function AcceptForm({ token, view, optionId, onOptionChange: setOptionId, onAccepted }: AcceptFormProps) {
   const accept = useAcceptProposal(token);
-  const [optionId, setOptionId] = useState(view.options.length === 1 ? view.options[0]!.id : "");
   const [signerName, setSignerName] = useState("");
   const [mode, setMode] = useState<"draw" | "type">("draw");
   const [drawn, setDrawn] = useState<string | null>(null);
@@ -46,6 +55,7 @@ export function AcceptForm({ token, view }: { token: string; view: PublicProposa
       consent: { esign: true, consentTextVersion: view.esign.version },
     };
     accept.mutate(input, {
+      onSuccess: () => onAccepted?.(),
       onError: (error) => {
         if (!isApiError(error)) return setFormError("Something went wrong. Please try again.");
         const f = error.fields;
@@ -62,7 +72,7 @@ export function AcceptForm({ token, view }: { token: string; view: PublicProposa
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-6" aria-labelledby="accept-title">
-      <h3 id="accept-title" className="text-xl font-semibold text-ink-900">
+      <h3 id="accept-title" tabIndex={-1} className="scroll-mt-4 text-xl font-semibold text-ink-900 focus:outline-none">
         Accept and sign
       </h3>
       {formError ? (
@@ -122,7 +132,7 @@ export function AcceptForm({ token, view }: { token: string; view: PublicProposa
       {view.coolingOff.isEnabled ? (
         <p className="text-base text-ink-800">
           <strong>Your right to cancel:</strong> you may cancel within three business days of signing, without penalty. The notice and the form
-          are below and in your signed PDF.
+          are further down this page and in your signed PDF.
         </p>
       ) : null}
 

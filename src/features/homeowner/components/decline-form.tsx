@@ -5,7 +5,7 @@ import { TextArea } from "@/components/ui/field";
 import { useDeclineProposal } from "../api/decline-proposal";
 
 /** Decline, with an optional reason; nothing is sent until the second button. */
-export function DeclineForm({ token, companyName }: { token: string; companyName: string }) {
+export function DeclineForm({ token, companyName, onDeclined }: { token: string; companyName: string; onDeclined?: () => void }) {
   const decline = useDeclineProposal(token);
   const [isOpen, setIsOpen] = useState(false);
   const [reason, setReason] = useState("");
@@ -28,7 +28,7 @@ export function DeclineForm({ token, companyName }: { token: string; companyName
       />
       {decline.isError ? <Alert severity="critical">{decline.error.message}</Alert> : null}
       <div className="flex flex-col gap-3 sm:flex-row">
-        <Button variant="danger" isLoading={decline.isPending} loadingText="Sending…" onClick={() => decline.mutate(reason.trim() === "" ? null : reason.trim())}>
+        <Button variant="danger" isLoading={decline.isPending} loadingText="Sending…" onClick={() => decline.mutate(reason.trim() === "" ? null : reason.trim(), { onSuccess: () => onDeclined?.() })}>
           Decline the proposal
         </Button>
         <Button variant="ghost" onClick={() => setIsOpen(false)}>

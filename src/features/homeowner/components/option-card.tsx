@@ -1,5 +1,6 @@
 import type { SnapshotOption } from "@shared/proposals/types";
 import { formatCents } from "@shared/pricing/index";
+import { homeownerNotes } from "@shared/proposals/homeowner-words";
 import { AirflowPicture } from "@/components/airflow/airflow-picture";
 import { Alert } from "@/components/ui/alert";
 import { OkIcon, WarningIcon } from "@/components/ui/icons";
@@ -9,31 +10,23 @@ import { providedSentence } from "../lib/nfa-words";
 export interface OptionCardProps {
   option: SnapshotOption;
   index: number;
-  /** The cautions for work that involves a powered fan (shown when this option has one). */
-  fanCautions: string[];
   isChosen?: boolean;
 }
 
 /** One option as the homeowner weighs it: what we'd do, what the attic looks like after, the price and deposit. */
-export function OptionCard({ option, index, fanCautions, isChosen }: OptionCardProps) {
+export function OptionCard({ option, index, isChosen }: OptionCardProps) {
   const price = option.price;
   return (
     <article
-      aria-labelledby={`option-${option.id}-title`}
+      aria-label={`Option ${index + 1}: ${option.name}`}
       data-option={index + 1}
       className={cn("overflow-hidden rounded-lg border bg-white shadow-card", isChosen ? "border-ok-600 ring-2 ring-ok-600" : "border-ink-200")}
     >
-      <div className="space-y-1 border-b border-ink-100 bg-ink-25 px-4 py-4 sm:px-6">
-        <p className="text-sm font-semibold tracking-wide text-ink-600 uppercase">Option {index + 1}</p>
-        <h3 id={`option-${option.id}-title`} className="text-xl font-semibold text-ink-900">
-          {option.name}
-        </h3>
-        {isChosen ? (
-          <p className="flex items-center gap-1.5 text-base font-semibold text-ok-800">
-            <OkIcon className="size-5 text-ok-600" /> The option you accepted
-          </p>
-        ) : null}
-      </div>
+      {isChosen ? (
+        <p className="flex items-center gap-1.5 border-b border-ink-100 bg-ok-50 px-4 py-3 text-base font-semibold text-ok-900 sm:px-6">
+          <OkIcon className="size-5 text-ok-600" aria-hidden /> The option you accepted
+        </p>
+      ) : null}
       <div className="space-y-5 px-4 py-5 sm:px-6">
         {price ? (
           <dl className="grid grid-cols-2 gap-3">
@@ -57,16 +50,12 @@ export function OptionCard({ option, index, fanCautions, isChosen }: OptionCardP
               <li key={line}>{line}</li>
             ))}
           </ul>
-          {option.notes ? <p className="mt-3 text-base text-ink-800">{option.notes}</p> : null}
+          {homeownerNotes(option.notes) ? <p className="mt-3 text-base whitespace-pre-line text-ink-800">{homeownerNotes(option.notes)}</p> : null}
         </section>
 
-        {option.hasPoweredFan && fanCautions.length > 0 ? (
-          <Alert severity="warning" title="Safety: this option includes a powered attic fan">
-            <ul className="list-disc space-y-1 pl-5">
-              {fanCautions.map((c) => (
-                <li key={c}>{c}</li>
-              ))}
-            </ul>
+        {option.hasPoweredFan ? (
+          <Alert severity="warning" title="This option includes a powered attic fan">
+            It includes a safety test of your gas appliances with the fan running; see “Safety and the rules we follow”.
           </Alert>
         ) : null}
 

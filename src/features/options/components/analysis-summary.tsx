@@ -4,6 +4,7 @@ import { meetsRequiredArea, type AtticAnalysis, type Finding, type TryAnalyzeRes
 import { Badge, SeverityBadge, type Severity } from "@/components/ui/badge";
 import { WarningIcon } from "@/components/ui/icons";
 import { cn } from "@/lib/cn";
+import { rangeMark, rangeStanding, rangeWords } from "../lib/vent-range";
 
 export const SEVERITIES = ["critical", "warning", "info"] as const;
 const SEVERITY_WORDS: Record<(typeof SEVERITIES)[number], [string, string]> = {
@@ -67,10 +68,10 @@ export function VentAreaFigures({ analysis: a, unitSystem }: { analysis: AtticAn
   }
   // A ✓ only beside a value inside its range; the verdict on the total compares exact figures (never rounded).
   const meetsTotal = meetsRequiredArea(a.provided.exactTotalSqIn, a.requirement.exactSqIn);
-  const isIntakeShort = a.provided.intakeSqIn < a.requirement.split.lowerMinSqIn;
-  const isExhaustShort = a.provided.exhaustSqIn < a.requirement.split.upperMinSqIn;
-  const isExhaustOver = a.provided.exhaustSqIn > a.requirement.split.upperMaxSqIn && a.requirement.split.upperMaxSqIn > 0;
-  const exhaustRange = `${formatNfaSqIn(a.requirement.split.upperMinSqIn, unitSystem)}–${formatNfaSqIn(a.requirement.split.upperMaxSqIn, unitSystem)}`;
+  const intake = rangeStanding(a.provided.intakeSqIn, a.requirement.split.lowerMinSqIn);
+  const exhaust = rangeStanding(a.provided.exhaustSqIn, a.requirement.split.upperMinSqIn, a.requirement.split.upperMaxSqIn);
+  const isIntakeShort = intake !== "in-range";
+  const isExhaustOut = exhaust !== "in-range";
   const isBalanced = a.provided.intakeSqIn >= a.provided.exhaustSqIn;
   const hasPassive = a.provided.intakeSqIn + a.provided.exhaustSqIn > 0;
   return (
@@ -90,14 +91,14 @@ export function VentAreaFigures({ analysis: a, unitSystem }: { analysis: AtticAn
         <Figure
           label="Intake (low)"
           value={formatNfaSqIn(a.provided.intakeSqIn, unitSystem)}
-          sub={`${isIntakeShort ? "! " : "✓ "}at least ${formatNfaSqIn(a.requirement.split.lowerMinSqIn, unitSystem)} wanted`}
+          sub={`${rangeMark(intake)} ${intake === "in-range" ? "at least " : ""}${rangeWords(intake, formatNfaSqIn(a.requirement.split.lowerMinSqIn, unitSystem))}`}
           isShort={isIntakeShort}
         />
         <Figure
           label="Exhaust (high)"
           value={formatNfaSqIn(a.provided.exhaustSqIn, unitSystem)}
-          sub={isExhaustShort ? `! below ${exhaustRange} wanted` : isExhaustOver ? `! above ${exhaustRange} wanted` : `✓ ${exhaustRange} wanted`}
-          isShort={isExhaustShort || isExhaustOver}
+          sub={`${rangeMark(exhaust)} ${rangeWords(exhaust, `${formatNfaSqIn(a.requirement.split.upperMinSqIn, unitSystem)}–${formatNfaSqIn(a.requirement.split.upperMaxSqIn, unitSystem)}`)}`}
+          isShort={isExhaustOut}
         />
       </dl>
       <p className={cn("text-base font-medium", !hasPassive || isBalanced ? "text-ink-800" : "text-warning-800")} data-balance={isBalanced ? "balanced" : "exhaust-heavy"}>

@@ -12,6 +12,8 @@ export interface TermsEditorProps {
   isReadOnly: boolean;
   /** Starting rate for a new labour line, as dollars text. */
   defaultRate: string;
+  /** The catalog's labour for the quantities as they stand (null when the items carry no minutes). */
+  catalogHours: number | null;
   onChange: (patch: Partial<OptionDraft>) => void;
 }
 
@@ -22,7 +24,7 @@ function lineTotal(l: LaborDraft): string | null {
 }
 
 /** Labour lines and the discount. Money is typed in dollars and kept as exact cents. */
-export function TermsEditor({ draft, isReadOnly, defaultRate, onChange }: TermsEditorProps) {
+export function TermsEditor({ draft, isReadOnly, defaultRate, catalogHours, onChange }: TermsEditorProps) {
   const setLine = (id: string, patch: Partial<LaborDraft>) => onChange({ labor: draft.labor.map((l) => (l.id === id ? { ...l, ...patch } : l)) });
   const discountError = discountProblem(draft);
   return (
@@ -34,7 +36,9 @@ export function TermsEditor({ draft, isReadOnly, defaultRate, onChange }: TermsE
         </CardHeader>
         <CardBody className="space-y-4">
           {draft.labor.length === 0 ? <p className="text-base text-ink-700">No labour lines.</p> : null}
-          {draft.labor.map((l, i) => {
+          {draft.labor.map((shown, i) => {
+            // A catalog line shows the hours the quantities give now; typing over them marks it overridden.
+            const l = shown.hoursBasis === "catalog" && catalogHours !== null ? { ...shown, hours: String(catalogHours) } : shown;
             const p = laborProblems(l);
             const total = lineTotal(l);
             return (
@@ -55,12 +59,35 @@ export function TermsEditor({ draft, isReadOnly, defaultRate, onChange }: TermsE
                   ) : null}
                 </div>
                 <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
-                  <TextField label="Hours" inputMode="decimal" autoComplete="off" value={l.hours} error={p.hours} trailing={<span className="pr-3 text-sm text-ink-600">h</span>} onChange={(e) => setLine(l.id, { hours: e.target.value })} />
+                  <TextField
+                    label="Hours"
+                    inputMode="decimal"
+                    autoComplete="off"
+                    value={l.hours}
+                    error={p.hours}
+                    trailing={<span className="pr-3 text-sm text-ink-600">h</span>}
+                    onChange={(e) => setLine(l.id, { hours: e.target.value, ...(l.hoursBasis === "catalog" ? { hoursBasis: "overridden" as const } : {}) })}
+                  />
                   <TextField label="Rate per hour" inputMode="decimal" autoComplete="off" value={l.rate} error={p.rate} trailing={<span className="pr-3 text-sm text-ink-600">$</span>} onChange={(e) => setLine(l.id, { rate: e.target.value })} />
                   <p className="col-span-2 self-end pb-2.5 text-base text-ink-800 sm:col-span-1">
                     Line: <span className="font-semibold tabular-nums">{total ?? "—"}</span>
                   </p>
                 </div>
+                {l.hoursBasis === "catalog" ? (
+                  <p className="text-sm text-ink-700" data-labor-basis="catalog">From the catalog's minutes per unit: follows the quantities above.</p>
+                ) : null}
+                {l.hoursBasis === "overridden" ? (
+                  <div className="flex flex-wrap items-center gap-3" data-labor-basis="overridden">
+                    <p className="text-sm font-medium text-warning-800">
+                      Overridden by hand{catalogHours !== null ? `; the catalog gives ${catalogHours} h for these quantities` : ""}.
+                    </p>
+                    {!isReadOnly && catalogHours !== null ? (
+                      <Button variant="secondary" size="sm" onClick={() => setLine(l.id, { hours: String(catalogHours), hoursBasis: "catalog" })}>
+                        Follow the catalog again
+                      </Button>
+                    ) : null}
+                  </div>
+                ) : null}
               </fieldset>
             );
           })}

@@ -1,4 +1,4 @@
-import { isVentCatalogKind } from "@shared/design/index";
+import { isVentCatalogKind, withCatalogLabor } from "@shared/design/index";
 import type { CatalogItem } from "@shared/schemas/catalog";
 import type { AddedItem, Adjustment, DesignOptionInput, LaborLine, OptionSpace, VentAction } from "@shared/schemas/options";
 import { isPoweredKind, type Vent } from "@shared/ventilation/index";
@@ -35,6 +35,8 @@ export interface LaborDraft {
   description: string;
   hours: string;
   rate: string;
+  /** Absent for a line typed by hand; "catalog" follows the quantities; "overridden" is the catalog's line with typed hours. */
+  hoursBasis?: LaborLine["hoursBasis"];
 }
 
 export type DiscountKind = Adjustment["kind"];
@@ -88,7 +90,7 @@ export function draftFromOption(option: OptionPayload, projectSpaces: readonly S
     notes: option.notes ?? "",
     isKept: option.isKept,
     spaces,
-    labor: option.laborLines.map((l) => ({ id: l.id, description: l.description, hours: String(l.hours), rate: centsToText(l.rateCents) })),
+    labor: option.laborLines.map((l) => ({ id: l.id, description: l.description, hours: String(l.hours), rate: centsToText(l.rateCents), ...(l.hoursBasis ? { hoursBasis: l.hoursBasis } : {}) })),
     discountKind: d.kind,
     discountAmount: d.kind === "amount" ? centsToText(d.cents) : "",
     discountPercent: d.kind === "percent" ? basisPointsToText(d.basisPoints) : "",
@@ -180,7 +182,10 @@ export function buildOption(draft: OptionDraft, catalog: readonly CatalogItem[])
       problems.push({ key: l.id, message: `Labour "${l.description.trim() || "unnamed"}": ${first}` });
       continue;
     }
-    laborLines.push({ id: l.id, description: l.description.trim(), hours: Number(l.hours.trim()), rateCents: (parseCents(l.rate, "Rate") as { value: number }).value });
+    laborLines.push({
+      id: l.id, description: l.description.trim(), hours: Number(l.hours.trim()), rateCents: (parseCents(l.rate, "Rate") as { value: number }).value,
+      ...(l.hoursBasis ? { hoursBasis: l.hoursBasis } : {}),
+    });
   }
 
   let discount: Adjustment = { kind: "none" };
@@ -190,7 +195,7 @@ export function buildOption(draft: OptionDraft, catalog: readonly CatalogItem[])
   else if (draft.discountKind === "percent") discount = { kind: "percent", basisPoints: (parsePercentToBasisPoints(draft.discountPercent, "Discount") as { value: number }).value };
 
   return {
-    option: { name: draft.name.trim() || "Untitled option", notes: draft.notes.trim() === "" ? null : draft.notes, isKept: draft.isKept, spaces, laborLines, discount },
+    option: withCatalogLabor({ name: draft.name.trim() || "Untitled option", notes: draft.notes.trim() === "" ? null : draft.notes, isKept: draft.isKept, spaces, laborLines, discount }, catalog),
     problems,
   };
 }

@@ -1,6 +1,7 @@
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { useCallback, useMemo, useState } from "react";
 import { Link } from "react-router";
+import { catalogLaborHours } from "@shared/design/index";
 import { formatCents } from "@shared/pricing/index";
 import type { UnitSystem } from "@shared/units/format";
 import { Alert } from "@/components/ui/alert";
@@ -216,7 +217,7 @@ function Editor({ projectId, optionId, unitSystem, canEdit, detail, option, cata
               />
             );
           })}
-          <TermsEditor draft={draft} isReadOnly={isReadOnly} defaultRate={defaultRate} onChange={patch} />
+          <TermsEditor draft={draft} isReadOnly={isReadOnly} defaultRate={defaultRate} catalogHours={catalogLaborHours(built.option.spaces, catalog)} onChange={patch} />
         </div>
 
         <aside id="option-results" aria-label="Live results" className="space-y-6 lg:sticky lg:top-20 lg:max-h-[calc(100dvh-6rem)] lg:self-start lg:overflow-y-auto lg:pr-1">

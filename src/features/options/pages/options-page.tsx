@@ -1,3 +1,4 @@
+import { OPTION_TYPE_NAMES } from "@shared/design/index";
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Link, useNavigate } from "react-router";
@@ -183,7 +184,10 @@ export function OptionsPage({ projectId, unitSystem, canEdit }: OptionsPageProps
               <ul className="mt-2 list-disc space-y-1 pl-5 text-base text-ink-800">
                 {suggestions.skipped.map((s) => (
                   <li key={`${s.spaceId}-${s.type}`}>
-                    <span className="font-medium">{s.spaceName}:</span> {s.reason}
+                    <span className="font-medium">
+                      {s.spaceName}, “{OPTION_TYPE_NAMES[s.type]}”:
+                    </span>{" "}
+                    {s.reason}
                   </li>
                 ))}
               </ul>

@@ -1,5 +1,5 @@
-import { PROJECT_STATUSES, type ProjectStatus } from "@shared/schemas/projects";
-import { CODE_BASES, type CodeBasis, type RoofColor, type VaporRetarder } from "@shared/ventilation/index";
+import { CODE_BASIS_LABELS, PROJECT_STATUSES, type ProjectStatus } from "@shared/schemas/projects";
+import { CODE_BASES, type RoofColor, type VaporRetarder } from "@shared/ventilation/index";
 import type { SelectOption } from "@/components/ui/select";
 
 export const STATUS_LABELS: Record<ProjectStatus, string> = {
@@ -12,14 +12,7 @@ export const STATUS_LABELS: Record<ProjectStatus, string> = {
 };
 export const STATUS_OPTIONS: SelectOption[] = PROJECT_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }));
 
-export const CODE_BASIS_LABELS: Record<CodeBasis, string> = {
-  "irc-2024": "IRC 2024 (same vent rule as 2018)",
-  "irc-2021": "IRC 2021 (same vent rule as 2018)",
-  "irc-2018": "IRC 2018 text",
-  "irc-2012": "IRC 2012 or 2015 text",
-  "irc-2009": "IRC 2009 text",
-  "strict-150": "Strict 1/150, no exceptions",
-};
+export { CODE_BASIS_LABELS };
 export const CODE_BASIS_OPTIONS: SelectOption[] = CODE_BASES.map((c) => ({ value: c, label: CODE_BASIS_LABELS[c] }));
 
 export const VAPOR_RETARDER_LABELS: Record<VaporRetarder, string> = {

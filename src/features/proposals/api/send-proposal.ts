@@ -3,9 +3,9 @@ import { apiClient } from "@/lib/api-client";
 import { proposalKeys } from "./queries";
 import type { ProposalRecord } from "./types";
 
-/** POST /api/proposals/:id/send — signs with the saved signature, freezes the revision, e-mails the link once. */
-export function sendProposal(proposalId: string): Promise<{ proposal: ProposalRecord; link: string }> {
-  return apiClient.post<{ proposal: ProposalRecord; link: string }>(`/proposals/${encodeURIComponent(proposalId)}/send`);
+/** POST /api/proposals/:id/send — signs with the saved signature, freezes the revision, e-mails the link once (to the address given, saved on the customer). */
+export function sendProposal({ proposalId, recipientEmail }: { proposalId: string; recipientEmail?: string }): Promise<{ proposal: ProposalRecord; link: string }> {
+  return apiClient.post<{ proposal: ProposalRecord; link: string }>(`/proposals/${encodeURIComponent(proposalId)}/send`, recipientEmail ? { recipientEmail } : {});
 }
 
 export function useSendProposal() {
