@@ -1,6 +1,5 @@
 import { processLogo } from "../photos/photo-processing.ts";
 import { DEFAULT_ESTIMATE_CONDITIONS, EstimateConditionsSchema, type EstimateConditions } from "../../../shared/airflow-model/schema.ts";
-import { fileTypeFromBuffer } from "file-type";
 import { AppError, notFound } from "../../lib/errors.ts";
 import type { Actor } from "../../lib/request-context.ts";
 import type { Storage } from "../../lib/storage/index.ts";
