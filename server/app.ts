@@ -14,6 +14,7 @@ import { AppError } from "./lib/errors.ts";
 import { createAudit } from "./lib/audit.ts";
 import { createLucia } from "./modules/auth/lucia.ts";
 import { sessionMiddleware } from "./modules/auth/session.middleware.ts";
+import type { SessionCache } from "./modules/auth/session-cache.ts";
 import { createAuthRepository } from "./modules/auth/auth.repository.ts";
 import { createAuthService } from "./modules/auth/auth.service.ts";
 import { authRouter } from "./modules/auth/auth.router.ts";
@@ -73,6 +74,8 @@ export interface AppDeps {
   storage?: Storage;
   /** The payment provider; by default the `stripe` SDK as PAYMENTS_API_BASE and the keys configure it. */
   paymentProvider?: PaymentProvider | null;
+  /** Validated sessions kept briefly for reads (modules/auth/session-cache.ts); without it every request asks the database. */
+  sessionCache?: SessionCache;
 }
 
 export function createApp(deps: AppDeps): Express {
@@ -171,7 +174,7 @@ export function createApp(deps: AppDeps): Express {
     }
   });
 
-  api.use(sessionMiddleware(lucia, now));
+  api.use(sessionMiddleware(lucia, now, deps.sessionCache));
   // Declared routes (server/lib/routes.ts): each carries its method, path and access, listed in app.locals.routes.
   const declared = [
     authRouter(authService, lucia), teamRouter(teamService), outboxRouter(createOutboxRepository(db)),
