@@ -129,7 +129,7 @@ export function createApp(deps: AppDeps): Express {
   const spacesRepo = createSpacesRepository(db);
   const photosService = createPhotosService({ repo: createPhotosRepository(db), storage, projects: projectsRepo, spaces: spacesRepo });
   const spacesService = createSpacesService({ repo: spacesRepo, projects: projectsRepo });
-  const projectsService = createProjectsService({ repo: projectsRepo, spaces: spacesRepo, photos: photosService, audit });
+  const projectsService = createProjectsService({ repo: projectsRepo, audit });
   const customersService = createCustomersService({ repo: createCustomersRepository(db), audit });
   const usersService = createUsersService({ repo: createUsersRepository(db) });
   const catalogRepo = createCatalogRepository(db);
