@@ -1,6 +1,5 @@
 import express, { type Express } from "express";
 import helmet from "helmet";
-import { pinoHttp } from "pino-http";
 import path from "node:path";
 import { existsSync } from "node:fs";
 import { sql as rawSql } from "drizzle-orm";
@@ -9,6 +8,7 @@ import type { Database } from "./db/client.ts";
 import type { Logger } from "./lib/logger.ts";
 import type { Jobs } from "./lib/jobs.ts";
 import { errorMiddleware } from "./lib/error-middleware.ts";
+import { accessLog } from "./lib/access-log.ts";
 import { originCheck } from "./lib/csrf.ts";
 import { AppError } from "./lib/errors.ts";
 import { createAudit } from "./lib/audit.ts";
@@ -104,16 +104,7 @@ export function createApp(deps: AppDeps): Express {
       crossOriginEmbedderPolicy: false,
     }),
   );
-  app.use(
-    pinoHttp({
-      logger,
-      autoLogging: { ignore: (req) => req.url === "/api/health" },
-      serializers: {
-        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
-        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
-      },
-    }),
-  );
+  app.use(accessLog(logger, { ignore: (url) => url === "/api/health" }));
 
   const appOrigin = (fallback?: string) => env.APP_ORIGIN ?? fallback ?? `http://${env.HOST}:${env.PORT}`;
   const audit = createAudit(db);
