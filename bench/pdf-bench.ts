@@ -39,10 +39,12 @@ import { FAN_AND_RIDGE_TITLE } from "../scripts/lib/seed.ts";
 import { demoDatabase } from "./demo-database.ts";
 
 const WARMUP_RENDERS = 5;
-const RENDERS = 500;
+// EAVESIGHT_BENCH_PDF_RENDERS shortens a run (e.g. on a busy machine); EAVESIGHT_BENCH_PDF_OUT names a
+// folder that keeps the first PDF of each font source, to compare as pictures (pdftoppm) and text (pdftotext).
+const RENDERS = Number(process.env.EAVESIGHT_BENCH_PDF_RENDERS) || 500;
 const CHECKPOINT_EVERY = 100;
 const BACK_TO_BACK_RENDERS = 25;
-const BASELINE_RENDERS = 100;
+const BASELINE_RENDERS = Math.min(100, RENDERS);
 const GOAL_MEDIAN_MS = 400;
 const GOAL_P95_MS = 600;
 
@@ -107,7 +109,9 @@ async function renderChild(fonts: FontSource, renders: number, snapshotFile: str
 
   const start = memory("at start (after GC)", { isAfterGc: true });
   const firstT0 = performance.now();
-  const pdfBytes = (await renderProposalPdf(input)).length;
+  const firstPdf = await renderProposalPdf(input);
+  const pdfBytes = firstPdf.length;
+  if (process.env.EAVESIGHT_BENCH_PDF_OUT) await writeFile(path.join(process.env.EAVESIGHT_BENCH_PDF_OUT, `proposal-${fonts}.pdf`), firstPdf);
   const firstRenderMs = performance.now() - firstT0;
   const RENDERS = renders;
   if (isBaseline) {
