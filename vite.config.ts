@@ -28,7 +28,7 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: "unit",
-          include: ["shared/**/*.test.ts", "server/**/*.test.ts", "src/**/*.test.ts"],
+          include: ["shared/**/*.test.ts", "server/**/*.test.ts", "src/**/*.test.{ts,tsx}", "tests/unit/**/*.test.ts"],
           environment: "node",
         },
       },

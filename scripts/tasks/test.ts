@@ -92,11 +92,12 @@ try {
     const r = await run("lint", ["node_modules/eslint/bin/eslint.js", "--max-warnings=0", "."], env);
     results.push({ step: "lint", ok: r.status === 0, summary: r.status === 0 ? "clean" : "problems" });
   }
+  // The API tests read rendered PDFs with poppler-utils; the browser tests need Chromium.
+  if (wants("api") || wants("e2e")) ensureChromium();
   if (wants("unit") || wants("api")) {
     await vitest("unit+api", [...(wants("unit") ? ["unit"] : []), ...(wants("api") ? ["api"] : [])], env);
   }
   if (wants("e2e")) {
-    ensureChromium();
     buildClient({ outDir: clientDir });
     const payments = await startLocalPayments({ appPort: testPort, quiet: true, isTest: true });
     const server = await startServer({ ...env, ...payments.env, PORT: String(testPort), LOG_LEVEL: "error", CLIENT_DIR: clientDir });

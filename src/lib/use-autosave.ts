@@ -46,6 +46,13 @@ export function useAutosave<P, R>(options: AutosaveOptions<P, R>) {
   const [acknowledged, setAcknowledged] = useState(baseline);
   const [isInConflict, setIsInConflict] = useState(options.startInConflict ?? false);
   const versionRef = useRef(initialVersion);
+  // What the server has acknowledged, readable from timers: a timer that fires after the save it
+  // was set for has landed must not send the same content again.
+  const acknowledgedRef = useRef(baseline);
+  const acknowledge = useCallback((value: string) => {
+    acknowledgedRef.current = value;
+    setAcknowledged(value);
+  }, []);
   const inFlightRef = useRef(false);
   const conflictRef = useRef(isInConflict);
   const latest = useRef(options);
@@ -70,7 +77,7 @@ export function useAutosave<P, R>(options: AutosaveOptions<P, R>) {
     },
     onSuccess: ({ result, sent }) => {
       versionRef.current = latest.current.versionOf(result);
-      setAcknowledged(sent);
+      acknowledge(sent);
       latest.current.onSaved?.(result, sent);
     },
     onError: (error) => {
@@ -86,7 +93,9 @@ export function useAutosave<P, R>(options: AutosaveOptions<P, R>) {
   const { mutate } = mutation;
 
   const run = useCallback(() => {
-    if (latest.current.payload === null || conflictRef.current || inFlightRef.current) return;
+    const { payload: current } = latest.current;
+    if (current === null || conflictRef.current || inFlightRef.current) return;
+    if (fingerprint(current) === acknowledgedRef.current) return;
     inFlightRef.current = true;
     mutate();
   }, [mutate]);
@@ -129,13 +138,13 @@ export function useAutosave<P, R>(options: AutosaveOptions<P, R>) {
       conflictRef.current = false;
       setIsInConflict(false);
       mutation.reset();
-      if (choice === "theirs") setAcknowledged(serverFingerprint);
+      if (choice === "theirs") acknowledge(serverFingerprint);
       else {
-        setAcknowledged(serverFingerprint);
+        acknowledge(serverFingerprint);
         setTimeout(run, 0);
       }
     },
-    [mutation, run],
+    [mutation, run, acknowledge],
   );
 
   return {

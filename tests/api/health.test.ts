@@ -10,7 +10,7 @@ beforeAll(async () => {
   t = await startTestApp({ databaseUrl: db.databaseUrl });
 });
 afterAll(async () => {
-  db?.start();
+  await db?.start();
   await t?.close();
   db?.destroy();
 });
@@ -32,14 +32,14 @@ describe("GET /api/health", () => {
     expect(ok.status).toBe(200);
     expect(ok.body).toEqual({ status: "ok", database: "reachable" });
 
-    db.stop("fast");
+    await db.stop("fast");
     try {
       expect(await pollStatus("/api/health", 503)).toBe(503);
       const signIn = await t.request().post("/api/auth/sign-in").set("origin", ORIGIN).send({ email: "someone@test.example", password: "whatever it is" });
       expect(signIn.status).toBe(503);
       expect(signIn.body.error.message).toMatch(/briefly unavailable/);
     } finally {
-      db.start();
+      await db.start();
     }
     expect(await pollStatus("/api/health", 200)).toBe(200);
   });

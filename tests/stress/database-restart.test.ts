@@ -76,9 +76,9 @@ describe("PostgreSQL restarted while requests flow", () => {
 
     await new Promise((r) => setTimeout(r, 2_000));
     const downAt = Date.now();
-    db!.stop("immediate");
+    await db!.stop("immediate");
     await new Promise((r) => setTimeout(r, 3_000));
-    db!.start();
+    await db!.start();
     const upAt = Date.now();
     // Recovery: keep the load on until writes succeed again for a while.
     const deadline = Date.now() + 30_000;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { breakLongToken } from "./break-long-text";
+import { breakLongToken } from "./break-long-text.ts";
 
 describe("breakLongToken", () => {
   it("when the @example is run, then it gives the documented lines", () => {

@@ -273,11 +273,14 @@ function need(entry: EntryDraft, label: string, problems: string[], isRequired =
     return undefined;
   }
   if (entry.value === null) {
-    if (isRequired) problems.push(`Enter the ${label.toLowerCase()}.`);
+    if (isRequired) problems.push(`Enter the ${lowerFirstWord(label)}.`);
     return undefined;
   }
   return entry.value;
 }
+
+/** "Length" → "length", but "NFA per foot" stays "NFA per foot": abbreviations keep their capitals. */
+const lowerFirstWord = (label: string) => label.replace(/^[A-Z][a-z]+\b/, (word) => word.toLowerCase());
 
 function zodMessages(issues: { path: PropertyKey[]; message: string }[]): string[] {
   return issues.map((i) => i.message);
