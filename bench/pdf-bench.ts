@@ -165,7 +165,7 @@ async function renderChild(fonts: FontSource, renders: number, snapshotFile: str
   for (const m of [start, afterWarmup, afterWarmupGc, ...checkpoints, after, afterGc, backToBack, backToBackReleased]) {
     console.log(`  ${m.label.padEnd(45)} ${m.rssMiB.toFixed(1).padStart(8)} ${m.heapUsedMiB.toFixed(1).padStart(14)} ${m.externalMiB.toFixed(1).padStart(14)} ${m.arrayBuffersMiB.toFixed(1).padStart(18)}`);
   }
-  const growthPerHundredHeapMiB = (afterGc.heapUsedMiB - checkpoints[0]!.heapUsedMiB) / checkpoints.length;
+  const growthPerHundredHeapMiB = checkpoints.length ? (afterGc.heapUsedMiB - checkpoints[0]!.heapUsedMiB) / checkpoints.length : Number.NaN;
   console.log(`  growth over the ${RENDERS}: rss ${(afterGc.rssMiB - afterWarmupGc.rssMiB).toFixed(1)} MiB, heapUsed ${(afterGc.heapUsedMiB - afterWarmupGc.heapUsedMiB).toFixed(1)} MiB (both after GC); heapUsed ${growthPerHundredHeapMiB.toFixed(2)} MiB per 100 renders between checkpoints`);
   console.log(`  back-to-back renders kept ${((backToBack.heapUsedMiB - afterGc.heapUsedMiB) / BACK_TO_BACK_RENDERS).toFixed(2)} MiB of heap each until the event loop turned; after the turn ${(backToBackReleased.heapUsedMiB - afterGc.heapUsedMiB).toFixed(1)} MiB stayed`);
   return times;
