@@ -27,11 +27,13 @@ export function woffAsTtfDataUrl(file: string): string {
   return `data:font/ttf;base64,${toSfnt(readFileSync(file)).toString("base64")}`;
 }
 
-export function registerFonts(source: FontSource = "ttf"): void {
+/** Registers the fonts once per process; a later call without a source keeps what is registered. */
+export function registerFonts(source?: FontSource): void {
   if (registered) {
-    if (registered !== source) throw new Error(`the PDF fonts are already registered from ${registered}`);
+    if (source && registered !== source) throw new Error(`the PDF fonts are already registered from ${registered}`);
     return;
   }
+  source ??= "ttf";
   for (const [family, subset] of [["PlexLatin", "latin"], ["PlexLatinExt", "latin-ext"]] as const) {
     Font.register({
       family,
