@@ -1,6 +1,7 @@
 import { fileURLToPath } from "node:url";
 import react from "@vitejs/plugin-react";
 import tailwindcss from "@tailwindcss/vite";
+import { compression } from "vite-plugin-compression2";
 import { defineConfig } from "vitest/config";
 
 const alias = {
@@ -11,11 +12,9 @@ const alias = {
 const apiPort = Number(process.env.PORT ?? 3000);
 
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  // Each built JS, CSS and HTML file over 1 kB also as .br and .gz, served by server/lib/delivery.ts.
+  plugins: [react(), tailwindcss(), compression({ algorithms: ["brotliCompress", "gzip"], threshold: 1024 })],
   resolve: { alias },
-  // convert-units 2.3.4 (the core's unit conversions) loads lodash 2.x modules that read Node's
-  // `global`; browsers only have globalThis.
-  define: { global: "globalThis" },
   build: { outDir: "dist/client", sourcemap: true, chunkSizeWarningLimit: 900 },
   server: {
     host: "127.0.0.1",

@@ -245,7 +245,7 @@ let server: Awaited<ReturnType<typeof startServer>> | undefined;
 let browser: Browser | undefined;
 try {
   server = await startServer({
-    ...process.env, DATABASE_URL: databaseUrl, NODE_ENV: "test", PORT: String(appPort), SMTP_PORT: String(smtp.port), LOG_LEVEL: "error", CLIENT_DIR: clientDir,
+    ...process.env, DATABASE_URL: databaseUrl, NODE_ENV: "test", PORT: String(appPort), APP_ORIGIN: `http://127.0.0.1:${appPort}`, SMTP_PORT: String(smtp.port), LOG_LEVEL: "error", CLIENT_DIR: clientDir,
   });
   browser = await chromium.launch({
     executablePath: CHROMIUM_PATH,

@@ -1,17 +1,19 @@
 import express, { type Express } from "express";
 import helmet from "helmet";
-import path from "node:path";
 import { existsSync } from "node:fs";
 import { sql as rawSql } from "drizzle-orm";
 import type { Env } from "./env.ts";
 import type { Database } from "./db/client.ts";
 import type { Logger } from "./lib/logger.ts";
 import type { Jobs } from "./lib/jobs.ts";
+import { clientRoutes, compressAnswers } from "./lib/delivery.ts";
 import { errorMiddleware } from "./lib/error-middleware.ts";
 import { accessLog } from "./lib/access-log.ts";
 import { originCheck } from "./lib/csrf.ts";
 import { AppError } from "./lib/errors.ts";
 import { createAudit } from "./lib/audit.ts";
+import { requestScopedDb } from "./lib/request-transaction.ts";
+import { createsInTransaction } from "./lib/idempotency.ts";
 import { createLucia } from "./modules/auth/lucia.ts";
 import { sessionMiddleware } from "./modules/auth/session.middleware.ts";
 import type { SessionCache } from "./modules/auth/session-cache.ts";
@@ -72,6 +74,11 @@ export interface AppDeps {
   now?: () => Date;
   /** File storage; by default the driver STORAGE_DRIVER names. */
   storage?: Storage;
+  /**
+   * Prefix of the shared rate-limit counters. Processes of one deployment share the default;
+   * test files each take their own so one file's failed look-ups never limit another's.
+   */
+  rateLimitNamespace?: string;
   /** The payment provider; by default the `stripe` SDK as PAYMENTS_API_BASE and the keys configure it. */
   paymentProvider?: PaymentProvider | null;
   /** Validated sessions kept briefly for reads (modules/auth/session-cache.ts); without it every request asks the database. */
@@ -79,7 +86,9 @@ export interface AppDeps {
 }
 
 export function createApp(deps: AppDeps): Express {
-  const { env, db, logger } = deps;
+  const { env, logger } = deps;
+  // Repositories see the request's transaction when one is running (creating routes), else the pool.
+  const db = requestScopedDb(deps.db);
   const now = deps.now ?? (() => new Date());
   const app = express();
   app.disable("x-powered-by");
@@ -106,7 +115,11 @@ export function createApp(deps: AppDeps): Express {
   );
   app.use(accessLog(logger, { ignore: (url) => url === "/api/health" }));
 
-  const appOrigin = (fallback?: string) => env.APP_ORIGIN ?? fallback ?? `http://${env.HOST}:${env.PORT}`;
+  app.use(compressAnswers());
+
+  // Links in e-mail come from the configured origin only, never from a request header (server/env.ts).
+  const appOrigin = () => env.APP_ORIGIN;
+  app.locals.createsInTransaction = createsInTransaction({ db: deps.db, now });
   const audit = createAudit(db);
   const lucia = createLucia(db);
   const authRepo = createAuthRepository(db);
@@ -128,16 +141,16 @@ export function createApp(deps: AppDeps): Express {
   const optionsService = createOptionsService({ repo: createOptionsRepository(db), projects: projectsRepo, spaces: spacesRepo, catalog: catalogRepo });
 
   const proposalsRepo = createProposalsRepository(db);
-  const proposalJobs = createProposalJobs({ jobs: deps.jobs, repo: proposalsRepo, storage, logger, now, appOrigin: () => appOrigin(), recoveryAfterMs: env.JOBS_RECOVERY_SECONDS * 1_000 });
+  const proposalJobs = createProposalJobs({ jobs: deps.jobs, repo: proposalsRepo, storage, logger, now, appOrigin, recoveryAfterMs: env.JOBS_RECOVERY_SECONDS * 1_000 });
   const proposalsService = createProposalsService({
     repo: proposalsRepo, projects: projectsRepo, spaces: spacesRepo, options: createOptionsRepository(db), catalog: catalogRepo,
-    storage, jobs: proposalJobs, now, appOrigin: () => appOrigin(),
+    storage, jobs: proposalJobs, now, appOrigin,
   });
   const companyService = createCompanyService({ repo: proposalsRepo, storage });
   app.locals.proposalJobs = proposalJobs;
   const paymentsService = createPaymentsService({
     repo: createPaymentsRepository(db), proposals: proposalsService, provider: deps.paymentProvider === undefined ? createPaymentProvider(env) : deps.paymentProvider,
-    jobs: deps.jobs, logger, now, appOrigin: () => appOrigin(),
+    jobs: deps.jobs, logger, now, appOrigin,
   });
 
   const pipelineService = createPipelineService({
@@ -145,13 +158,13 @@ export function createApp(deps: AppDeps): Express {
     liveOptionTotals: async (actor, projectId) => (await optionsService.list(actor, projectId)).map((o) => ({ id: o.id, totalCents: o.price?.totalCents ?? null })),
   });
   const api = express.Router();
-  api.use("/public", ...publicRateLimits());
+  api.use("/public", ...publicRateLimits({ db, now, namespace: deps.rateLimitNamespace ?? "" }));
   // Routes carrying a drawn signature parse their own (larger) JSON first; the parser below then skips them.
   api.use(["/public/proposals/:token/accept", "/auth/me/signature"], signatureJson());
   // The payment webhook's signature covers the raw bytes: read them before the JSON parser.
   api.use(PAYMENTS_WEBHOOK_PATH, paymentsWebhookBody());
   api.use(express.json({ limit: "1mb" }));
-  api.use(originCheck({ allowedOrigins: env.APP_ORIGIN ? [env.APP_ORIGIN] : [], exemptPaths: [/^\/webhooks\//] }));
+  api.use(originCheck({ allowedOrigins: [env.APP_ORIGIN], exemptPaths: [/^\/webhooks\//] }));
 
   api.get("/health", async (_req, res) => {
     try {
@@ -179,11 +192,7 @@ export function createApp(deps: AppDeps): Express {
   app.use("/api", api);
 
   if (deps.clientDir && existsSync(deps.clientDir)) {
-    const dir = deps.clientDir;
-    app.use(express.static(dir, { index: false, maxAge: "1h", setHeaders: (res, file) => {
-      if (file.includes(`${path.sep}assets${path.sep}`)) res.setHeader("Cache-Control", "public, max-age=31536000, immutable");
-    } }));
-    app.get("/{*splat}", (_req, res) => res.sendFile(path.join(dir, "index.html")));
+    app.use(clientRoutes(deps.clientDir));
   }
 
   app.use(errorMiddleware(logger));

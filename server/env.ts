@@ -6,8 +6,12 @@ const EnvSchema = z.object({
   PORT: z.coerce.number().int().min(1).max(65535).default(3000),
   HOST: z.string().default("127.0.0.1"),
   DATABASE_URL: z.string().url(),
-  /** Public origin the app is served from; used for links in e-mail and the CSRF origin check. */
-  APP_ORIGIN: z.string().url().optional(),
+  /**
+   * Public origin the app is served from (scheme, host, port; no path): every link the product
+   * mails is built from it, never from a request's Host, Origin or X-Forwarded-* headers, which
+   * anyone can forge. Required in production; elsewhere it defaults to http://HOST:PORT.
+   */
+  APP_ORIGIN: z.preprocess((v) => (v === "" ? undefined : v), z.string().optional()),
   SMTP_HOST: z.string().default("127.0.0.1"),
   SMTP_PORT: z.coerce.number().int().default(2525),
   MAIL_FROM: z.string().default("Eavesight <no-reply@eavesight.example>"),
@@ -55,11 +59,38 @@ export const LOCAL_PAYMENT_KEYS = {
   STRIPE_WEBHOOK_SECRET: "whsec_eavesight_local_fake",
 } as const;
 
-const EnvWithPaymentsSchema = EnvSchema.transform((env) =>
-  env.NODE_ENV === "production"
+/** An origin as browsers write it ("https://app.example.com"), or an error message saying what is wrong. */
+export function normalizeOrigin(value: string): { origin: string } | { error: string } {
+  let url: URL;
+  try {
+    url = new URL(value);
+  } catch {
+    return { error: `"${value}" is not a URL; give the public origin, e.g. https://app.example.com` };
+  }
+  if (url.protocol !== "http:" && url.protocol !== "https:") return { error: "use an http:// or https:// origin" };
+  if ((url.pathname !== "/" && url.pathname !== "") || url.search || url.hash || url.username || url.password) {
+    return { error: `give the origin only (scheme, host and port), e.g. ${url.origin}` };
+  }
+  return { origin: url.origin };
+}
+
+const EnvWithPaymentsSchema = EnvSchema.transform((env, ctx) => {
+  const withKeys = env.NODE_ENV === "production"
     ? env
-    : { ...env, STRIPE_SECRET_KEY: env.STRIPE_SECRET_KEY ?? LOCAL_PAYMENT_KEYS.STRIPE_SECRET_KEY, STRIPE_WEBHOOK_SECRET: env.STRIPE_WEBHOOK_SECRET ?? LOCAL_PAYMENT_KEYS.STRIPE_WEBHOOK_SECRET },
-).superRefine((env, ctx) => {
+    : { ...env, STRIPE_SECRET_KEY: env.STRIPE_SECRET_KEY ?? LOCAL_PAYMENT_KEYS.STRIPE_SECRET_KEY, STRIPE_WEBHOOK_SECRET: env.STRIPE_WEBHOOK_SECRET ?? LOCAL_PAYMENT_KEYS.STRIPE_WEBHOOK_SECRET };
+  let appOrigin = `http://${env.HOST}:${env.PORT}`;
+  if (env.APP_ORIGIN !== undefined) {
+    const parsed = normalizeOrigin(env.APP_ORIGIN);
+    if ("error" in parsed) ctx.addIssue({ code: "custom", path: ["APP_ORIGIN"], message: parsed.error });
+    else appOrigin = parsed.origin;
+  } else if (env.NODE_ENV === "production") {
+    ctx.addIssue({
+      code: "custom", path: ["APP_ORIGIN"],
+      message: "required in production: the public origin users reach the app at (e.g. https://app.example.com). Links in e-mail (password reset, invitations, proposals) are built from it and never from request headers.",
+    });
+  }
+  return { ...withKeys, APP_ORIGIN: appOrigin };
+}).superRefine((env, ctx) => {
   if (Boolean(env.STRIPE_SECRET_KEY) !== Boolean(env.STRIPE_WEBHOOK_SECRET)) {
     ctx.addIssue({ code: "custom", path: ["STRIPE_WEBHOOK_SECRET"], message: "set STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET together (or neither, for no online deposits)" });
   }

@@ -13,7 +13,10 @@ buildClient();
 const smtp = await startFakeSmtp({ port: smtpPort, databaseUrl });
 log(`fake SMTP server on 127.0.0.1:${smtpPort} (messages appear in Settings → Outbox)`);
 const payments = await startLocalPayments({ appPort: port });
-const server = await startServer({ ...env, ...payments.env, PORT: String(port), SMTP_PORT: String(smtpPort), NODE_ENV: "production" });
+const server = await startServer({ ...env, ...payments.env, PORT: String(port), SMTP_PORT: String(smtpPort), NODE_ENV: "production",
+  // Production refuses to start without it: e-mailed links are built from it alone.
+  APP_ORIGIN: process.env.APP_ORIGIN ?? `http://${process.env.HOST ?? "127.0.0.1"}:${port}`,
+});
 
 console.log(`
   Eavesight is running:  http://127.0.0.1:${port}

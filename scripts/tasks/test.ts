@@ -100,7 +100,7 @@ try {
   if (wants("e2e")) {
     buildClient({ outDir: clientDir });
     const payments = await startLocalPayments({ appPort: testPort, quiet: true, isTest: true });
-    const server = await startServer({ ...env, ...payments.env, PORT: String(testPort), LOG_LEVEL: "error", CLIENT_DIR: clientDir });
+    const server = await startServer({ ...env, ...payments.env, PORT: String(testPort), APP_ORIGIN: `http://127.0.0.1:${testPort}`, LOG_LEVEL: "error", CLIENT_DIR: clientDir });
     try {
       await vitest("e2e", ["e2e"], { ...env, ...payments.env, E2E_BASE_URL: `http://127.0.0.1:${testPort}` });
     } finally {

@@ -23,7 +23,7 @@ export async function startJobs(opts: { databaseUrl: string; logger: Logger; mai
   const boss = new PgBoss({ connectionString: opts.databaseUrl, max: 4 });
   boss.on("error", (err) => opts.logger.warn({ err: { message: err.message } }, "job queue error"));
   await boss.start();
-  await boss.createQueue(QUEUES.email);
+  await createQueues(boss, [QUEUES.email]);
 
   if (opts.runWorkers !== false) {
     await boss.work<OutgoingEmail>(QUEUES.email, { pollingIntervalSeconds: 0.5 }, async (batch) => {
@@ -45,4 +45,22 @@ export async function startJobs(opts: { databaseUrl: string; logger: Logger; mai
       await boss.stop({ graceful: true, timeout: 5_000 });
     },
   };
+}
+
+/**
+ * Creates queues that may not exist yet. Two processes starting on a fresh database can create
+ * the same queue at once and PostgreSQL then ends one with a deadlock (40P01): try again.
+ */
+export async function createQueues(boss: PgBoss, names: readonly string[]): Promise<void> {
+  for (const name of names) {
+    for (let attempt = 1; ; attempt++) {
+      try {
+        await boss.createQueue(name);
+        break;
+      } catch (err) {
+        if ((err as { code?: string }).code !== "40P01" || attempt >= 5) throw err;
+        await new Promise((r) => setTimeout(r, 50 * attempt + Math.random() * 100));
+      }
+    }
+  }
 }

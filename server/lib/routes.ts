@@ -22,12 +22,24 @@ export interface RouteSpec {
   access: Access;
   /** Path parameters that are row ids of the caller's company: a foreign or malformed one answers 404. */
   idParams?: readonly string[];
+  /**
+   * A creating request: runs in one transaction with its audit entry and honours an
+   * Idempotency-Key (server/lib/idempotency.ts). Its handler must answer with `res.json`.
+   */
+  creates?: boolean;
   /** Middleware that runs after the access check (e.g. a body parser); rarely needed. */
   before?: RequestHandler[];
   handler: (req: Request, res: Response) => Promise<void> | void;
 }
 
 export type RouteInfo = Pick<RouteSpec, "method" | "path" | "access" | "idParams">;
+
+/** The app's transaction-and-idempotency middleware (app.locals.createsInTransaction, set by createApp). */
+const createsInTransaction: RequestHandler = (req, res, next) => {
+  const middleware = req.app.locals.createsInTransaction as RequestHandler | undefined;
+  if (!middleware) return next(new Error("createApp did not set app.locals.createsInTransaction"));
+  middleware(req, res, next);
+};
 
 function guard(access: Access): RequestHandler {
   return (req, _res, next) => {
@@ -42,7 +54,7 @@ function guard(access: Access): RequestHandler {
 export function routesRouter(specs: readonly RouteSpec[]): Router & { routes: readonly RouteInfo[] } {
   const router = Router() as Router & { routes: readonly RouteInfo[] };
   for (const spec of specs) {
-    router[spec.method](spec.path, guard(spec.access), ...(spec.before ?? []), spec.handler);
+    router[spec.method](spec.path, guard(spec.access), ...(spec.before ?? []), ...(spec.creates ? [createsInTransaction] : []), spec.handler);
   }
   router.routes = specs.map(({ method, path, access, idParams }) => ({ method, path, access, ...(idParams ? { idParams } : {}) }));
   return router;

@@ -141,3 +141,145 @@ describe("rejected entries", () => {
     );
   });
 });
+
+/**
+ * Drawing and tape notation. A dash between feet and inches joins them: `17'-9"` is 17 ft 9 in, and
+ * a dash in a mixed number (`3-1/2"`) is 3½ — common practice on US architectural drawings and in
+ * lumber and trim sizes (from memory; no standard's text checked here). The prime ′ and double prime ″
+ * are the Unicode foot and inch marks (U+2032 PRIME, U+2033 DOUBLE PRIME; U+02B9/U+02BA are the
+ * modifier-letter look-alikes), and ½ ¼ ¾ ⅛ ⅜ ⅝ ⅞ are the vulgar fractions of U+00BC–U+00BE and
+ * U+2150–U+215E whose NFKC form is digits around U+2044 FRACTION SLASH (Unicode Character
+ * Database, checked with Python's unicodedata).
+ */
+describe("drawing notation", () => {
+  it.each([
+    [`17'-9"`, 17 + 9 / 12],
+    [`24'-6"`, 24 + 6 / 12],
+    [`17' -9"`, 17 + 9 / 12],
+    [`17ft-9in`, 17 + 9 / 12],
+    [`17'-9`, 17 + 9 / 12],
+    [`4'-3 1/2"`, 4 + 3.5 / 12],
+    [`4'-3-1/2"`, 4 + 3.5 / 12],
+    [`4'-0"`, 4],
+    [`3-1/2"`, 3.5 / 12],
+    [`17′-9″`, 17 + 9 / 12],
+    [`17ʹ-9ʺ`, 17 + 9 / 12],
+    [`4′-3½″`, 4 + 3.5 / 12],
+    [`4'-3 ½"`, 4 + 3.5 / 12],
+    [`¾"`, 0.75 / 12],
+    [`2¼ in`, 2.25 / 12],
+    [`10'-7⅛"`, 10 + 7.125 / 12],
+    [`10'-7⅜"`, 10 + 7.375 / 12],
+    [`10'-7⅝"`, 10 + 7.625 / 12],
+    [`10'-7⅞"`, 10 + 7.875 / 12],
+    [`6 1⁄2"`, 6.5 / 12],
+  ])("when given %s, then the dash joins feet and inches (%d ft)", (text, valueFt) => {
+    expect(lengthOf(text)).toBeCloseTo(valueFt, 12);
+  });
+
+  it("when feet and inches are joined by a dash, then understood shows them as one length", () => {
+    expect(parseLengthFt(`17'-9"`)).toEqual({ ok: true, kind: "length", valueFt: 17.75, understood: "17 ft 9 in = 17.75 ft" });
+  });
+
+  it("when the minus has spaces on both sides, then it subtracts (17 ft − 9 in = 16.25 ft)", () => {
+    expect(lengthOf(`17' - 9"`)).toBe(16.25);
+    expect(lengthOf(`24 ft - 6 in`)).toBe(23.5);
+    // Feet minus feet is never drawing notation: subtraction even without spaces.
+    expect(lengthOf(`20'-5'`)).toBe(15);
+  });
+
+  it("when a length written in feet and inches is a side of a rectangle, then the area is the product (26.5 × 40 = 1,060 sq ft)", () => {
+    expect(parseAreaSqFt(`26'6" x 40'`)).toEqual({
+      ok: true,
+      kind: "area",
+      valueSqFt: 1060,
+      understood: "26 ft 6 in × 40 ft = 1,060 sq ft",
+    });
+    expect(areaOf(`26'-6" x 40'`)).toBe(1060);
+    expect(areaOf(`26' 6" × 40' 0"`)).toBe(1060);
+    expect(areaOf(`40' x 26'6"`)).toBe(1060);
+    expect(areaOf(`26'6" x 40' + 10' x 12'`)).toBe(1060 + 120);
+    expect(areaOf(`2 x (26'-6" x 40')`)).toBe(2120);
+  });
+
+  it("when metres and millimetres are given, then 1 ft = 0.3048 m exactly (NIST SP 811 App. B)", () => {
+    expect(lengthOf("5.2 m")).toBeCloseTo(5.2 / 0.3048, 12);
+    expect(lengthOf("5200 mm")).toBeCloseTo(5.2 / 0.3048, 12);
+    expect(lengthOf("5 m 200 mm")).toBeCloseTo(5.2 / 0.3048, 12);
+    expect(areaOf("8.1 m x 12 m")).toBeCloseTo((8.1 * 12) / 0.09290304, 9);
+    expect(areaOf("8100 mm x 12000 mm")).toBeCloseTo((8.1 * 12) / 0.09290304, 9);
+  });
+
+  it("when a dash is left hanging or joins the wrong units, then it answers with a message", () => {
+    for (const text of [`17'-`, `17'-"`, `-17'`, `17'--9"`]) {
+      const result = parseLengthFt(text);
+      expect(result.ok, text).toBe(false);
+    }
+  });
+});
+
+describe("against convert-units (property)", () => {
+  // convert-units 2.3.4 is exact within a system (in → ft is 1/12) and bridges ft ↔ m with the
+  // rounded 3.28084, so imperial values must agree to 1e-9 and metric ones to 1e-5 relative.
+  const feetArb = fc.integer({ min: 0, max: 400 });
+  const inchArb = fc.integer({ min: 0, max: 11 });
+  const eighthsArb = fc.integer({ min: 0, max: 7 });
+  const fractionText = (eighths: number): string => {
+    if (eighths === 0) return "";
+    let numerator = eighths;
+    let denominator = 8;
+    while (numerator % 2 === 0) {
+      numerator /= 2;
+      denominator /= 2;
+    }
+    return `${numerator}/${denominator}`;
+  };
+  const GLYPH: Record<number, string> = { 1: "⅛", 2: "¼", 3: "⅜", 4: "½", 5: "⅝", 6: "¾", 7: "⅞" };
+
+  it("when random feet, inches and eighths are written in drawing notation, then the value is what convert-units gives", () => {
+    fc.assert(
+      fc.property(feetArb, inchArb, eighthsArb, fc.constantFrom("dash", "space", "words", "unicode", "glyph"), (feet, inches, eighths, style) => {
+        fc.pre(feet + inches + eighths > 0);
+        const inchTotal = inches + eighths / 8;
+        const fraction = fractionText(eighths);
+        const inchPart = fraction ? `${inches} ${fraction}` : String(inches);
+        const text =
+          style === "dash" ? `${feet}'-${inchPart}"`
+          : style === "space" ? `${feet}' ${inchPart}"`
+          : style === "words" ? `${feet} ft ${inchPart} in`
+          : style === "unicode" ? `${feet}′-${inchPart}″`
+          : `${feet}'-${inches}${eighths ? GLYPH[eighths] : ""}"`;
+        const expected = convert(feet).from("ft").to("in") + inchTotal;
+        expect(lengthOf(text)).toBeCloseTo(convert(expected).from("in").to("ft"), 9);
+      }),
+      { numRuns: 500 },
+    );
+  });
+
+  it("when random metric lengths are given in m, cm or mm, then the value is what convert-units gives", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 3_000_000 }), fc.constantFrom("m", "cm", "mm"), (micrometresTimesTen, unit) => {
+        // A length between 0.1 mm and 300 m, written with up to 4 decimals in its unit.
+        const metres = micrometresTimesTen / 10_000;
+        const inUnit = convert(metres).from("m").to(unit);
+        const text = `${Number(inUnit.toFixed(4))} ${unit}`;
+        const expectedFt = convert(Number(inUnit.toFixed(4))).from(unit).to("ft");
+        const valueFt = lengthOf(text);
+        expect(Math.abs(valueFt - expectedFt) / expectedFt).toBeLessThan(1e-5);
+      }),
+      { numRuns: 500 },
+    );
+  });
+
+  it("when two random sides are multiplied, then the area is what convert-units gives", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 99 }), inchArb, fc.integer({ min: 1, max: 99 }), inchArb, (aFt, aIn, bFt, bIn) => {
+        const a = convert(aFt).from("ft").to("in") + aIn;
+        const b = convert(bFt).from("ft").to("in") + bIn;
+        const expectedSqFt = convert(a * b).from("in2").to("ft2");
+        expect(areaOf(`${aFt}'-${aIn}" x ${bFt}'${bIn}"`)).toBeCloseTo(expectedSqFt, 8);
+      }),
+      { numRuns: 300 },
+    );
+  });
+});

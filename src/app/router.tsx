@@ -1,9 +1,9 @@
 import { createBrowserRouter, redirect, type RouteObject } from "react-router";
 import { paths } from "@/config/paths";
 import { redirectIfSignedIn, requireArea, requireSession } from "./guards";
-import { AppLayout } from "./layouts/app-layout";
+import { surveyQueries } from "@/features/survey/api/queries";
+import { queryClient } from "@/lib/query-client";
 import { AuthLayout } from "./layouts/auth-layout";
-import { SettingsLayout } from "./layouts/settings-layout";
 import { FullPageLoading, RootLayout } from "./layouts/root-layout";
 import { RootErrorPage, RouteErrorPage } from "./route-error-page";
 import { Component as NotFoundRoute } from "./routes/not-found";
@@ -27,7 +27,13 @@ const appRoutes: RouteObject[] = [
   },
   {
     path: paths.app.project.path,
-    loader: requireArea("projects"),
+    // The project is asked for together with the page's code and the session, not after the code runs.
+    loader: async (args) => {
+      const project = queryClient.prefetchQuery(surveyQueries.project(args.params.projectId ?? ""));
+      await requireArea("projects")(args);
+      await project;
+      return null;
+    },
     lazy: () => import("./routes/projects-detail"),
   },
   {
@@ -77,7 +83,7 @@ const appRoutes: RouteObject[] = [
   },
   {
     path: paths.app.settings.root.path,
-    element: <SettingsLayout />,
+    lazy: () => import("./layouts/settings-layout").then(({ SettingsLayout }) => ({ Component: SettingsLayout })),
     children: [
       { index: true, loader: () => redirect(paths.app.settings.profile.getHref()) },
       {
@@ -126,7 +132,8 @@ export const routes: RouteObject[] = [
       {
         id: "app",
         loader: requireSession,
-        element: <AppLayout />,
+        // The signed-in shell (navigation, menus, dialogs) is not part of the sign-in page's code.
+        lazy: () => import("./layouts/app-layout").then(({ AppLayout }) => ({ Component: AppLayout })),
         children: [{ errorElement: <RouteErrorPage />, children: appRoutes }],
       },
     ],

@@ -120,7 +120,32 @@ async function request<T>(method: string, path: string, options: RequestOptions 
   return (text === "" ? undefined : JSON.parse(text)) as T;
 }
 
+/** Waits before the 2nd and 3rd try of a creating request. */
+const CREATE_RETRY_DELAYS_MS = [1_000, 2_000];
+const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
+
+/**
+ * A creating POST (one form submission): it carries one Idempotency-Key, and when the answer is
+ * unsure (503 while the database is away, or no answer at all) it is sent again with the same key,
+ * so the server hands back the first result instead of creating a second row.
+ */
+async function create<T>(path: string, body: Json, options: Omit<RequestOptions, "body"> = {}): Promise<T> {
+  const key = crypto.randomUUID();
+  const headers = { ...options.headers, "idempotency-key": key };
+  for (let attempt = 0; ; attempt++) {
+    try {
+      return await request<T>("POST", path, { ...options, headers, body });
+    } catch (error) {
+      const unsure = isApiError(error) && (error.status === 503 || error.isNetworkError);
+      const delayMs = CREATE_RETRY_DELAYS_MS[attempt];
+      if (!unsure || delayMs === undefined || options.signal?.aborted) throw error;
+      await sleep(delayMs);
+    }
+  }
+}
+
 export const apiClient = {
+  create,
   get: <T>(path: string, options?: Omit<RequestOptions, "body">) => request<T>("GET", path, options),
   post: <T>(path: string, body?: Json, options?: Omit<RequestOptions, "body">) =>
     request<T>("POST", path, { ...options, body }),

@@ -69,7 +69,8 @@ async function surveyFlow(page: Page, tag: string, isPhone: boolean) {
   await page.getByLabel("Ridge length").fill(`38'`);
   await page.getByRole("button", { name: "Add rectangle" }).click();
   await page.getByLabel("Length (along the ridge)").fill(`40'`);
-  await page.getByLabel("Width (eave to eave)").fill(`28' 6"`);
+  // Drawing notation: the dash joins feet and inches (28 ft 6 in, not 28 ft minus 6 in).
+  await page.getByLabel("Width (eave to eave)").fill(`28'-6"`);
   await page.getByText("28 ft 6 in = 28.5 ft").first().waitFor();
   // A bad entry says why and keeps the text.
   await page.getByRole("button", { name: "Add area" }).click();
@@ -77,8 +78,9 @@ async function surveyFlow(page: Page, tag: string, isPhone: boolean) {
   await area.fill("12 x twenty");
   await page.getByText(/I don't understand "twenty"/).first().waitFor();
   expect(await area.inputValue()).toBe("12 x twenty");
-  await area.fill("12 x 20");
-  await page.getByText("= 240 sq ft").first().waitFor();
+  // An expression: its reader (mathjs) loads on demand and the entry is read when it arrives.
+  await area.fill("12 x 8 + 12 x 12");
+  await page.getByText("12 ft × 8 ft + 12 ft × 12 ft = 240 sq ft").first().waitFor();
 
   // A ridge vent and a powered gable fan from the quick-add buttons.
   await page.getByRole("button", { name: "Ridge vent", exact: true }).click();

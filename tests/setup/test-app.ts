@@ -27,14 +27,14 @@ export const TEST_PASSWORD = "correct horse battery";
  * `runWorkers: false` leaves background jobs (mail, PDF) to other processes, e.g. for a test
  * that stops the database, where another file's queued job must not be half-run.
  */
-export async function startTestApp(opts: { envOverrides?: Record<string, string>; runWorkers?: boolean; databaseUrl?: string } = {}) {
+export async function startTestApp(opts: { envOverrides?: Record<string, string | undefined>; runWorkers?: boolean; databaseUrl?: string; rateLimitNamespace?: string } = {}) {
   const databaseUrl = opts.databaseUrl ?? testDatabaseUrl();
   const storageDir = mkdtempSync(path.join(tmpdir(), "eavesight-files-"));
   const env = parseEnv({
-    ...process.env, DATABASE_URL: databaseUrl, APP_ORIGIN: ORIGIN, LOG_LEVEL: "silent", SERVE_CLIENT: "false",
+    ...process.env, DATABASE_URL: databaseUrl, APP_ORIGIN: ORIGIN, LOG_LEVEL: process.env.TEST_LOG_LEVEL ?? "silent", SERVE_CLIENT: "false",
     STORAGE_DRIVER: "local", STORAGE_DIR: storageDir, ...opts.envOverrides,
   });
-  const logger = createLogger("silent");
+  const logger = createLogger((process.env.TEST_LOG_LEVEL ?? "silent") as "silent");
   const { db, sql } = createDb(databaseUrl, { max: 5 });
   const mailer = createMailer({ host: "127.0.0.1", port: testSmtpPort(), from: "Eavesight <no-reply@eavesight.example>" });
   const jobs = await startJobs({ databaseUrl, logger, mailer, runWorkers: opts.runWorkers });
@@ -43,7 +43,7 @@ export async function startTestApp(opts: { envOverrides?: Record<string, string>
   // As server/index.ts: reads are answered from the session cache, so every API test runs with it.
   const sessionCache = createSessionCache({ databaseUrl, logger });
   await sessionCache.ready;
-  const app = createApp({ env, db, logger, jobs, now, sessionCache });
+  const app = createApp({ env, db, logger, jobs, now, sessionCache, rateLimitNamespace: opts.rateLimitNamespace ?? `test-${randomUUID()}:` });
 
   /** A company of its own per test file, so files never see each other's rows. */
   async function makeCompany(name = `Test Co ${randomUUID().slice(0, 8)}`) {
@@ -60,7 +60,7 @@ export async function startTestApp(opts: { envOverrides?: Record<string, string>
   /** A supertest agent signed in as the user (cookie kept), sending this app's Origin. */
   async function signIn(email: string, password = TEST_PASSWORD) {
     const agent = request.agent(app);
-    const res = await agent.post("/api/auth/sign-in").set("origin", ORIGIN).send({ email, password });
+    const res = await agent.post("/api/auth/sign-in").set("origin", env.APP_ORIGIN).send({ email, password });
     if (res.status !== 200) throw new Error(`sign-in failed for ${email}: ${res.status} ${JSON.stringify(res.body)}`);
     return agent;
   }

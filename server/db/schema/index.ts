@@ -13,3 +13,4 @@ export * from "./catalog-items.ts";
 export * from "./design-options.ts";
 export * from "./proposals.ts";
 export * from "./payments.ts";
+export * from "./limits.ts";

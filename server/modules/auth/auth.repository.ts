@@ -1,6 +1,8 @@
 import { and, eq, gt, sql, isNull, count, min } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
-import { auditEvents, companies, invites, passwordResets, sessions, users } from "../../db/schema/index.ts";
+import { authAttempts, companies, invites, passwordResets, sessions, users } from "../../db/schema/index.ts";
+
+export type AttemptKind = (typeof authAttempts.$inferInsert)["kind"];
 
 export function createAuthRepository(db: Database) {
   return {
@@ -26,28 +28,41 @@ export function createAuthRepository(db: Database) {
     },
     deleteSessionsOfUser: (userId: string) => db.delete(sessions).where(eq(sessions.userId, userId)),
 
-    /** Failed sign-ins in the window, for one address and for one IP, and when the oldest happened. */
-    async countFailures(opts: { email: string; ip: string | null; since: Date }) {
-      const base = and(eq(auditEvents.event, "sign-in-failed"), gt(auditEvents.createdAt, opts.since));
-      const [byEmail] = await db
-        .select({ n: count(), oldest: min(auditEvents.createdAt) })
-        .from(auditEvents)
-        .where(and(base, eq(auditEvents.subjectEmail, opts.email)));
-      const [byIp] = opts.ip
-        ? await db.select({ n: count(), oldest: min(auditEvents.createdAt) }).from(auditEvents).where(and(base, eq(auditEvents.ip, opts.ip)))
-        : [{ n: 0, oldest: null }];
-      return { byEmail: byEmail ?? { n: 0, oldest: null }, byIp: byIp ?? { n: 0, oldest: null } };
+    /**
+     * Counts the guarded attempts in the window for this account and this address and, when both
+     * are under their limits, records this one: all under advisory locks on the account and the
+     * address (always taken in that order, so two bursts cannot deadlock). Parallel requests
+     * therefore queue for the count, and a burst of any size gets at most the limit through,
+     * whichever server process serves it. Answers the new attempt's id, or when the oldest
+     * counted attempt was, to say how long to wait.
+     */
+    async reserveAttempt(opts: { kind: AttemptKind; account: string; ip: string | null; since: Date; now: Date; maxPerAccount: number; maxPerIp: number }) {
+      return db.transaction(async (tx) => {
+        const lock = (what: string) => tx.execute(sql`select pg_advisory_xact_lock(hashtextextended(${what}, 0))`);
+        await lock(`auth-attempt:${opts.kind}:account:${opts.account}`);
+        if (opts.ip) await lock(`auth-attempt:${opts.kind}:ip:${opts.ip}`);
+        const counted = and(eq(authAttempts.kind, opts.kind), gt(authAttempts.createdAt, opts.since), isNull(authAttempts.succeededAt));
+        const [byAccount] = await tx.select({ n: count(), oldest: min(authAttempts.createdAt) }).from(authAttempts).where(and(counted, eq(authAttempts.account, opts.account)));
+        if (byAccount && byAccount.n >= opts.maxPerAccount) return { blocked: true as const, oldest: byAccount.oldest! };
+        if (opts.ip) {
+          const [byIp] = await tx.select({ n: count(), oldest: min(authAttempts.createdAt) }).from(authAttempts).where(and(counted, eq(authAttempts.ip, opts.ip)));
+          if (byIp && byIp.n >= opts.maxPerIp) return { blocked: true as const, oldest: byIp.oldest! };
+        }
+        const [row] = await tx.insert(authAttempts).values({ kind: opts.kind, account: opts.account, ip: opts.ip, createdAt: opts.now }).returning({ id: authAttempts.id });
+        return { blocked: false as const, id: row!.id };
+      });
     },
-    async lastSuccessAfter(email: string, since: Date) {
-      const [row] = await db
-        .select({ at: min(auditEvents.createdAt) })
-        .from(auditEvents)
-        .where(and(eq(auditEvents.event, "sign-in"), eq(auditEvents.subjectEmail, email), gt(auditEvents.createdAt, since)));
-      return row?.at ?? null;
+    /** A successful attempt stops counting toward the limits. */
+    async markAttemptSucceeded(id: number, at: Date) {
+      await db.update(authAttempts).set({ succeededAt: at }).where(eq(authAttempts.id, id));
     },
 
-    async insertReset(row: typeof passwordResets.$inferInsert) {
-      await db.insert(passwordResets).values(row);
+    /** Stores a new reset token and voids every older unused one of the user, together. */
+    async replaceReset(row: typeof passwordResets.$inferInsert & { createdAt: Date }) {
+      await db.transaction(async (tx) => {
+        await tx.update(passwordResets).set({ usedAt: row.createdAt }).where(and(eq(passwordResets.userId, row.userId), isNull(passwordResets.usedAt)));
+        await tx.insert(passwordResets).values(row);
+      });
     },
     /** Marks a valid reset token used, atomically, and returns it; null when unknown, used or expired. */
     async consumeReset(tokenHash: string, now: Date) {

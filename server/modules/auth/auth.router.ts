@@ -58,7 +58,7 @@ export function authRouter(service: AuthService, lucia: AppLucia) {
       method: "post", path: "/auth/password-reset/request", access: "public",
       handler: async (req, res) => {
         const { email } = parse(ResetRequestSchema, req.body);
-        await service.requestReset(email, metaOf(req), req.get("origin") ?? undefined);
+        await service.requestReset(email, metaOf(req));
         res.status(202).json({ message: "If an account exists for that address, we have sent it a link to reset the password." });
       },
     },

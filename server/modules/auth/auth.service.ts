@@ -3,23 +3,39 @@ import { AppError } from "../../lib/errors.ts";
 import { dummyPasswordHash, hashPassword, verifyPassword } from "../../lib/password.ts";
 import { hashToken, newToken } from "../../lib/tokens.ts";
 import type { Audit } from "../../lib/audit.ts";
-import type { Jobs } from "../../lib/jobs.ts";
+import { createQueues, type Jobs } from "../../lib/jobs.ts";
 import type { RequestMeta } from "../../lib/request-context.ts";
-import type { AuthRepository } from "./auth.repository.ts";
+import type { AttemptKind, AuthRepository } from "./auth.repository.ts";
 import { SESSION_ABSOLUTE_MS, type AppLucia } from "./lucia.ts";
 
-/** Sign-in throttling: counted from the audit table, so it holds across server processes. */
+/**
+ * Limits on guarded attempts, counted atomically in PostgreSQL before any password is checked
+ * (auth.repository.ts `reserveAttempt`), so they hold under a parallel burst and across every
+ * server process. Sign-ins that succeed stop counting; reset requests always count.
+ */
 export const LOCKOUT_WINDOW_MS = 15 * 60 * 1000;
 export const MAX_FAILURES_PER_ACCOUNT = 5;
 export const MAX_FAILURES_PER_IP = 20;
 export const RESET_TTL_MS = 60 * 60 * 1000;
+export const RESET_WINDOW_MS = 60 * 60 * 1000;
+export const MAX_RESETS_PER_ACCOUNT = 3;
+export const MAX_RESETS_PER_IP = 10;
+
+/** The queue whose job makes and mails a reset link; queued alike for known and unknown addresses. */
+export const RESET_QUEUE = "password-reset";
+interface ResetJob {
+  email: string;
+  /** The configured origin of the server that took the request (never a request header). */
+  origin: string;
+}
 
 export interface AuthDeps {
   repo: AuthRepository;
   lucia: AppLucia;
   audit: Audit;
   jobs: Jobs;
-  appOrigin: (fallback?: string) => string;
+  /** The configured public origin; mailed links never come from request headers. */
+  appOrigin: () => string;
   now?: () => Date;
 }
 
@@ -39,17 +55,49 @@ export function createAuthService(deps: AuthDeps) {
     return { user: publicUser(user), company: company! };
   }
 
-  async function throttle(email: string, meta: RequestMeta) {
-    const since = new Date(now().getTime() - LOCKOUT_WINDOW_MS);
-    const { byEmail, byIp } = await deps.repo.countFailures({ email, ip: meta.ip, since });
-    const over =
-      byEmail.n >= MAX_FAILURES_PER_ACCOUNT ? byEmail.oldest : byIp.n >= MAX_FAILURES_PER_IP ? byIp.oldest : null;
-    if (over) {
-      const waitMs = new Date(over).getTime() + LOCKOUT_WINDOW_MS - now().getTime();
+  /** Records one attempt if the account and the address are under their limits; else 429 with the wait. */
+  async function reserveAttempt(kind: AttemptKind, account: string, meta: RequestMeta, limits: { windowMs: number; maxPerAccount: number; maxPerIp: number }) {
+    const t = now();
+    const result = await deps.repo.reserveAttempt({
+      kind, account, ip: meta.ip, now: t, since: new Date(t.getTime() - limits.windowMs),
+      maxPerAccount: limits.maxPerAccount, maxPerIp: limits.maxPerIp,
+    });
+    if (result.blocked) {
+      const waitMs = new Date(result.oldest).getTime() + limits.windowMs - t.getTime();
       const minutes = Math.max(1, Math.ceil(waitMs / 60_000));
       throw new AppError("rate-limited", `Too many attempts. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`, 429);
     }
+    return result.id;
   }
+  const signInLimits = { windowMs: LOCKOUT_WINDOW_MS, maxPerAccount: MAX_FAILURES_PER_ACCOUNT, maxPerIp: MAX_FAILURES_PER_IP };
+
+  /** Makes the reset link and mails it; for an unknown or inactive address it does nothing. */
+  async function sendResetLink(job: ResetJob) {
+    const user = await deps.repo.findUserByEmail(job.email);
+    if (!user || !user.isActive) return;
+    const { token, tokenHash } = newToken();
+    const t = now();
+    await deps.repo.replaceReset({ userId: user.id, tokenHash, createdAt: t, expiresAt: new Date(t.getTime() + RESET_TTL_MS) });
+    await deps.jobs.sendEmail({
+      companyId: user.companyId,
+      to: user.email,
+      subject: "Reset your Eavesight password",
+      text: `Hello ${user.name},\n\nSomeone (we hope you) asked to reset the password of your Eavesight account. Open this link within one hour to choose a new password:\n\n${job.origin}/reset-password?token=${token}\n\nIf it was not you, ignore this message; your password stays as it is. Only the newest link you asked for works.`,
+    });
+  }
+
+  const boss = deps.jobs.boss;
+  const setUp = async () => {
+    await createQueues(boss, [RESET_QUEUE]);
+    if (!deps.jobs.runsWorkers) return;
+    await boss.work<ResetJob>(RESET_QUEUE, { pollingIntervalSeconds: 0.5 }, async (batch) => {
+      for (const job of batch) await sendResetLink(job.data);
+    });
+  };
+  // Awaited by every enqueue; a failed set-up (the database away at start) is tried again by the next.
+  let ready: Promise<void> = setUp();
+  ready.catch(() => {});
+  const queueReady = () => ready.catch(() => (ready = setUp()));
 
   async function createSession(userId: string) {
     return deps.lucia.createSession(userId, { absoluteExpiresAt: new Date(now().getTime() + SESSION_ABSOLUTE_MS) });
@@ -60,7 +108,7 @@ export function createAuthService(deps: AuthDeps) {
     createSession,
 
     async signIn(input: { email: string; password: string }, meta: RequestMeta) {
-      await throttle(input.email, meta);
+      const attemptId = await reserveAttempt("sign-in", input.email, meta, signInLimits);
       const user = await deps.repo.findUserByEmail(input.email);
       const ok = user
         ? await verifyPassword(user.passwordHash, input.password)
@@ -69,6 +117,7 @@ export function createAuthService(deps: AuthDeps) {
         await deps.audit({ event: "sign-in-failed", subjectEmail: input.email, companyId: user?.companyId, userId: user?.id, detail: { reason: !user ? "unknown-email" : !ok ? "wrong-password" : "inactive" } }, meta);
         throw new AppError("invalid-credentials", "That e-mail and password do not match an active account.", 401);
       }
+      await deps.repo.markAttemptSucceeded(attemptId, now());
       const session = await createSession(user.id);
       await deps.audit({ event: "sign-in", subjectEmail: input.email, companyId: user.companyId, userId: user.id }, meta);
       return { session, ...(await me(user.id)) };
@@ -90,10 +139,14 @@ export function createAuthService(deps: AuthDeps) {
     },
 
     async changePassword(userId: string, sessionId: string, input: { currentPassword: string; newPassword: string }, meta: RequestMeta) {
+      // A stolen session must not be able to guess the current password either.
+      const attemptId = await reserveAttempt("password-change", userId, meta, signInLimits);
       const user = await deps.repo.findUserById(userId);
       if (!user || !(await verifyPassword(user.passwordHash, input.currentPassword))) {
+        await deps.audit({ event: "password-change-failed", userId, companyId: user?.companyId }, meta);
         throw new AppError("wrong-password", "Your current password is not right.", 400, { currentPassword: "Your current password is not right." });
       }
+      await deps.repo.markAttemptSucceeded(attemptId, now());
       await deps.repo.updateUser(userId, { passwordHash: await hashPassword(input.newPassword) });
       // Other devices signed in with the old password are signed out; this one stays.
       const sessions = await deps.lucia.getUserSessions(userId);
@@ -101,20 +154,17 @@ export function createAuthService(deps: AuthDeps) {
       await deps.audit({ event: "password-changed", userId, companyId: user.companyId }, meta);
     },
 
-    /** Same answer whether or not the address exists; only a real account gets mail. */
-    async requestReset(email: string, meta: RequestMeta, origin?: string) {
-      const user = await deps.repo.findUserByEmail(email);
-      await deps.audit({ event: "password-reset-requested", subjectEmail: email, userId: user?.id, companyId: user?.companyId }, meta);
-      if (!user || !user.isActive) return;
-      const { token, tokenHash } = newToken();
-      await deps.repo.insertReset({ userId: user.id, tokenHash, expiresAt: new Date(now().getTime() + RESET_TTL_MS) });
-      const link = `${deps.appOrigin(origin)}/reset-password?token=${token}`;
-      await deps.jobs.sendEmail({
-        companyId: user.companyId,
-        to: user.email,
-        subject: "Reset your Eavesight password",
-        text: `Hello ${user.name},\n\nSomeone (we hope you) asked to reset the password of your Eavesight account. Open this link within one hour to choose a new password:\n\n${link}\n\nIf it was not you, ignore this message; your password stays as it is.`,
-      });
+    /**
+     * Same answer, and the same work, whether or not the address has an account: count the
+     * request against the limits, write the audit entry, queue the job. Only the job looks the
+     * address up (and mails a link when it is a real, active account), so neither the answer
+     * nor its timing tells an address with an account from one without.
+     */
+    async requestReset(email: string, meta: RequestMeta) {
+      await reserveAttempt("password-reset", email, meta, { windowMs: RESET_WINDOW_MS, maxPerAccount: MAX_RESETS_PER_ACCOUNT, maxPerIp: MAX_RESETS_PER_IP });
+      await deps.audit({ event: "password-reset-requested", subjectEmail: email }, meta);
+      await queueReady();
+      await boss.send(RESET_QUEUE, { email, origin: deps.appOrigin() } satisfies ResetJob, { retryLimit: 5, retryDelay: 2, retryBackoff: true });
     },
 
     async confirmReset(input: { token: string; password: string }, meta: RequestMeta) {

@@ -25,7 +25,7 @@ export function catalogRouter(service: CatalogService) {
       handler: async (req, res) => { res.json(await service.list(actorOf(req), parse(CatalogListQuerySchema, req.query))); },
     },
     {
-      method: "post", path: "/catalog", access: "catalog:edit",
+      method: "post", path: "/catalog", access: "catalog:edit", creates: true,
       handler: async (req, res) => {
         res.status(201).json({ item: await service.create(actorOf(req), parse(CatalogItemInputSchema, req.body), metaOf(req)) });
       },

@@ -13,7 +13,7 @@ export function customersRouter(service: CustomersService) {
       handler: async (req, res) => { res.json(await service.list(actorOf(req), parse(CustomerListQuerySchema, req.query))); },
     },
     {
-      method: "post", path: "/customers", access: "customers:edit",
+      method: "post", path: "/customers", access: "customers:edit", creates: true,
       handler: async (req, res) => {
         res.status(201).json({ customer: await service.create(actorOf(req), parse(CustomerInputSchema, req.body), metaOf(req)) });
       },

@@ -21,7 +21,7 @@ export function optionsRouter(service: OptionsService) {
       handler: async (req, res) => { res.json({ options: await service.list(actorOf(req), projectId(req)) }); },
     },
     {
-      method: "post", path: "/projects/:id/options", access: "options:edit", idParams: ["id"],
+      method: "post", path: "/projects/:id/options", access: "options:edit", idParams: ["id"], creates: true,
       handler: async (req, res) => {
         const id = projectId(req);
         res.status(201).json({ option: await service.create(actorOf(req), id, parse(DesignOptionInputSchema, req.body)) });

@@ -14,7 +14,7 @@ export function projectsRouter(service: ProjectsService) {
       handler: async (req, res) => { res.json(await service.list(actorOf(req), parse(ListQuerySchema, req.query))); },
     },
     {
-      method: "post", path: "/projects", access: "projects:edit",
+      method: "post", path: "/projects", access: "projects:edit", creates: true,
       handler: async (req, res) => {
         res.status(201).json({ project: await service.create(actorOf(req), parse(ProjectInputSchema, req.body), metaOf(req)) });
       },

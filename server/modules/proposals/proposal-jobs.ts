@@ -1,6 +1,6 @@
 import type PgBoss from "pg-boss";
 import type { Logger } from "../../lib/logger.ts";
-import type { Jobs } from "../../lib/jobs.ts";
+import { createQueues, type Jobs } from "../../lib/jobs.ts";
 import type { OutgoingEmail } from "../../lib/mailer.ts";
 import { readAll, type Storage } from "../../lib/storage/index.ts";
 import { isDueToExpire, reminderDecision } from "../../../shared/proposals/lifecycle.ts";
@@ -230,7 +230,7 @@ export function createProposalJobs(deps: {
   const lastAttempt = (job: Meta) => job.retryCount >= job.retryLimit;
 
   const ready = (async () => {
-    for (const name of Object.values(PROPOSAL_QUEUES)) await boss.createQueue(name);
+    await createQueues(boss, Object.values(PROPOSAL_QUEUES));
     if (!deps.jobs.runsWorkers) return;
     await boss.work<RenderJob>(PROPOSAL_QUEUES.render, { pollingIntervalSeconds: 0.5, includeMetadata: true }, async (batch) => {
       for (const job of batch) await runRender(job.data, lastAttempt(job));

@@ -52,7 +52,7 @@ export function proposalsRouter(service: ProposalsService, company: CompanyServi
       handler: async (req, res) => { res.json({ proposals: await service.listForProject(actorOf(req), idParam(req, "id", "That project")) }); },
     },
     {
-      method: "post", path: "/projects/:id/proposals", access: "proposals:draft", idParams: ["id"],
+      method: "post", path: "/projects/:id/proposals", access: "proposals:draft", idParams: ["id"], creates: true,
       handler: async (req, res) => {
         const projectId = idParam(req, "id", "That project");
         res.status(201).json({ proposal: await service.create(actorOf(req), projectId, parse(ProposalCreateSchema, req.body), metaOf(req)) });

@@ -12,6 +12,8 @@ import { AcceptSchema, DeclineSchema, VerifyQuerySchema } from "../../../shared/
 import type { ProposalsService } from "./proposals.service.ts";
 import { sendPdf } from "./proposals.router.ts";
 import { receiveFile } from "./uploads.ts";
+import type { Database } from "../../db/client.ts";
+import { PostgresRateLimitStore } from "../../lib/postgres-rate-limit-store.ts";
 
 const PhotoIdSchema = IdParam;
 const ImageQuerySchema = z.object({ thumb: z.enum(["1", "0", "true", "false"], { error: "thumb is 1 or 0." }).optional() });
@@ -36,16 +38,19 @@ const tokenOf = (req: Request) => {
 };
 
 /**
- * The homeowner's side, no account: limited per address so a link cannot be guessed by
- * trying (each process counts on its own; 256-bit tokens make guessing hopeless anyway).
- * Failed look-ups count far more strictly than normal use.
+ * The homeowner's side, no account, limited per address. Failed look-ups (a link that does not
+ * exist or has expired) are the guessing limit: counted in PostgreSQL, so it holds across every
+ * server process (256-bit tokens make guessing hopeless anyway; the limit keeps it visible and
+ * cheap). The per-minute limit on all requests only spares each process a flood, so each process
+ * counts it on its own, in memory.
  */
-export function publicRateLimits() {
+export function publicRateLimits(opts: { db: Database; now: () => Date; namespace: string }) {
   const body = (message: string) => ({ error: { code: "rate-limited", message, fields: {} } });
   return [
     rateLimit({ windowMs: 60_000, limit: 120, standardHeaders: "draft-8", legacyHeaders: false, message: body("Too many requests. Please wait a minute and try again.") }),
     rateLimit({
       windowMs: 15 * 60_000, limit: 20, standardHeaders: "draft-8", legacyHeaders: false,
+      store: new PostgresRateLimitStore(opts.db, `${opts.namespace}public-link-failures:`, opts.now),
       // Only answers that say "no such link" count toward this one.
       requestWasSuccessful: (_req, res) => res.statusCode !== 404 && res.statusCode !== 410,
       skipSuccessfulRequests: true,

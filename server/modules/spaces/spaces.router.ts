@@ -10,7 +10,7 @@ const ids = (req: Request) => ({ projectId: idParam(req, "id", "That project"), 
 export function spacesRouter(service: SpacesService) {
   return routesRouter([
     {
-      method: "post", path: "/projects/:id/spaces", access: "projects:edit", idParams: ["id"],
+      method: "post", path: "/projects/:id/spaces", access: "projects:edit", idParams: ["id"], creates: true,
       handler: async (req, res) => {
         const projectId = idParam(req, "id", "That project");
         res.status(201).json({ space: await service.create(actorOf(req), projectId, parse(SpaceCreateSchema, req.body)) });

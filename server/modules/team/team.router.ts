@@ -17,7 +17,7 @@ export function teamRouter(service: TeamService) {
     {
       method: "post", path: "/team/invites", access: "team:manage",
       handler: async (req, res) => {
-        const invite = await service.invite(actorOf(req), parse(InviteSchema, req.body), metaOf(req), req.get("origin") ?? undefined);
+        const invite = await service.invite(actorOf(req), parse(InviteSchema, req.body), metaOf(req));
         res.status(201).json({ invite });
       },
     },

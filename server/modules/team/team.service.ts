@@ -8,7 +8,7 @@ import type { TeamRepository } from "./team.repository.ts";
 
 export const INVITE_TTL_MS = 7 * 24 * 60 * 60 * 1000;
 
-export function createTeamService(deps: { repo: TeamRepository; audit: Audit; jobs: Jobs; appOrigin: (fallback?: string) => string; companyName: (id: string) => Promise<string>; now?: () => Date }) {
+export function createTeamService(deps: { repo: TeamRepository; audit: Audit; jobs: Jobs; appOrigin: () => string; companyName: (id: string) => Promise<string>; now?: () => Date }) {
   const now = deps.now ?? (() => new Date());
 
   async function guardLastOwner(actor: Actor, userId: string) {
@@ -26,7 +26,7 @@ export function createTeamService(deps: { repo: TeamRepository; audit: Audit; jo
       return { users, invites };
     },
 
-    async invite(actor: Actor, input: { email: string; role: Role }, meta: RequestMeta, origin?: string) {
+    async invite(actor: Actor, input: { email: string; role: Role }, meta: RequestMeta) {
       if (await deps.repo.emailInUse(input.email)) {
         throw new AppError("email-taken", "Someone already has an account with this e-mail.", 409, { email: "Someone already has an account with this e-mail." });
       }
@@ -37,7 +37,7 @@ export function createTeamService(deps: { repo: TeamRepository; audit: Audit; jo
         expiresAt: new Date(now().getTime() + INVITE_TTL_MS),
       });
       const company = await deps.companyName(actor.companyId);
-      const link = `${deps.appOrigin(origin)}/invite/${token}`;
+      const link = `${deps.appOrigin()}/invite/${token}`;
       await deps.jobs.sendEmail({
         companyId: actor.companyId,
         to: input.email,

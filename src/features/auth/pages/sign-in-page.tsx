@@ -1,7 +1,6 @@
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, type Resolver } from "react-hook-form";
 import { useNavigate, useSearchParams } from "react-router";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
@@ -11,7 +10,7 @@ import { paths, safeNextPath, type SignInNotice } from "@/config/paths";
 import { isApiError } from "@/lib/api-client";
 import { applyServerErrors } from "@/lib/form-errors";
 import { authKeys } from "../api/queries";
-import { signInSchema, type SignInInput } from "../api/schemas";
+import type { SignInInput } from "../api/schemas";
 import { useSignIn } from "../api/sign-in";
 import { AuthHeading } from "../components/auth-heading";
 
@@ -21,6 +20,19 @@ const NOTICES: Record<SignInNotice, string> = {
   "session-ended": "Your session ended. Sign in again to pick up where you left off.",
   "password-reset": "Your password is changed. Sign in with the new one.",
 };
+
+/**
+ * The sign-in contract (shared/schemas/auth.ts, zod) loads when the visitor starts on the form, not
+ * with the page: the first page paints without the validation library (issue 17, delivery).
+ */
+function loadSignInResolver() {
+  return Promise.all([import("@hookform/resolvers/zod"), import("../api/schemas")]).then(
+    ([{ zodResolver }, { signInSchema }]) => zodResolver(signInSchema) as Resolver<SignInInput>,
+  );
+}
+
+const signInResolver: Resolver<SignInInput> = async (values, context, options) =>
+  (await loadSignInResolver())(values, context, options);
 
 export function SignInPage() {
   const [searchParams] = useSearchParams();
@@ -32,7 +44,7 @@ export function SignInPage() {
   const [formError, setFormError] = useState<{ message: string; isRateLimit: boolean } | null>(null);
 
   const form = useForm<SignInInput>({
-    resolver: zodResolver(signInSchema),
+    resolver: signInResolver,
     defaultValues: { email: "", password: "" },
   });
   const { errors } = form.formState;
@@ -72,7 +84,7 @@ export function SignInPage() {
           {notice}
         </Alert>
       ) : null}
-      <form onSubmit={onSubmit} noValidate className="space-y-5">
+      <form onSubmit={onSubmit} onFocus={() => void loadSignInResolver()} noValidate className="space-y-5">
         <TextField
           label="E-mail"
           type="email"

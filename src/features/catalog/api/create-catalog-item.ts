@@ -6,7 +6,7 @@ import type { CatalogRecord } from "./types";
 
 /** POST /api/catalog (owner) → 201 { item } */
 export async function createCatalogItem(input: CatalogItemInput): Promise<CatalogRecord> {
-  const { item } = await apiClient.post<{ item: CatalogRecord }>("/catalog", { ...input });
+  const { item } = await apiClient.create<{ item: CatalogRecord }>("/catalog", { ...input });
   return item;
 }
 

@@ -6,7 +6,7 @@ import type { Customer } from "./types";
 
 /** POST /api/customers → 201 { customer } */
 export async function createCustomer(input: CustomerInput): Promise<Customer> {
-  const { customer } = await apiClient.post<{ customer: Customer }>("/customers", { ...input });
+  const { customer } = await apiClient.create<{ customer: Customer }>("/customers", { ...input });
   return customer;
 }
 

@@ -6,7 +6,7 @@ import type { OptionRecord } from "./types";
 
 /** POST /api/projects/:id/options → 201 { option } (a kept proposal, or a new blank option). */
 export async function createOption({ projectId, input }: { projectId: string; input: DesignOptionInput }): Promise<OptionRecord> {
-  const { option } = await apiClient.post<{ option: OptionRecord }>(`/projects/${encodeURIComponent(projectId)}/options`, { ...input });
+  const { option } = await apiClient.create<{ option: OptionRecord }>(`/projects/${encodeURIComponent(projectId)}/options`, { ...input });
   return option;
 }
 

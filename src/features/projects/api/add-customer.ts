@@ -6,7 +6,7 @@ import type { CustomerSummary } from "./types";
 
 /** POST /api/customers → 201 { customer }: a new customer made while starting a project. */
 export async function addCustomer(input: CustomerInput): Promise<CustomerSummary> {
-  const { customer } = await apiClient.post<{ customer: CustomerSummary }>("/customers", { ...input });
+  const { customer } = await apiClient.create<{ customer: CustomerSummary }>("/customers", { ...input });
   return customer;
 }
 

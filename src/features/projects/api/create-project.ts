@@ -9,7 +9,7 @@ export type NewProjectInput = z.input<typeof ProjectInputSchema>;
 
 /** POST /api/projects → 201 { project }. Without codeBasis the company default applies. */
 export async function createProject(input: NewProjectInput): Promise<Project> {
-  const { project } = await apiClient.post<{ project: Project }>("/projects", { ...input });
+  const { project } = await apiClient.create<{ project: Project }>("/projects", { ...input });
   return project;
 }
 

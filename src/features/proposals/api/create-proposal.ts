@@ -6,7 +6,7 @@ import type { ProposalRecord } from "./types";
 /** POST /api/projects/:id/proposals — a new draft from chosen options (scope lines generated, default terms copied). */
 export async function createProposal(input: { projectId: string; optionIds: string[]; validUntil?: string }): Promise<ProposalRecord> {
   const { projectId, ...body } = input;
-  const { proposal } = await apiClient.post<{ proposal: ProposalRecord }>(`/projects/${encodeURIComponent(projectId)}/proposals`, body);
+  const { proposal } = await apiClient.create<{ proposal: ProposalRecord }>(`/projects/${encodeURIComponent(projectId)}/proposals`, body);
   return proposal;
 }
 

@@ -4,7 +4,7 @@ import type { SpaceRecord } from "./types";
 
 /** POST /api/projects/:id/spaces → 201 { space } (added at the end of the project's spaces). */
 export async function createSpace({ projectId, name }: { projectId: string; name: string }): Promise<SpaceRecord> {
-  const { space } = await apiClient.post<{ space: SpaceRecord }>(`/projects/${encodeURIComponent(projectId)}/spaces`, { name });
+  const { space } = await apiClient.create<{ space: SpaceRecord }>(`/projects/${encodeURIComponent(projectId)}/spaces`, { name });
   return space;
 }
 

@@ -1,4 +1,4 @@
-import { memo } from "react";
+import { lazy, memo, Suspense } from "react";
 import { FindingsList } from "@/components/findings/findings-list";
 import type { UnitSystem } from "@shared/units/format";
 import { formatAirflowCfm, formatAreaSqFt, formatNfaSqIn } from "@shared/units/format";
@@ -6,8 +6,22 @@ import { sortFindings, type AtticInput, type TryAnalyzeResult } from "@shared/ve
 import { SeverityBadge } from "@/components/ui/badge";
 import { WarningIcon } from "@/components/ui/icons";
 import type { Problem } from "../lib/drafts";
-import { AirflowSection } from "./airflow-section";
 import { BalanceBar } from "./balance-bar";
+
+// The picture (its layout code and drawing) is the panel's last and largest part: it loads after the
+// workspace has painted, so the page's first code stays small (issue 17, delivery).
+const AirflowSection = lazy(() => import("./airflow-section").then(({ AirflowSection }) => ({ default: AirflowSection })));
+
+function AirflowSectionLoading() {
+  return (
+    <section aria-labelledby="airflow-title" className="space-y-2">
+      <h3 id="airflow-title" className="text-lg font-semibold text-ink-900">
+        Airflow picture
+      </h3>
+      <p className="text-base text-ink-700">Drawing the picture…</p>
+    </section>
+  );
+}
 
 export interface AnalysisPanelProps {
   spaceName: string;
@@ -167,7 +181,9 @@ export const AnalysisPanel = memo(function AnalysisPanel({ spaceName, input, res
         <FindingsList findings={findings} emptyText="Nothing to flag in this space." />
       </section>
 
-      <AirflowSection input={input} analysis={a} spaceName={spaceName} isShown={isShown} />
+      <Suspense fallback={<AirflowSectionLoading />}>
+        <AirflowSection input={input} analysis={a} spaceName={spaceName} isShown={isShown} />
+      </Suspense>
     </div>
   );
 });

@@ -1,8 +1,8 @@
-import type { ReactNode } from "react";
+import { useEffect, type ReactNode } from "react";
 import { controlStyles, describedBy, FieldError, Hint, Label, useFieldIds } from "@/components/ui/field";
 import { OkIcon } from "@/components/ui/icons";
 import { cn } from "@/lib/cn";
-import type { EntryDraft } from "../lib/measure";
+import { loadExpressionReader, type EntryDraft } from "../lib/measure";
 
 export interface EntryFieldProps {
   label: ReactNode;
@@ -41,6 +41,7 @@ export function EntryField({
 }: EntryFieldProps) {
   const { controlId, hintId, errorId } = useFieldIds();
   const understoodId = `${controlId}-understood`;
+  useReadAgainWhenReaderLoads(entry, onText);
   return (
     <div className={cn("space-y-1.5", className)}>
       <Label htmlFor={controlId} isOptional={isOptional}>
@@ -83,4 +84,19 @@ export function EntryField({
       </div>
     </div>
   );
+}
+
+/** An expression typed before the expression reader arrived is read again once it has loaded. */
+function useReadAgainWhenReaderLoads(entry: EntryDraft, onText: (text: string) => void) {
+  const { isPending, text } = entry;
+  useEffect(() => {
+    if (!isPending) return;
+    let isCurrent = true;
+    void loadExpressionReader().then(() => {
+      if (isCurrent) onText(text);
+    });
+    return () => {
+      isCurrent = false;
+    };
+  }, [isPending, text, onText]);
 }

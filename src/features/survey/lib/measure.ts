@@ -1,5 +1,50 @@
-import { parseAreaSqFt, parseLengthFt } from "@shared/units/parse-measurement";
 import { formatAreaSqFt, formatFeetInches, formatNumber, ftToM, sqFtToSqM, type UnitSystem } from "@shared/units/format";
+import { readAreaSqFt, readLengthFt, type ExpressionEvaluator, type NeedsExpressionReader } from "@shared/units/read-measurement";
+
+/*
+ * Plain entries (`17'-9"`, `5.2 m`, `26'6" x 40'`) are read at once without the math library; an
+ * expression (`12 x 30 + 8 x 10`) loads the expression reader (mathjs) as its own chunk the first
+ * time one is typed. Meanwhile the entry is pending and `EntryField` reads it again once the reader
+ * is here (DEVELOPERS.md, Decision "Measurements are read without mathjs").
+ */
+let expressionReader: ExpressionEvaluator | undefined;
+let expressionReaderLoad: Promise<void> | undefined;
+let hasExpressionReaderFailed = false;
+
+/** Loads the expression reader once; a failed load (offline) is tried again on the next call. */
+export function loadExpressionReader(): Promise<void> {
+  expressionReaderLoad ??= import("@shared/units/measurement-expression").then(
+    (module) => {
+      expressionReader = module.evaluateExpression;
+      hasExpressionReaderFailed = false;
+    },
+    () => {
+      hasExpressionReaderFailed = true;
+      expressionReaderLoad = undefined;
+    },
+  );
+  return expressionReaderLoad;
+}
+
+const EXPRESSION_READER_FAILED =
+  "Sums and products need a part of the app that didn't load (no connection?). Enter a single measurement, or type again to retry.";
+
+/** Reads with whatever reader is here; an expression starts loading the expression reader. */
+function read<Result extends { ok: boolean }>(
+  readWith: (evaluateExpression: ExpressionEvaluator | undefined) => Result | NeedsExpressionReader,
+): Result | NeedsExpressionReader | { ok: false; message: string } {
+  const parsed = readWith(expressionReader);
+  if (!parsed.ok && "needsExpressionReader" in parsed) {
+    if (hasExpressionReaderFailed) {
+      hasExpressionReaderFailed = false;
+      return { ok: false, message: EXPRESSION_READER_FAILED };
+    }
+    void loadExpressionReader();
+  }
+  return parsed;
+}
+
+const pendingEntry = (text: string): EntryDraft => ({ text, value: null, error: null, understood: null, isPending: true });
 
 /**
  * One typed entry: the text exactly as typed (never thrown away), the value understood from it
@@ -11,6 +56,8 @@ export interface EntryDraft {
   error: string | null;
   /** What the parser understood, shown under the field, e.g. "24 ft 6 in = 24.5 ft". */
   understood: string | null;
+  /** An expression waiting for the expression reader to load; read again when it has. */
+  isPending?: boolean;
 }
 
 export const emptyEntry = (): EntryDraft => ({ text: "", value: null, error: null, understood: null });
@@ -18,8 +65,8 @@ export const emptyEntry = (): EntryDraft => ({ text: "", value: null, error: nul
 /** A length in feet; a plain number is feet. */
 export function lengthEntry(text: string, options: { allowZero?: boolean; system?: UnitSystem } = {}): EntryDraft {
   if (text.trim() === "") return { text, value: null, error: null, understood: null };
-  const parsed = parseLengthFt(text, { allowZero: options.allowZero });
-  if (!parsed.ok) return { text, value: null, error: parsed.message, understood: null };
+  const parsed = read((reader) => readLengthFt(text, { allowZero: options.allowZero }, reader));
+  if (!parsed.ok) return "needsExpressionReader" in parsed ? pendingEntry(text) : { text, value: null, error: parsed.message, understood: null };
   const metric = options.system === "metric" && !/m\b/i.test(text) ? ` (${formatNumber(ftToM(parsed.valueFt))} m)` : "";
   return { text, value: parsed.valueFt, error: null, understood: `${parsed.understood}${metric}` };
 }
@@ -27,8 +74,8 @@ export function lengthEntry(text: string, options: { allowZero?: boolean; system
 /** An area in sq ft; `a x b` is two sides in feet. */
 export function areaEntry(text: string, system?: UnitSystem): EntryDraft {
   if (text.trim() === "") return { text, value: null, error: null, understood: null };
-  const parsed = parseAreaSqFt(text);
-  if (!parsed.ok) return { text, value: null, error: parsed.message, understood: null };
+  const parsed = read((reader) => readAreaSqFt(text, {}, reader));
+  if (!parsed.ok) return "needsExpressionReader" in parsed ? pendingEntry(text) : { text, value: null, error: parsed.message, understood: null };
   const metric = system === "metric" && !/m(2|²|\^2)/i.test(text) ? ` (${formatNumber(sqFtToSqM(parsed.valueSqFt))} m²)` : "";
   return { text, value: parsed.valueSqFt, error: null, understood: `${parsed.understood}${metric}` };
 }
@@ -38,8 +85,8 @@ const BARE_NUMBER = /^\s*\d[\d,]*(\.\d*)?\s*$|^\s*\.\d+\s*$/;
 /** A small size in inches (a louver's opening); a plain number is inches here, not feet. */
 export function inchEntry(text: string): EntryDraft {
   if (text.trim() === "") return { text, value: null, error: null, understood: null };
-  const parsed = parseLengthFt(BARE_NUMBER.test(text) ? `${text} in` : text);
-  if (!parsed.ok) return { text, value: null, error: parsed.message, understood: null };
+  const parsed = read((reader) => readLengthFt(BARE_NUMBER.test(text) ? `${text} in` : text, {}, reader));
+  if (!parsed.ok) return "needsExpressionReader" in parsed ? pendingEntry(text) : { text, value: null, error: parsed.message, understood: null };
   const valueIn = parsed.valueFt * 12;
   return { text, value: valueIn, error: null, understood: `${formatNumber(valueIn, { maxFractionDigits: 2 })} in (${formatNumber(valueIn * 2.54, { maxFractionDigits: 1 })} cm)` };
 }
