@@ -19,6 +19,7 @@ import { spawn, type ChildProcess } from "node:child_process";
 import { readFileSync } from "node:fs";
 import { mkdtemp, rm } from "node:fs/promises";
 import os from "node:os";
+import { isDeepStrictEqual } from "node:util";
 import path from "node:path";
 import autocannon, { type RawRequest, type Result } from "autocannon";
 import postgres from "postgres";
@@ -33,6 +34,8 @@ const WARMUP_SECONDS = 1;
 const CONNECTION_COUNTS = [10, 100] as const;
 const ONE_ADDRESS_SECONDS = 5;
 const RENDER_WAIT_MS = 90_000;
+/** Staff routes should answer at least this share of the bare one-query route's requests per second. */
+const GOAL_RATIO = 0.6;
 
 interface Scenario {
   label: string;
@@ -160,16 +163,22 @@ try {
   ];
   const headers = { cookie, accept: "application/json" };
 
-  // Each route answers 200 on both before it is loaded (the first public view also records "viewed").
+  // Each route answers 200 on both before it is loaded (the first public view also records "viewed"),
+  // and the baseline answers the staff routes with the very JSON the app answers.
   const bodySizes: string[] = [];
+  const sameJson: string[] = [];
   for (const scenario of scenarios) {
-    const sizes: number[] = [];
+    const bodies: string[] = [];
     for (const baseUrl of [appUrl, baselineUrl]) {
       const res = await fetch(`${baseUrl}${scenario.path}`, { headers: scenario.isPublic ? { "x-forwarded-for": "10.255.255.254" } : headers });
       if (res.status !== 200) throw new Error(`${baseUrl}${scenario.path} answered ${res.status}: ${await res.text()}`);
-      sizes.push((await res.arrayBuffer()).byteLength);
+      bodies.push(await res.text());
     }
-    bodySizes.push(`${scenario.label} ${(sizes[0]! / 1024).toFixed(1)} / ${(sizes[1]! / 1024).toFixed(1)} KiB`);
+    const [ours, bare] = bodies as [string, string];
+    bodySizes.push(`${scenario.label} ${(Buffer.byteLength(ours) / 1024).toFixed(1)} / ${(Buffer.byteLength(bare) / 1024).toFixed(1)} KiB`);
+    const isSame = isDeepStrictEqual(JSON.parse(ours), JSON.parse(bare));
+    if (!isSame && !scenario.isPublic) throw new Error(`the baseline's ${scenario.label} JSON differs from the app's:\napp:      ${ours.slice(0, 2000)}\nbaseline: ${bare.slice(0, 2000)}`);
+    sameJson.push(`${scenario.label} ${isSame ? (ours === bare ? "byte for byte" : "equal") : "DIFFERENT"}`);
   }
 
   /** One timed run, with the CPU the server process and the database's backends spent on it. */
@@ -199,7 +208,8 @@ try {
       const ours = await measured(app, appUrl, scenario, connections);
       const bare = await measured(baseline, baselineUrl, scenario, connections);
       const [o, b] = [cell(ours), cell(bare)];
-      rows.push(`  ${scenario.label.padEnd(26)} ${String(connections).padStart(5)} │ ${o.text} │ ${b.text} │ ${ratio(o.okPerSec, b.okPerSec).padStart(7)} ${ratio(o.p99Ms, b.p99Ms).padStart(7)}`);
+      const goal = scenario.isPublic ? "" : o.okPerSec / b.okPerSec >= GOAL_RATIO ? ` goal ≥ ${GOAL_RATIO}× met` : ` goal ≥ ${GOAL_RATIO}× NOT met`;
+      rows.push(`  ${scenario.label.padEnd(26)} ${String(connections).padStart(5)} │ ${o.text} │ ${b.text} │ ${ratio(o.okPerSec, b.okPerSec).padStart(7)} ${ratio(o.p99Ms, b.p99Ms).padStart(7)}${goal}`);
       for (const [server, { result: r }] of [["eavesight", ours], ["baseline", bare]] as const) {
         if (r.non2xx || r.errors || r.timeouts) nonOkDetail.push(`  ${scenario.label} @${connections} ${server}: ${JSON.stringify(r.statusCodeStats)}, errors ${r.errors}, timeouts ${r.timeouts}`);
       }
@@ -213,6 +223,7 @@ try {
   console.log(`${MEASURE_SECONDS} s per run. req/s counts 2xx answers only; p50/p99 are of the 2xx answers (autocannon's 1 ms resolution); "non-2xx" and "err" (socket errors + timeouts) are counted apart;`);
   console.log(`"srv" and "db" are CPU ms per answer spent by the server process and by the database's PostgreSQL backends (from /proc, 10 ms ticks).`);
   console.log(`Demo proposal PDF ${renderStatus} ${(renderWaitMs / 1000).toFixed(1)} s after sending. Body sizes eavesight / baseline: ${bodySizes.join("; ")}.`);
+  console.log(`Same JSON from both: ${sameJson.join("; ")}. Goal (issue 17): staff routes ≥ ${GOAL_RATIO}× the baseline's req/s at 10 and 100 connections.`);
   console.log("");
   const head = `${"req/s".padStart(7)} ${"p50 ms".padStart(6)} ${"p99 ms".padStart(6)} ${"non-2xx".padStart(7)} ${"err".padStart(4)} ${"srv".padStart(6)} ${"db".padStart(5)}`;
   console.log(`  ${"scenario".padEnd(26)} ${"conns".padStart(5)} │ ${"eavesight".padEnd(head.length)} │ ${"baseline (Express + postgres.js, 1 query)".padEnd(head.length)} │ eavesight/baseline`);

@@ -1,8 +1,10 @@
 /**
  * The yardstick for bench/api-load-bench.ts: a bare Express app with one postgres.js pool (the
- * size the app's own pool has) answering each benchmarked route with one comparable hand-written
- * query and nothing else — no session, no helmet, no logging, no validation, no ORM, no analysis.
- * The app's figure divided by this one is what all of that costs on the same machine and data.
+ * size the app's own pool has) answering each benchmarked route with one hand-written query and
+ * nothing else — no session, no helmet, no logging, no validation, no ORM — and the same JSON the
+ * app answers (the bench compares them before it measures). The analysis runs the same core
+ * function as the app, so its ratio is the cost of everything around the core. The app's figure
+ * divided by this one is what all of that costs on the same machine and data.
  *
  * Started by the load bench as a child process: DATABASE_URL, PORT, BASELINE_COMPANY_ID; it
  * reports `{ ready: true }` over IPC once it listens, as server/index.ts does.
@@ -10,6 +12,7 @@
 import { createHash } from "node:crypto";
 import express from "express";
 import postgres from "postgres";
+import { analyzeSpace } from "../server/modules/projects/projects.service.ts";
 
 const databaseUrl = process.env.DATABASE_URL;
 const port = Number(process.env.PORT);
@@ -24,10 +27,10 @@ app.disable("x-powered-by");
 // The first page of the default list (updated first), with customer, estimator, space count and total: one statement.
 app.get("/api/projects", async (_req, res) => {
   const rows = await sql`
-    select p.id, p.title, p.site_address, p.status, p.updated_at, p.created_at,
+    select p.id, p.title, p.site_address as "siteAddress", p.status, p.updated_at as "updatedAt", p.created_at as "createdAt",
+           (select count(*)::int from attic_spaces s where s.company_id = p.company_id and s.project_id = p.id) as "spaceCount",
            json_build_object('id', c.id, 'name', c.name) as customer,
            case when u.id is null then null else json_build_object('id', u.id, 'name', u.name) end as estimator,
-           (select count(*)::int from attic_spaces s where s.company_id = p.company_id and s.project_id = p.id) as space_count,
            count(*) over ()::int as total
     from projects p
     join customers c on c.id = p.customer_id and c.company_id = p.company_id
@@ -35,27 +38,46 @@ app.get("/api/projects", async (_req, res) => {
     where p.company_id = ${companyId}
     order by p.updated_at desc, p.id
     limit 25`;
-  res.json({ items: rows, total: rows[0]?.total ?? 0, page: 1, pageSize: 25 });
+  const total = rows[0]?.total ?? 0;
+  res.json({ items: rows.map(({ total: _total, ...item }) => item), total, page: 1, pageSize: 25 });
 });
 
-// A project with its customer, estimator and attic spaces (survey JSON): one statement. The
-// analysis route answers the same data unanalysed, so its ratio includes the core's work.
-const projectWithSpaces = async (req: express.Request, res: express.Response) => {
+// Timestamps inside JSON as JavaScript writes them (milliseconds, UTC, "Z").
+const iso = (column: string) => sql.unsafe(`to_char(${column} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')`);
+const projectColumns = sql`p.id, p.customer_id as "customerId", p.title, p.site_address as "siteAddress", p.status, p.estimator_id as "estimatorId",
+  p.climate_zone as "climateZone", p.moisture_regime as "moistureRegime", p.code_basis as "codeBasis", p.ceiling_vapor_retarder as "ceilingVaporRetarder",
+  p.roof_color as "roofColor", p.notes, p.version, p.created_at as "createdAt", p.updated_at as "updatedAt"`;
+const spacesJson = sql`coalesce((select json_agg(json_build_object('id', s.id, 'projectId', s.project_id, 'name', s.name, 'position', s.position, 'version', s.version,
+    'roof', s.roof, 'sections', s.sections, 'vents', s.vents, 'site', s.site, 'notes', s.notes, 'createdAt', ${iso("s.created_at")}, 'updatedAt', ${iso("s.updated_at")})
+    order by s.position, s.created_at) from attic_spaces s where s.company_id = p.company_id and s.project_id = p.id), '[]')`;
+
+// A project with its customer, estimator, attic spaces (survey JSON) and photos: one statement.
+app.get("/api/projects/:id", async (req, res) => {
   const [row] = await sql`
-    select to_jsonb(p) - 'search_text' - 'company_id' as project,
+    select ${projectColumns},
            json_build_object('id', c.id, 'name', c.name, 'phone', c.phone, 'email', c.email, 'billingAddress', c.billing_address, 'notes', c.notes) as customer,
            case when u.id is null then null else json_build_object('id', u.id, 'name', u.name) end as estimator,
-           coalesce((select json_agg(to_jsonb(s) - 'company_id' order by s.position, s.created_at)
-                     from attic_spaces s where s.company_id = p.company_id and s.project_id = p.id), '[]') as spaces
+           ${spacesJson} as spaces,
+           coalesce((select json_agg(json_build_object('id', f.id, 'projectId', f.project_id, 'spaceId', f.space_id, 'ventId', f.vent_id, 'findingCode', f.finding_code,
+               'caption', f.caption, 'contentType', f.content_type, 'sizeBytes', f.size_bytes, 'width', f.width, 'height', f.height, 'uploadedBy', f.uploaded_by,
+               'createdAt', ${iso("f.created_at")}, 'url', '/api/photos/' || f.id, 'thumbUrl', '/api/photos/' || f.id || '?thumb=1') order by f.created_at, f.id)
+             from photos f where f.company_id = p.company_id and f.project_id = p.id), '[]') as photos
     from projects p
     join customers c on c.id = p.customer_id and c.company_id = p.company_id
     left join users u on u.id = p.estimator_id and u.company_id = p.company_id
     where p.company_id = ${companyId} and p.id = ${String(req.params.id)}`;
   if (!row) return void res.status(404).json({ error: { code: "not-found" } });
-  res.json({ ...row, photos: [] });
-};
-app.get("/api/projects/:id", projectWithSpaces);
-app.get("/api/projects/:id/analysis", projectWithSpaces);
+  const { customer, estimator, spaces, photos, ...project } = row;
+  res.json({ project, customer, estimator, spaces, photos });
+});
+
+// The project's spaces through the same core function the app calls: one statement, then the core.
+app.get("/api/projects/:id/analysis", async (req, res) => {
+  const [row] = await sql`select ${projectColumns}, ${spacesJson} as spaces from projects p where p.company_id = ${companyId} and p.id = ${String(req.params.id)}`;
+  if (!row) return void res.status(404).json({ error: { code: "not-found" } });
+  const { spaces, ...project } = row;
+  res.json({ spaces: (spaces as Parameters<typeof analyzeSpace>[1][]).map((space) => analyzeSpace(project as Parameters<typeof analyzeSpace>[0], space)) });
+});
 
 // The homeowner's page data: the frozen snapshot found by the SHA-256 of the link's token.
 app.get("/api/public/proposals/:token", async (req, res) => {

@@ -1,6 +1,5 @@
 import express, { type Express } from "express";
 import helmet from "helmet";
-import { pinoHttp } from "pino-http";
 import { existsSync } from "node:fs";
 import { sql as rawSql } from "drizzle-orm";
 import type { Env } from "./env.ts";
@@ -9,6 +8,7 @@ import type { Logger } from "./lib/logger.ts";
 import type { Jobs } from "./lib/jobs.ts";
 import { clientRoutes, compressAnswers } from "./lib/delivery.ts";
 import { errorMiddleware } from "./lib/error-middleware.ts";
+import { accessLog } from "./lib/access-log.ts";
 import { originCheck } from "./lib/csrf.ts";
 import { AppError } from "./lib/errors.ts";
 import { safeInput } from "./lib/validate.ts";
@@ -17,6 +17,7 @@ import { requestScopedDb } from "./lib/request-transaction.ts";
 import { createsInTransaction } from "./lib/idempotency.ts";
 import { createLucia } from "./modules/auth/lucia.ts";
 import { sessionMiddleware } from "./modules/auth/session.middleware.ts";
+import type { SessionCache } from "./modules/auth/session-cache.ts";
 import { createAuthRepository } from "./modules/auth/auth.repository.ts";
 import { createAuthService } from "./modules/auth/auth.service.ts";
 import { authRouter } from "./modules/auth/auth.router.ts";
@@ -85,6 +86,8 @@ export interface AppDeps {
   rateLimitNamespace?: string;
   /** The payment provider; by default the `stripe` SDK as PAYMENTS_API_BASE and the keys configure it. */
   paymentProvider?: PaymentProvider | null;
+  /** Validated sessions kept briefly for reads (modules/auth/session-cache.ts); without it every request asks the database. */
+  sessionCache?: SessionCache;
 }
 
 export function createApp(deps: AppDeps): Express {
@@ -115,16 +118,7 @@ export function createApp(deps: AppDeps): Express {
       crossOriginEmbedderPolicy: false,
     }),
   );
-  app.use(
-    pinoHttp({
-      logger,
-      autoLogging: { ignore: (req) => req.url === "/api/health" },
-      serializers: {
-        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
-        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
-      },
-    }),
-  );
+  app.use(accessLog(logger, { ignore: (url) => url === "/api/health" }));
 
   app.use(compressAnswers());
 
@@ -144,7 +138,7 @@ export function createApp(deps: AppDeps): Express {
   const spacesRepo = createSpacesRepository(db);
   const photosService = createPhotosService({ repo: createPhotosRepository(db), storage, projects: projectsRepo, spaces: spacesRepo });
   const spacesService = createSpacesService({ repo: spacesRepo, projects: projectsRepo });
-  const projectsService = createProjectsService({ repo: projectsRepo, spaces: spacesRepo, photos: photosService, audit });
+  const projectsService = createProjectsService({ repo: projectsRepo, audit });
   const customersService = createCustomersService({ repo: createCustomersRepository(db), audit });
   const usersService = createUsersService({ repo: createUsersRepository(db) });
   const catalogRepo = createCatalogRepository(db);
@@ -199,7 +193,7 @@ export function createApp(deps: AppDeps): Express {
     if (!req.path.startsWith("/public/")) res.setHeader("Cache-Control", "no-store");
     next();
   });
-  api.use(sessionMiddleware(lucia, now));
+  api.use(sessionMiddleware(lucia, now, deps.sessionCache));
   // Declared routes (server/lib/routes.ts): each carries its method, path and access, listed in app.locals.routes.
   const declared = [
     authRouter(authService, lucia), teamRouter(teamService), outboxRouter(createOutboxRepository(db)),

@@ -6,6 +6,7 @@ import { createLogger } from "./lib/logger.ts";
 import { createMailer } from "./lib/mailer.ts";
 import { startJobs } from "./lib/jobs.ts";
 import { createApp } from "./app.ts";
+import { createSessionCache } from "./modules/auth/session-cache.ts";
 
 const env = parseEnv();
 const logger = createLogger(env.LOG_LEVEL, { pretty: Boolean(process.stdout.isTTY) });
@@ -13,7 +14,8 @@ const { db, sql } = createDb(env.DATABASE_URL);
 const mailer = createMailer({ host: env.SMTP_HOST, port: env.SMTP_PORT, from: env.MAIL_FROM });
 const jobs = await startJobs({ databaseUrl: env.DATABASE_URL, logger, mailer });
 const clientDir = env.SERVE_CLIENT === "true" ? path.resolve(env.CLIENT_DIR ?? path.join(path.dirname(fileURLToPath(import.meta.url)), "..", "dist", "client")) : undefined;
-const app = createApp({ env, db, logger, jobs, clientDir });
+const sessionCache = createSessionCache({ databaseUrl: env.DATABASE_URL, logger });
+const app = createApp({ env, db, logger, jobs, clientDir, sessionCache });
 
 const server = app.listen(env.PORT, env.HOST, () => {
   logger.info(`Eavesight listening on http://${env.HOST}:${env.PORT}`);
@@ -41,6 +43,7 @@ async function shutdown(signal: string) {
   await new Promise<void>((resolve) => server.close(() => resolve()));
   await jobs.stop().catch(() => {});
   mailer.close();
+  await sessionCache.close();
   await sql.end({ timeout: 5 });
   process.exit(0);
 }

@@ -10,6 +10,7 @@ import { createDb } from "../../server/db/client.ts";
 import { createLogger } from "../../server/lib/logger.ts";
 import { createMailer } from "../../server/lib/mailer.ts";
 import { startJobs } from "../../server/lib/jobs.ts";
+import { createSessionCache } from "../../server/modules/auth/session-cache.ts";
 import { companies, outboxMessages, users } from "../../server/db/schema/index.ts";
 import { hashPassword } from "../../server/lib/password.ts";
 import type { Role } from "../../shared/schemas/roles.ts";
@@ -39,7 +40,10 @@ export async function startTestApp(opts: { envOverrides?: Record<string, string 
   const jobs = await startJobs({ databaseUrl, logger, mailer, runWorkers: opts.runWorkers });
   const clock = { offsetMs: 0 };
   const now = () => new Date(Date.now() + clock.offsetMs);
-  const app = createApp({ env, db, logger, jobs, now, rateLimitNamespace: opts.rateLimitNamespace ?? `test-${randomUUID()}:` });
+  // As server/index.ts: reads are answered from the session cache, so every API test runs with it.
+  const sessionCache = createSessionCache({ databaseUrl, logger });
+  await sessionCache.ready;
+  const app = createApp({ env, db, logger, jobs, now, sessionCache, rateLimitNamespace: opts.rateLimitNamespace ?? `test-${randomUUID()}:` });
 
   /** A company of its own per test file, so files never see each other's rows. */
   async function makeCompany(name = `Test Co ${randomUUID().slice(0, 8)}`) {
@@ -77,9 +81,10 @@ export async function startTestApp(opts: { envOverrides?: Record<string, string 
   async function close() {
     await jobs.stop();
     mailer.close();
+    await sessionCache.close();
     await sql.end({ timeout: 2 });
     rmSync(storageDir, { recursive: true, force: true });
   }
-  return { app, db, sql, clock, env, makeCompany, makeUser, signIn, waitForMail, mailCount, close, request: () => request(app) };
+  return { app, db, sql, sessionCache, clock, env, makeCompany, makeUser, signIn, waitForMail, mailCount, close, request: () => request(app) };
 }
 export type TestApp = Awaited<ReturnType<typeof startTestApp>>;

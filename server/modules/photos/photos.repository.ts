@@ -4,7 +4,7 @@ import { photos, proposals } from "../../db/schema/index.ts";
 import { scoped } from "../../lib/tenant.ts";
 import type { Actor } from "../../lib/request-context.ts";
 
-const photoColumns = {
+export const photoColumns = {
   id: photos.id, projectId: photos.projectId, spaceId: photos.spaceId, ventId: photos.ventId, findingCode: photos.findingCode,
   caption: photos.caption, storageKey: photos.storageKey, thumbKey: photos.thumbKey, contentType: photos.contentType,
   sizeBytes: photos.sizeBytes, width: photos.width, height: photos.height, uploadedBy: photos.uploadedBy, createdAt: photos.createdAt,

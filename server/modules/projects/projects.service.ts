@@ -5,8 +5,7 @@ import type { ListQuery, ProjectInput, ProjectPatch } from "../../../shared/sche
 import { analyzeAttic, AtticInputSchema, type AtticAnalysis } from "../../../shared/ventilation/index.ts";
 import { toAtticInput, type ProjectBasis } from "../../../shared/survey/to-attic-input.ts";
 import type { SpaceSurvey } from "../../../shared/schemas/survey.ts";
-import type { PhotosService } from "../photos/photos.service.ts";
-import type { SpacesRepository } from "../spaces/spaces.repository.ts";
+import { photoView } from "../photos/photos.service.ts";
 import type { ProjectRow, ProjectsRepository } from "./projects.repository.ts";
 
 export const STALE_PROJECT_MESSAGE = "Someone else saved this project since you opened it.";
@@ -34,7 +33,7 @@ export function analyzeSpace(project: ProjectBasis, space: SpaceSurvey & { id: s
   return { ...base, analysis: analyzeAttic(parsed.data), issues: [] };
 }
 
-export function createProjectsService(deps: { repo: ProjectsRepository; spaces: SpacesRepository; photos: PhotosService; audit: Audit }) {
+export function createProjectsService(deps: { repo: ProjectsRepository; audit: Audit }) {
   const { repo } = deps;
 
   async function requireProject(actor: Actor, id: string): Promise<ProjectRow> {
@@ -79,14 +78,10 @@ export function createProjectsService(deps: { repo: ProjectsRepository; spaces: 
     },
 
     async detail(actor: Actor, id: string) {
-      const project = await requireProject(actor, id);
-      const [customer, estimator, spaces, photos] = await Promise.all([
-        repo.findCustomer(actor, project.customerId),
-        project.estimatorId ? repo.findUser(actor, project.estimatorId) : Promise.resolve(null),
-        deps.spaces.listForProject(actor, id),
-        deps.photos.listForProject(actor, id),
-      ]);
-      return { project, customer, estimator: estimator ? { id: estimator.id, name: estimator.name } : null, spaces, photos };
+      const row = await repo.detail(actor, id);
+      if (!row) throw notFound("That project");
+      const { customer, estimator, spaces, photos, ...project } = row;
+      return { project, customer, estimator, spaces, photos: photos.map(photoView) };
     },
 
     async update(actor: Actor, id: string, input: ProjectPatch): Promise<ProjectRow> {
@@ -100,8 +95,9 @@ export function createProjectsService(deps: { repo: ProjectsRepository; spaces: 
     },
 
     async analysis(actor: Actor, id: string): Promise<{ spaces: SpaceAnalysis[] }> {
-      const project = await requireProject(actor, id);
-      const spaces = await deps.spaces.listForProject(actor, id);
+      const row = await repo.findWithSpaces(actor, id);
+      if (!row) throw notFound("That project");
+      const { spaces, ...project } = row;
       return { spaces: spaces.map((space) => analyzeSpace(project, space)) };
     },
   };
