@@ -57,9 +57,13 @@ export function applyFlowWidths(arrows: readonly AirflowArrow[], texts: readonly
         const [x, y] = midpoint(arrow.pointsFt, at);
         return { id: `cfm-${arrow.id}`, forId: arrow.id, text, atFt: [x, y - 0.9 * unitFt] as const, anchor: "middle" as const, fontSizeFt: 1.1 * unitFt, style: arrow.style, isBold: true };
       });
-      const label = candidates.find((c) => placed.every((t) => !boxesOverlap(textBoxFt(c), textBoxFt(t)))) ?? candidates[0]!;
-      placed.push(label);
-      labels.push(label);
+      // Where every spot would cover another word, the label is left out: the arrow's own name still
+      // carries its cfm for screen readers, and a number printed over a vent's name helps nobody.
+      const label = candidates.find((c) => placed.every((t) => !boxesOverlap(textBoxFt(c), textBoxFt(t))));
+      if (label) {
+        placed.push(label);
+        labels.push(label);
+      }
     }
     return { ...arrow, strokeWidthFt, cfm: Math.round(cfm * 10) / 10, label: `${arrow.label} (about ${formatNumber(Math.round(cfm))} cfm)` };
   });

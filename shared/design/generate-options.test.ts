@@ -95,6 +95,23 @@ describe("generateOptions on varied attics (IRC 2018, zone 4)", () => {
   });
 });
 
+describe("generateOptions: an attic that already has the design", () => {
+  it("when the attic already has what an option would build and meets the code minimum, then that option is skipped with the reason, never offered as $0 with no work", () => {
+    const first = run(smallRanch());
+    for (const [i, type] of (["ridge-and-continuous-soffit", "static-vents-and-individual-soffit"] as const).entries()) {
+      const again = run(first.options[i]!.applied);
+      expect(typesOf(again), type).not.toContain(type);
+      expect(again.skipped.find((s) => s.type === type)?.reason, type).toMatch(/already has this design and meets the code minimum/);
+      for (const o of again.options) {
+        const space = o.option.spaces[0]!;
+        const work = space.added.length + Object.values(space.ventActions).filter((a) => a !== "keep").length + Object.keys(space.siteFixes).length;
+        expect(work, o.type).toBeGreaterThan(0);
+        expect(o.price.totalCents, o.type).toBeGreaterThan(0);
+      }
+    }
+  });
+});
+
 describe("generateOptions: a bath fan that blows into the attic", () => {
   const withBathFan = (): SpaceSurvey => ({ ...smallRanch(), site: { ...smallRanch().site, bathFanIntoAttic: true } });
 

@@ -650,13 +650,18 @@ function cautionsFor(optionSpace: OptionSpace, space: SpaceSurvey): string {
   return parts.join("\n\n");
 }
 
+/** True when a design changes nothing: nothing added, every vent kept, no site fix. */
+function isNoWork(optionSpace: OptionSpace): boolean {
+  return optionSpace.added.length === 0 && Object.values(optionSpace.ventActions).every((a) => a === "keep") && Object.keys(optionSpace.siteFixes).length === 0;
+}
+
 function signature(optionSpace: OptionSpace): string {
   const actions = Object.entries(optionSpace.ventActions).sort(([a], [b]) => (a < b ? -1 : 1));
   const added = optionSpace.added.map((a) => `${a.catalogItemId}:${a.quantity}:${a.replacesVentId ?? ""}`).sort();
   return JSON.stringify([actions, added, optionSpace.siteFixes]);
 }
 
-function propose(ctx: Context, plan: Plan): GeneratedOption | { failure: string } {
+function propose(ctx: Context, plan: Plan): GeneratedOption | { failure: string; final?: true } {
   const { project, space, catalog } = ctx.input;
   const failures: string[] = [];
   for (const ratio of ctx.ratios) {
@@ -668,6 +673,11 @@ function propose(ctx: Context, plan: Plan): GeneratedOption | { failure: string 
     const applied = applyOption(space, design.optionSpace, catalog);
     const analysis = analyzeAttic(toAtticInput(project, applied));
     const problems = designProblems(applied, analysis);
+    if (problems.length === 0 && analysis.requirement.ratio === ratio && isNoWork(design.optionSpace)) {
+      // Offering "$0, nothing to do" as something to sign would be a proposal with no work in it.
+      // Nor is tearing out a working vent to put the same one back: no later plan of this type is tried.
+      return { failure: `The attic already has this design and meets the code minimum at 1/${ratio}: there is no work to offer.`, final: true };
+    }
     if (problems.length > 0 || analysis.requirement.ratio !== ratio) {
       const why =
         analysis.requirement.ratio !== ratio
@@ -742,8 +752,13 @@ export function generateOptions(input: GenerateOptionsInput): GenerateOptionsRes
         continue;
       }
       const outcome = propose(ctx, result.plan);
-      if ("failure" in outcome) reasons.push(outcome.failure);
-      else {
+      if ("failure" in outcome) {
+        if (outcome.final) {
+          reasons.splice(0, reasons.length, outcome.failure);
+          break;
+        }
+        reasons.push(outcome.failure);
+      } else {
         proposal = outcome;
         break;
       }

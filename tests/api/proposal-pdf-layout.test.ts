@@ -35,6 +35,7 @@ beforeAll(async () => {
   rendered = [];
   for (const [i, r] of demo.entries()) {
     const file = path.join(work, `demo-${i}.pdf`);
+    writeFileSync(path.join(work, `demo-${i}.json`), JSON.stringify(r.snapshot));
     writeFileSync(file, await renderProposalPdf({ snapshot: r.snapshot!, logoDataUrl: null, photoDataUrls: {} }));
     execFileSync("pdftoppm", ["-png", "-r", "50", file, path.join(shots, `demo-proposal-${i}`)]);
     rendered.push({ title: r.title, snapshot: r.snapshot!, file });

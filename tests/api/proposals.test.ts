@@ -165,7 +165,8 @@ describe("proposals: draft, render, send, the homeowner's link, acceptance", () 
       "Seal the gable fan to its opening so it draws air only from the attic.",
       "Add 12 round soffit vents (4 in) to the soffits, spaced evenly along the eaves.",
     ]);
-    expect(p.scopes[optionIds[1]!]!.lines).toContain("Remove the gable-mounted fan and close the opening from inside the attic.");
+    expect(p.scopes[optionIds[1]!]!.lines).toContain("Remove the gable-mounted fan.");
+    expect(p.scopes[optionIds[1]!]!.lines).toContain("Seal the gable opening from inside the attic.");
     expect(p.scopes[optionIds[1]!]!.lines).toContain("Install 48 ft of shingle-over ridge vent along the ridge, opening the vent slot in the roof deck where there is none.");
     const patched = await send(team.asEstimator, "patch", `/api/proposals/${p.id}`, { version: p.version, coverNote: "Thank you for having us out to look at the attic." });
     expect(patched.status, JSON.stringify(patched.body)).toBe(200);
@@ -235,7 +236,8 @@ describe("proposals: draft, render, send, the homeowner's link, acceptance", () 
     expect(text).not.toMatch(/bring\s+water|work\s+early\s+in\s+the\s+day/);
     expect(text).toContain("NOTICE OF CANCELLATION");
     expect(text).toContain("Signed electronically when sent");
-    expect(text).toContain("Remove the gable-mounted fan and close the opening");
+    expect(text).toContain("Remove the gable-mounted fan.");
+    expect(text).toContain("Seal the gable opening from inside the attic.");
     // Pages 1–2 as pictures for a person to look at.
     const shots = path.resolve(".var/screenshots");
     mkdirSync(shots, { recursive: true });
@@ -330,6 +332,7 @@ describe("proposals: draft, render, send, the homeowner's link, acceptance", () 
     expect(text).toContain("Drawn on screen");
     expect(text).toContain("HomeownerPhone/1.0");
     expect((await pub("get", `/api/public/verify?sha256=${detail.proposal.signedRender.pdfSha256}`)).body).toMatchObject({ matches: true, document: { kind: "signed" } });
+    mkdirSync(path.resolve(".var/screenshots"), { recursive: true });
     execFileSync("pdftoppm", ["-png", "-r", "60", "-f", "1", "-l", "1", path.join(work, "signed.pdf"), path.resolve(".var/screenshots/signed-first")]);
     const lastPage = text.match(/Page \d+ of (\d+)/)![1]!;
     execFileSync("pdftoppm", ["-png", "-r", "60", "-f", lastPage, "-l", lastPage, path.join(work, "signed.pdf"), path.resolve(".var/screenshots/signed-certificate")]);

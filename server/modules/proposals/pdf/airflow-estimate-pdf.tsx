@@ -16,32 +16,58 @@ const CAUTION = "#b4411b";
 
 const cell = { fontSize: 9, lineHeight: "12.5pt", fontFamily: PLEX_FAMILIES as unknown as string, color: INK } as const;
 
-export function AirflowEstimatePdf({ spaceName, before, after }: { spaceName: string; before: SnapshotAirflow | null | undefined; after: SnapshotAirflow | null | undefined }) {
-  if (!before || !after) return null;
-  const rows = beforeAfterRows(before, after);
-  const afterCautions = [after.summer, after.winter].filter((s) => s.isOverLimit);
+export interface AirflowEstimateSpace {
+  name: string;
+  before: SnapshotAirflow | null | undefined;
+  /** One per option, in the options' order (null where the option has no estimate for this space). */
+  afters: (SnapshotAirflow | null | undefined)[];
+}
+
+/**
+ * One table per attic space: now, and after each option, side by side, so each row label and the
+ * estimate's note print once in the whole document.
+ */
+export function AirflowEstimatesPdf({ spaces }: { spaces: AirflowEstimateSpace[] }) {
+  const shown = spaces.filter((sp) => sp.before && sp.afters.some(Boolean));
+  const first = shown[0];
+  const note = first ? (first.afters.find(Boolean) ?? first.before)! : null;
+  if (!first || !note) return null;
   return (
-    <View wrap={false} style={{ marginTop: 6, marginBottom: 8 }}>
-      <Text style={{ fontSize: 11, fontWeight: 600, lineHeight: "15pt", marginBottom: 3 }}>Where the air goes in {spaceName}: now, and after this option</Text>
-      <View style={{ borderTopWidth: 0.5, borderTopColor: RULE }}>
-        <View style={{ flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: RULE, paddingVertical: 2 }}>
-          <Text style={[cell, { flex: 3, color: MUTED }]}>Estimate</Text>
-          <Text style={[cell, { flex: 1.2, color: MUTED, textAlign: "right" }]}>Now</Text>
-          <Text style={[cell, { flex: 1.2, color: MUTED, textAlign: "right" }]}>After</Text>
-        </View>
-        {rows.map((row) => (
-          <View key={`${row.season}-${row.label}`} style={{ flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: RULE, paddingVertical: 2 }}>
-            <Text style={[cell, { flex: 3 }]}>{row.season === "summer" ? "Summer" : "Winter"}: {row.label}</Text>
-            <Text style={[cell, { flex: 1.2, textAlign: "right" }]}>{row.before}</Text>
-            <Text style={[cell, { flex: 1.2, textAlign: "right", fontWeight: 700 }]}>{row.after}</Text>
+    <View style={{ marginTop: 6, marginBottom: 8 }}>
+      {shown.map((sp, spaceIndex) => {
+        const perOption = sp.afters.map((after) => (after ? new Map(beforeAfterRows(sp.before!, after).map((r) => [`${r.season}:${r.label}`, r])) : null));
+        const keys = [...new Map(perOption.flatMap((m) => (m ? [...m.entries()] : []))).entries()];
+        const cautions = sp.afters.flatMap((after, i) => (after ? [after.summer, after.winter].filter((x) => x.isOverLimit).map((x) => `Option ${i + 1}: ${x.depressurizationSentence}`) : []));
+        return (
+          // The heading travels with the first table, so it never ends a page alone.
+          <View key={sp.name} wrap={false} style={{ marginBottom: 6 }}>
+            {spaceIndex === 0 ? <Text style={{ fontSize: 13, fontWeight: 600, lineHeight: "17pt", marginBottom: 4 }}>Where the air goes: now, and after each option</Text> : null}
+            <View style={{ borderTopWidth: 0.5, borderTopColor: RULE }}>
+              <View style={{ flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: RULE, paddingVertical: 2 }}>
+                <Text style={[cell, { flex: 3, color: MUTED }]}>Estimate</Text>
+                <Text style={[cell, { flex: 1.2, color: MUTED, textAlign: "right" }]}>Now</Text>
+                {sp.afters.map((_, i) => (
+                  <Text key={i} style={[cell, { flex: 1.2, color: MUTED, textAlign: "right" }]}>Option {i + 1}</Text>
+                ))}
+              </View>
+              {keys.map(([key, row]) => (
+                <View key={key} style={{ flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: RULE, paddingVertical: 2 }}>
+                  <Text style={[cell, { flex: 3 }]}>{shown.length > 1 ? `${sp.name}, ${row.season}` : row.season === "summer" ? "Summer" : "Winter"}: {row.label}</Text>
+                  <Text style={[cell, { flex: 1.2, textAlign: "right" }]}>{row.before}</Text>
+                  {perOption.map((m, i) => (
+                    <Text key={i} style={[cell, { flex: 1.2, textAlign: "right", fontWeight: 700 }]}>{m?.get(key)?.after ?? "–"}</Text>
+                  ))}
+                </View>
+              ))}
+            </View>
+            {cautions.map((c) => (
+              <Text key={c} style={{ fontSize: 9, lineHeight: "12.5pt", color: CAUTION, marginTop: 3 }}>{c}</Text>
+            ))}
           </View>
-        ))}
-      </View>
-      {afterCautions.map((season) => (
-        <Text key={season.conditionsText} style={{ fontSize: 9, lineHeight: "12.5pt", color: CAUTION, marginTop: 3 }}>{season.depressurizationSentence}</Text>
-      ))}
+        );
+      })}
       <Text style={{ fontSize: 8, color: MUTED, lineHeight: "11pt", marginTop: 3 }}>
-        {after.disclaimer} Conditions: {after.summer.conditionsText}; {after.winter.conditionsText}. Assumptions: {after.assumptions.join(" ")}
+        {note.disclaimer} Conditions: {note.summer.conditionsText}; {note.winter.conditionsText}. Assumptions: {note.assumptions.join(" ")}
       </Text>
     </View>
   );

@@ -1,3 +1,4 @@
+import { Fragment, type ReactNode } from "react";
 import { Document, Image, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { AirflowPicture } from "../../../../shared/airflow/index.ts";
 import { homeownerFindings, homeownerNotes } from "../../../../shared/proposals/homeowner-words.ts";
@@ -5,7 +6,7 @@ import { optionFixes } from "../../../../shared/proposals/option-fixes.ts";
 import type { ProposalAcceptance, ProposalSnapshot, SnapshotAnalysis, SnapshotOption, SnapshotSpace } from "../../../../shared/proposals/types.ts";
 import { formatCents, formatBasisPoints } from "../../../../shared/pricing/index.ts";
 import { formatNumber } from "../../../../shared/units/format.ts";
-import { AirflowEstimatePdf } from "./airflow-estimate-pdf.tsx";
+import { AirflowEstimatesPdf } from "./airflow-estimate-pdf.tsx";
 import { AirflowSvg } from "./airflow-svg.tsx";
 import { PLEX_FAMILIES } from "./fonts.ts";
 import { breakLongToken } from "./break-long-text.ts";
@@ -94,7 +95,7 @@ function Figures({ analysis }: { analysis: SnapshotAnalysis }) {
     <View wrap={false}>
       <Figure label="Attic floor area" value={sqFt(analysis.floorAreaSqFt)} />
       <Figure
-        label={r.totalSqIn === 0 ? "Ventilation the code asks for (sealed attic, IRC R806.5: none)" : `Ventilation the code asks for (1 sq ft per ${r.ratio} sq ft of floor, rounded up)`}
+        label={r.totalSqIn === 0 ? "Code minimum (sealed attic, IRC R806.5: none)" : `Code minimum (1 sq ft per ${r.ratio} sq ft of floor, rounded up)`}
         value={sqIn(r.totalSqIn)}
         isStrong
       />
@@ -129,7 +130,9 @@ export function pictureNotes(pictures: readonly AirflowPicture[]): PictureNotes 
 }
 
 /** As wide as the page allows while at most PICTURE_MAX_HEIGHT_PT tall, so an option's picture, price and figures share one page. */
-const PICTURE_MAX_HEIGHT_PT = 185;
+const PICTURE_MAX_HEIGHT_PT = 160;
+/** The figures printed beside an option's "after" picture. */
+const BESIDE_WIDTH_PT = 190;
 const pictureWidthPt = (picture: AirflowPicture) => Math.min(CONTENT_WIDTH_PT, (PICTURE_MAX_HEIGHT_PT * picture.viewBox.widthFt) / picture.viewBox.heightFt);
 
 /** The pictures in the order the document prints them. */
@@ -137,14 +140,24 @@ function picturesInOrder(snapshot: ProposalSnapshot): AirflowPicture[] {
   return [...snapshot.before, ...snapshot.options.flatMap((o) => o.after)].map((s) => s.picture).filter((p): p is AirflowPicture => Boolean(p));
 }
 
-function Picture({ space, heading, notes }: { space: SnapshotSpace; heading: string; notes: PictureNotes }) {
+function Picture({ space, heading, sectionTitle, notes, beside }: { space: SnapshotSpace; heading: string; sectionTitle?: string; notes: PictureNotes; beside?: ReactNode }) {
   if (!space.picture) return null;
   const own = notes.get(space.picture) ?? { captions: [], legend: [] };
+  const svg = <AirflowSvg picture={space.picture} widthPt={beside ? Math.min(pictureWidthPt(space.picture), CONTENT_WIDTH_PT - BESIDE_WIDTH_PT - 12) : pictureWidthPt(space.picture)} />;
   return (
-    // One block, the full width of the page: a page never starts with a picture's notes cut off from it.
+    // One block, the full width of the page: a page never starts with a picture's notes cut off from
+    // it, and a section's title that opens with the picture never ends a page alone.
     <View style={{ marginBottom: 6, width: CONTENT_WIDTH_PT }} wrap={false}>
-      <Text style={s.h3} minPresenceAhead={60}>{heading}</Text>
-      <AirflowSvg picture={space.picture} widthPt={pictureWidthPt(space.picture)} />
+      {sectionTitle ? <Text style={s.h2}>{sectionTitle}</Text> : null}
+      <Text style={s.h3}>{heading}</Text>
+      {beside ? (
+        <View style={{ flexDirection: "row", gap: 12, alignItems: "center" }}>
+          {svg}
+          <View style={{ width: BESIDE_WIDTH_PT }}>{beside}</View>
+        </View>
+      ) : (
+        svg
+      )}
       {own.captions.map((c, i) => (
         <Text key={`c${i}`} style={s.caption}>{c}</Text>
       ))}
@@ -191,13 +204,18 @@ function AtAGlance({ snapshot }: { snapshot: ProposalSnapshot }) {
   );
 }
 
-function OptionSection({ option, index, notes, before }: { option: SnapshotOption; index: number; notes: PictureNotes; before: ProposalSnapshot["before"] }) {
+function OptionSection({ option, index, notes }: { option: SnapshotOption; index: number; notes: PictureNotes }) {
   const price = option.price;
   return (
-    <View break>
-      <Text style={s.h2} minPresenceAhead={90}>Option {index + 1}: {option.name}</Text>
+    // Options follow on from each other: an option starts a page only when its heading, scope and
+    // price don't fit on the one before (they move as one block), so two options fit in 5 pages.
+    // (A fragment, not a View: react-pdf 4 fails on a View whose first child, unbreakable, moves to
+    // the next page with a picture in it: "unsupported number: Infinity".)
+    <>
+      <View wrap={false} style={{ marginTop: 6 }}>
+      <Text style={s.h2}>Option {index + 1}: {option.name}</Text>
       {homeownerNotes(option.notes) ? <Text style={s.para}>{homeownerNotes(option.notes)}</Text> : null}
-      <Text style={s.h3} minPresenceAhead={60}>What we would do</Text>
+      <Text style={s.h3}>What we would do</Text>
       <Bullets items={unique(option.scope)} />
       {price ? (
         <View style={s.priceBox} wrap={false}>
@@ -211,14 +229,24 @@ function OptionSection({ option, index, notes, before }: { option: SnapshotOptio
       ) : (
         <Text style={s.para}>This option could not be priced; ask us for the figure.</Text>
       )}
+      </View>
       {option.after.map((space) => (
-        <View key={space.spaceId}>
-          <Picture space={space} heading={option.after.length > 1 ? `${space.name} after option ${index + 1}` : `Your attic after option ${index + 1}`} notes={notes} />
-          {space.analysis ? <AfterFigures analysis={space.analysis} /> : <Bullets items={space.issues} />}
-          <AirflowEstimatePdf spaceName={space.name} before={before.find((b) => b.spaceId === space.spaceId)?.airflow} after={space.airflow} />
-        </View>
+        <Fragment key={space.spaceId}>
+          {space.picture ? (
+            <Picture
+              space={space}
+              heading={option.after.length > 1 ? `${space.name} after option ${index + 1}` : `Your attic after option ${index + 1}`}
+              notes={notes}
+              beside={space.analysis ? <AfterFigures analysis={space.analysis} /> : <Bullets items={space.issues} />}
+            />
+          ) : space.analysis ? (
+            <AfterFigures analysis={space.analysis} />
+          ) : (
+            <Bullets items={space.issues} />
+          )}
+        </Fragment>
       ))}
-    </View>
+    </>
   );
 }
 
@@ -226,9 +254,10 @@ function OptionSection({ option, index, notes, before }: { option: SnapshotOptio
 function AfterFigures({ analysis }: { analysis: SnapshotAnalysis }) {
   return (
     <View wrap={false}>
-      <Figure label="Intake provided (low, at the eaves)" value={sqIn(analysis.provided.intakeSqIn)} />
-      <Figure label="Exhaust provided (high, near the ridge)" value={sqIn(analysis.provided.exhaustSqIn)} />
-      <Figure label={`Total provided (the code asks for ${sqIn(analysis.requirement.totalSqIn)})`} value={sqIn(analysis.provided.totalSqIn)} isStrong />
+      <Figure label="Intake, at the eaves" value={sqIn(analysis.provided.intakeSqIn)} />
+      <Figure label="Exhaust, near the ridge" value={sqIn(analysis.provided.exhaustSqIn)} />
+      <Figure label="Total provided" value={sqIn(analysis.provided.totalSqIn)} isStrong />
+      <Figure label="Code minimum" value={sqIn(analysis.requirement.totalSqIn)} />
       <Figure label="Meets the code minimum" value={analysis.compliant ? "Yes" : "No"} isStrong />
     </View>
   );
@@ -300,6 +329,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
   const findings = groupBySpace(snapshot.before.flatMap((space) => homeownerFindings(space.analysis?.findings ?? []).map((f) => ({ ...f, space: space.name }))));
   const notes = pictureNotes(picturesInOrder(snapshot));
   const notesSeen = new Set<string>();
+  const todayTitle = snapshot.before.length > 1 ? "Your attics today" : "Your attic today";
   return (
     <Document title={`Proposal for ${snapshot.customer.name}`} author={c.name} subject="Attic ventilation proposal" creator="Eavesight" producer="Eavesight">
       <Page size="LETTER" style={s.page}>
@@ -357,13 +387,18 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
           </View>
         ))}
 
-        <View break>
-          <Text style={s.h2} minPresenceAhead={90}>{snapshot.before.length > 1 ? "Your attics today" : "Your attic today"}</Text>
-          {snapshot.before.map((space) => (
-            <View key={space.spaceId}>
+        <>
+          {snapshot.before[0]?.analysis && snapshot.before[0].picture ? null : <Text style={s.h2}>{todayTitle}</Text>}
+          {snapshot.before.map((space, i) => (
+            <Fragment key={space.spaceId}>
               {space.analysis ? (
                 <>
-                  <Picture space={space} heading={snapshot.before.length > 1 ? `How air moves in the ${space.name.toLowerCase()}` : "How air moves through the attic"} notes={notes} />
+                  <Picture
+                    space={space}
+                    sectionTitle={i === 0 ? todayTitle : undefined}
+                    heading={snapshot.before.length > 1 ? `How air moves in the ${space.name.toLowerCase()}` : "How air moves through the attic"}
+                    notes={notes}
+                  />
                   <Figures analysis={space.analysis} />
                   <SpaceNotes space={space} seen={notesSeen} />
                 </>
@@ -373,11 +408,15 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
                   <Bullets items={space.issues} />
                 </>
               )}
-            </View>
+            </Fragment>
           ))}
-        </View>
+        </>
 
-        {snapshot.options.map((option, i) => <OptionSection key={option.id} option={option} index={i} notes={notes} before={snapshot.before} />)}
+        {snapshot.options.map((option, i) => <OptionSection key={option.id} option={option} index={i} notes={notes} />)}
+
+        <AirflowEstimatesPdf
+          spaces={snapshot.before.map((b) => ({ name: b.name, before: b.airflow, afters: snapshot.options.map((o) => o.after.find((a) => a.spaceId === b.spaceId)?.airflow) }))}
+        />
 
         {snapshot.photos.length ? (
           <View break>
