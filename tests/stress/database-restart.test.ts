@@ -74,7 +74,12 @@ describe("PostgreSQL restarted while requests flow", () => {
     let stop = false;
     const load = Promise.all(Array.from({ length: LOAD_WORKERS }, (_, w) => client(asOwner, w, () => stop, outcomes)));
 
-    await new Promise((r) => setTimeout(r, 2_000));
+    // The database goes down once the load is really flowing: every client has had a write
+    // confirmed (on a loaded machine that can take longer than any fixed wait).
+    const flowDeadline = Date.now() + 60_000;
+    while (new Set(outcomes.filter((o) => o.status === 201).map((o) => o.name.split(" ")[1]!.split("-")[0])).size < LOAD_WORKERS && Date.now() < flowDeadline) {
+      await new Promise((r) => setTimeout(r, 100));
+    }
     const downAt = Date.now();
     await db!.stop("immediate");
     await new Promise((r) => setTimeout(r, 3_000));
