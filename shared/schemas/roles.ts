@@ -1,5 +1,5 @@
 /** Roles and what each may do (DESIGN.md §2). One table, read by the server's guards and the client's navigation. */
-export const ROLES = ["owner", "estimator", "sales"] as const;
+export const ROLES = ["owner", "estimator", "sales", "crew"] as const;
 export type Role = (typeof ROLES)[number];
 
 export const PERMISSIONS = {
@@ -22,6 +22,14 @@ export const PERMISSIONS = {
   "proposals:outcome": ["owner", "sales"],
   "pipeline:read": ["owner", "sales"],
   "payments:refund": ["owner"],
+  /** The team list (names and roles), for picking an estimator or a crew; the crew has no use for it. */
+  "users:read": ["owner", "estimator", "sales"],
+  /** Put a crew on accepted work with a date. */
+  "jobs:assign": ["owner", "sales"],
+  /** Open job sheets: the crew only those assigned to it (checked per job in the service), the office all. */
+  "jobs:read": ["owner", "estimator", "sales", "crew"],
+  /** Tick the checklist, add photos and mark the job done: the crew on its own jobs, or the owner. */
+  "jobs:work": ["owner", "crew"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

@@ -15,3 +15,4 @@ export * from "./proposals.ts";
 export * from "./payments.ts";
 export * from "./limits.ts";
 export * from "./change-orders.ts";
+export * from "./jobs.ts";

@@ -21,6 +21,8 @@ export const photos = pgTable(
     /** The finding the photo documents, e.g. "soffits-blocked". */
     findingCode: text(),
     caption: text(),
+    /** A photo the crew took for a checklist item of the install (issue 21); null for survey photos. */
+    jobItemId: text(),
     storageKey: text().notNull(),
     thumbKey: text().notNull(),
     contentType: text().notNull(),

@@ -1,8 +1,9 @@
 import { pgTable, uuid, text, timestamp, boolean, pgEnum, uniqueIndex } from "drizzle-orm/pg-core";
 import { sql } from "drizzle-orm";
 import { companies } from "./companies.ts";
+import { ROLES } from "../../../shared/schemas/roles.ts";
 
-export const roleEnum = pgEnum("role", ["owner", "estimator", "sales"]);
+export const roleEnum = pgEnum("role", ROLES);
 export const unitSystemEnum = pgEnum("unit_system", ["imperial", "metric"]);
 
 export const users = pgTable(

@@ -1,0 +1,4 @@
+export * from "./types";
+export { installChecklist } from "./install-checklist";
+export { jobCautions, JOB_DEFERRAL } from "./job-cautions";
+export { checklistProblems, type Tick } from "./checklist-state";
