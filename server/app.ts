@@ -60,6 +60,10 @@ import { renderChangeOrderPdf } from "./modules/proposals/pdf/change-order-docum
 import { createChangeOrdersRepository } from "./modules/change-orders/change-orders.repository.ts";
 import { createChangeOrdersService } from "./modules/change-orders/change-orders.service.ts";
 import { changeOrdersRouter, publicChangeOrdersRouter } from "./modules/change-orders/change-orders.router.ts";
+import { createJobsRepository } from "./modules/jobs/jobs.repository.ts";
+import { createJobsService } from "./modules/jobs/jobs.service.ts";
+import { jobsRouter, publicJobsRouter } from "./modules/jobs/jobs.router.ts";
+import { renderCompletionPdf } from "./modules/proposals/pdf/completion-document.tsx";
 import { createPipelineRepository } from "./modules/pipeline/pipeline.repository.ts";
 import { createPipelineService } from "./modules/pipeline/pipeline.service.ts";
 import { pipelineRouter } from "./modules/pipeline/pipeline.router.ts";
@@ -161,6 +165,10 @@ export function createApp(deps: AppDeps): Express {
     jobs: deps.jobs, logger, now, appOrigin,
   });
 
+  const jobsService = createJobsService({
+    repo: createJobsRepository(db), proposals: proposalsRepo, storage, jobs: proposalJobs, renderReport: renderCompletionPdf, now, appOrigin: () => appOrigin(),
+  });
+
   const pipelineService = createPipelineService({
     repo: createPipelineRepository(db), now,
     liveOptionTotals: async (actor, projectId) => (await optionsService.list(actor, projectId)).map((o) => ({ id: o.id, totalCents: o.price?.totalCents ?? null })),
@@ -199,7 +207,8 @@ export function createApp(deps: AppDeps): Express {
     authRouter(authService, lucia), teamRouter(teamService), outboxRouter(createOutboxRepository(db)),
     customersRouter(customersService), projectsRouter(projectsService), spacesRouter(spacesService), photosRouter(photosService), usersRouter(usersService),
     catalogRouter(catalogService), optionsRouter(optionsService), proposalsRouter(proposalsService, companyService), publicProposalsRouter(proposalsService),
-    paymentsRouter(paymentsService), pipelineRouter(pipelineService), changeOrdersRouter(changeOrdersService), publicChangeOrdersRouter(changeOrdersService)];
+    paymentsRouter(paymentsService), pipelineRouter(pipelineService), changeOrdersRouter(changeOrdersService), publicChangeOrdersRouter(changeOrdersService),
+    jobsRouter(jobsService), publicJobsRouter(jobsService)];
   for (const router of declared) api.use(router);
   app.locals.routes = declared.flatMap((router) => router.routes.map((route): RouteInfo => ({ ...route, path: `/api${route.path}` })));
 

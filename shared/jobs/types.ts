@@ -15,3 +15,37 @@ export interface ChecklistItem {
   /** Its own safety caution, when the step carries one. */
   caution: string | null;
 }
+
+export interface JobPhoto {
+  id: string;
+  caption: string | null;
+  url: string;
+  thumbUrl: string;
+}
+
+/** A checklist item as the sheet shows it: the generated step, whether it is ticked, and its photos. */
+export interface JobSheetItem extends ChecklistItem {
+  isTicked: boolean;
+  tickedAt: string | null;
+  photos: JobPhoto[];
+}
+
+/** Money on the sheet, present only for the office or when the owner lets the crew see prices. */
+export interface JobMoney {
+  signedTotalCents: number;
+  changeOrdersCents: number;
+  jobTotalCents: number;
+  paidCents: number;
+  balanceCents: number;
+}
+
+export interface JobSummary {
+  id: string;
+  projectId: string;
+  status: JobStatus;
+  scheduledFor: string;
+  completedAt: string | null;
+  title: string;
+  siteAddress: string;
+  crewName: string;
+}

@@ -62,6 +62,10 @@ export const CompanyProfilePatchSchema = z.object({
   defaultCodeBasis: CodeBasisSchema,
   defaultClimateZone: z.number({ error: "The climate zone is a number 1–8." }).int("The climate zone is a whole number 1–8.").min(1, "The climate zone is 1–8.").max(8, "The climate zone is 1–8."),
   unitSystem: z.enum(["imperial", "metric"], { error: "Choose feet and inches or metric." }),
+  /** Let crew members see prices and the balance on their job sheets (off unless the owner turns it on). */
+  isCrewShownPrices: z.boolean(),
+  /** The warranty printed on each completion report (workmanship, how to claim). */
+  warrantyTerms: optionalText("The warranty terms", 5_000),
 }).partial().strict();
 export type CompanyProfilePatch = z.infer<typeof CompanyProfilePatchSchema>;
 

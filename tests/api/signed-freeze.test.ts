@@ -157,6 +157,10 @@ const ROUTES: Record<string, { refuses: Call[] } | { leavesAlone: string; calls?
   "patch /api/team/users/:id": { leavesAlone: "accounts" },
   "post /api/team/users/:id/deactivate": { leavesAlone: "accounts" },
   "post /api/team/users/:id/reactivate": { leavesAlone: "accounts" },
+  "put /api/projects/:id/job": { leavesAlone: "puts a crew and a date on the signed work; the sheet reads the frozen list (crew-jobs.test.ts)" },
+  "put /api/jobs/:id/items/:itemId": { leavesAlone: "ticks a step of the install; the steps come from the signed work (crew-jobs.test.ts)" },
+  "post /api/jobs/:id/items/:itemId/photos": { leavesAlone: "new photos only, marked as the crew's" },
+  "post /api/jobs/:id/complete": { leavesAlone: "closes the install and reports it; the signed documents are untouched (crew-jobs.test.ts)" },
 };
 
 const writeRoutes = () => (t.app.locals.routes as RouteInfo[]).filter((r) => r.method !== "get").map((r) => `${r.method} ${r.path}`);

@@ -16,7 +16,7 @@ const upload = multer({
 }).single("file");
 
 /** Reads the multipart body, turning multer's errors into answers a person can act on. */
-function receiveFile(req: Request, res: Response): Promise<void> {
+export function receiveFile(req: Request, res: Response): Promise<void> {
   return new Promise((resolve, reject) => {
     upload(req, res, (err: unknown) => {
       if (!err) return resolve();

@@ -28,6 +28,8 @@ export function presentCompany(c: CompanyRow) {
     unitSystem: settings.unitSystem ?? "imperial",
     logo: settings.logoStorageKey ? { contentType: settings.logoContentType, sha256: settings.logoSha256, url: "/api/company/logo" } : null,
     estimateConditions: estimateConditionsOf(settings),
+    isCrewShownPrices: settings.isCrewShownPrices ?? false,
+    warrantyTerms: settings.warrantyTerms ?? null,
   };
 }
 
@@ -55,7 +57,7 @@ export function createCompanyService(deps: { repo: ProposalsRepository; storage:
 
     async update(actor: Actor, patch: CompanyProfilePatch) {
       const c = await current(actor);
-      const { isCoolingOffNoticeEnabled, reminderDays, upperShareBase, estimateConditions, defaultClimateZone, unitSystem, ...columns } = patch;
+      const { isCoolingOffNoticeEnabled, reminderDays, upperShareBase, estimateConditions, defaultClimateZone, unitSystem, isCrewShownPrices, warrantyTerms, ...columns } = patch;
       const settings: CompanySettings = { ...(c.settings as CompanySettings) };
       if (isCoolingOffNoticeEnabled !== undefined) settings.isCoolingOffNoticeEnabled = isCoolingOffNoticeEnabled;
       if (reminderDays !== undefined) settings.reminderDays = reminderDays;
@@ -63,6 +65,8 @@ export function createCompanyService(deps: { repo: ProposalsRepository; storage:
       if (estimateConditions !== undefined) settings.estimateConditions = estimateConditions;
       if (defaultClimateZone !== undefined) settings.defaultClimateZone = defaultClimateZone;
       if (unitSystem !== undefined) settings.unitSystem = unitSystem;
+      if (isCrewShownPrices !== undefined) settings.isCrewShownPrices = isCrewShownPrices;
+      if (warrantyTerms !== undefined) settings.warrantyTerms = warrantyTerms;
       const updated = await repo.updateCompany(actor, { ...columns, settings: settings as Record<string, unknown> });
       return presentCompany(updated!);
     },

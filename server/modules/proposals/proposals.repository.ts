@@ -40,6 +40,10 @@ export interface CompanySettings {
   logoSha256?: string | null;
   /** Summer and winter conditions for airflow estimates; the defaults when absent. */
   estimateConditions?: EstimateConditions;
+  /** Crew members see prices on job sheets (absent = no). */
+  isCrewShownPrices?: boolean;
+  /** Printed on completion reports. */
+  warrantyTerms?: string | null;
 }
 
 export function createProposalsRepository(db: Database) {

@@ -18,7 +18,7 @@ const PhotoIdSchema = IdParam;
 const ImageQuerySchema = z.object({ thumb: z.enum(["1", "0", "true", "false"], { error: "thumb is 1 or 0." }).optional() });
 
 /** The homeowner's images: inline, kept by this browser only, never by shared caches. */
-async function sendImage(res: import("express").Response, file: { body: Readable; contentType: string; sizeBytes: number | null }) {
+export async function sendImage(res: import("express").Response, file: { body: Readable; contentType: string; sizeBytes: number | null }) {
   res.set({
     "Content-Type": file.contentType,
     "Cache-Control": "private, max-age=3600",

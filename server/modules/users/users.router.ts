@@ -5,12 +5,12 @@ import { routesRouter } from "../../lib/routes.ts";
 import { ROLES } from "../../../shared/schemas/roles.ts";
 import type { UsersService } from "./users.service.ts";
 
-const UsersQuerySchema = z.object({ role: z.enum(ROLES, { error: "Role is owner, estimator or sales." }).optional() });
+const UsersQuerySchema = z.object({ role: z.enum(ROLES, { error: "Role is owner, estimator, sales or crew." }).optional() });
 
 export function usersRouter(service: UsersService) {
   return routesRouter([
     {
-      method: "get", path: "/users", access: "signed-in",
+      method: "get", path: "/users", access: "users:read",
       handler: async (req, res) => { res.json(await service.list(actorOf(req), parse(UsersQuerySchema, req.query).role)); },
     },
   ]);
