@@ -5,13 +5,15 @@ import { eq } from "drizzle-orm";
 import { changeOrders, payments, proposals } from "../../server/db/schema/index.ts";
 import { can, ROLES } from "../../shared/schemas/roles.ts";
 import { ORIGIN, startTestApp, type TestApp } from "../setup/test-app.ts";
-import { createCustomer, createProject, createSpace, mainAttic, makeTeam, type Agent, type Team } from "../setup/survey-fixtures.ts";
+import { createCustomer, createProject, createSpace, mainAttic, makeTeam, send, type Agent, type Team } from "../setup/survey-fixtures.ts";
+import { acceptedProject, makeCrew } from "../setup/job-fixture.ts";
 
 let t: TestApp;
 let tallgrass: Team;
 let bluestem: Team;
 const ids: Record<string, string> = {};
 let png: Buffer;
+let crew: Awaited<ReturnType<typeof makeCrew>>;
 
 beforeAll(async () => {
   t = await startTestApp();
@@ -48,6 +50,17 @@ beforeAll(async () => {
     companyId: tallgrass.company.id, projectId: project.id, proposalId: ids.proposal!, number: 1, status: "sent", reason: "Qwerty change", pdfKey: rendered!.pdfKey, pdfSha256: `co-${rendered!.pdfSha256}`,
   }).returning();
   ids.changeOrder = changeOrder!.id;
+  // A completed job of the first company's crew member (so its sheet, photos and report all answer 200).
+  crew = await makeCrew(t, tallgrass);
+  const work = await acceptedProject(t, tallgrass, { title: "Qwerty job" });
+  const job = await send(tallgrass.asSales, "put", `/api/projects/${work.projectId}/job`, { crewUserId: crew.user.id, scheduledFor: "2026-12-08" });
+  ids.job = job.body.job.id;
+  for (const itemId of ["w1", `m-${work.stripId}`]) {
+    const photo = await crew.agent.post(`/api/jobs/${ids.job}/items/${itemId}/photos`).set("origin", ORIGIN).attach("file", png, "after.png");
+    ids.jobPhoto = photo.body.photo.id;
+    await send(crew.agent, "put", `/api/jobs/${ids.job}/items/${itemId}`, { isDone: true });
+  }
+  expect((await send(crew.agent, "post", `/api/jobs/${ids.job}/complete`)).status).toBe(200);
   Object.assign(ids, {
     customer: customer.id, project: project.id, space: space.id, secondSpace: second.id, photo: photo.body.photo.id, invite: invite.body.invite.id,
     catalogItem: item.body.item.id, option: option.body.option.id,
@@ -100,6 +113,14 @@ const BODIES: Record<string, () => Record<string, unknown> | "multipart" | undef
   "put /api/change-orders/:id": () => ({ version: 1, reason: "Taken over", lines: [{ id: "l1", action: "add", description: "x", quantity: 1, unitPriceCents: 100 }] }),
   "post /api/change-orders/:id/send": () => undefined,
   "get /api/change-orders/:id/pdf": () => undefined,
+  "get /api/projects/:id/job": () => undefined,
+  "put /api/projects/:id/job": () => ({ crewUserId: crew.user.id, scheduledFor: "2026-12-09" }),
+  "get /api/jobs/:id": () => undefined,
+  "put /api/jobs/:id/items/:itemId": () => ({ isDone: true }),
+  "post /api/jobs/:id/items/:itemId/photos": () => "multipart",
+  "get /api/jobs/:id/photos/:photoId": () => undefined,
+  "post /api/jobs/:id/complete": () => undefined,
+  "get /api/jobs/:id/report.pdf": () => undefined,
 };
 
 function urlFor(route: RouteInfo, id: (param: string, route: RouteInfo) => string) {
@@ -107,6 +128,9 @@ function urlFor(route: RouteInfo, id: (param: string, route: RouteInfo) => strin
 }
 const realId = (param: string, route: RouteInfo) => {
   if (param === "spaceId") return ids.space!;
+  if (param === "itemId") return "w1";
+  if (param === "photoId") return ids.jobPhoto!;
+  if (route.path.startsWith("/api/jobs")) return ids.job!;
   if (route.path.startsWith("/api/customers")) return ids.customer!;
   if (route.path.startsWith("/api/photos")) return ids.photo!;
   if (route.path.startsWith("/api/team/users")) return tallgrass.sales.id;
@@ -148,7 +172,9 @@ describe("tenant isolation (generated from the declared routes)", () => {
     expect(detail.body.photos).toHaveLength(1);
     expect(detail.body.photos[0].caption).toBeNull();
     const catalog = (await tallgrass.asOwner.get("/api/catalog").expect(200)).body.items;
-    expect(catalog.map((i: { id: string; sellPriceCents: number; isActive: boolean }) => [i.id, i.sellPriceCents, i.isActive])).toEqual([[ids.catalogItem, 900, true]]);
+    expect(catalog.filter((i: { id: string }) => i.id === ids.catalogItem).map((i: { id: string; sellPriceCents: number; isActive: boolean }) => [i.id, i.sellPriceCents, i.isActive])).toEqual([[ids.catalogItem, 900, true]]);
+    const job = (await tallgrass.asOwner.get(`/api/jobs/${ids.job}`).expect(200)).body;
+    expect([job.job.status, job.job.scheduledFor, job.job.crewName]).toEqual(["completed", "2026-12-08", crew.user.name]);
     const options = (await tallgrass.asOwner.get(`/api/projects/${ids.project}/options`).expect(200)).body.options;
     expect(options.map((o: { id: string; name: string; version: number }) => [o.id, o.name, o.version])).toEqual([[ids.option, "Qwerty option", 1]]);
   });
@@ -176,7 +202,7 @@ describe("roles (generated from the declared routes and shared/schemas/roles.ts)
   it("when each role calls each declared route of its own company, then exactly the roles without the permission get 403", async () => {
     const declared = t.app.locals.routes as RouteInfo[];
     for (const role of ROLES) {
-      const agent = { owner: tallgrass.asOwner, estimator: tallgrass.asEstimator, sales: tallgrass.asSales }[role];
+      const agent = { owner: tallgrass.asOwner, estimator: tallgrass.asEstimator, sales: tallgrass.asSales, crew: crew.agent }[role];
       // Public routes (sign-in, reset, invitations) have no role to check; they are covered in auth.test.ts.
       for (const route of declared) {
         if (route.access === "public") continue;

@@ -35,6 +35,12 @@ const s = StyleSheet.create({
   moneyRow: { flexDirection: "row", justifyContent: "space-between", paddingVertical: 1.5 },
 });
 
+/** At most about three lines under a photo, cut at a word. */
+const shortCaption = (caption: string | null) => {
+  const text = caption ?? "";
+  if (text.length <= 80) return text;
+  return `${text.slice(0, 80).replace(/\s+\S*$/, "")}…`;
+};
 const sqIn = (n: number) => `${formatNumber(Math.round(n))} sq in`;
 const verdict = (f: ReportFigures | null) => (f ? (f.isCompliant ? "meets the minimum" : "below the minimum") : "—");
 
@@ -85,7 +91,7 @@ export function CompletionDocument({ report: r, photos }: { report: CompletionRe
               {photos.map((p, i) => (
                 <View key={i} style={s.photo} wrap={false}>
                   <Image src={p.dataUrl} style={s.photoImage} />
-                  <Text style={s.small}>{(p.caption ?? "").slice(0, 70)}</Text>
+                  <Text style={s.small}>{shortCaption(p.caption)}</Text>
                 </View>
               ))}
             </View>
