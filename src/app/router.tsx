@@ -3,6 +3,8 @@ import { paths } from "@/config/paths";
 import { redirectIfSignedIn, requireArea, requireSession } from "./guards";
 import { surveyQueries } from "@/features/survey/api/queries";
 import { queryClient } from "@/lib/query-client";
+import { authQueries } from "@/features/auth/api/queries";
+import { canAccess } from "@/lib/authorization";
 import { AuthLayout } from "./layouts/auth-layout";
 import { FullPageLoading, RootLayout } from "./layouts/root-layout";
 import { RootErrorPage, RouteErrorPage } from "./route-error-page";
@@ -14,7 +16,14 @@ import { Component as NotFoundRoute } from "./routes/not-found";
  * path, so who-may-open-what reads in one place (rules: lib/authorization.ts).
  */
 const appRoutes: RouteObject[] = [
-  { index: true, loader: () => redirect(paths.app.projects.getHref()) },
+  {
+    index: true,
+    // The crew has no project list: it lands on its jobs.
+    loader: async () => {
+      const session = await queryClient.ensureQueryData(authQueries.me());
+      return redirect(session && !canAccess(session.user.role, "projects") ? paths.app.jobs.getHref() : paths.app.projects.getHref());
+    },
+  },
   {
     path: paths.app.projects.path,
     loader: requireArea("projects"),
@@ -82,6 +91,16 @@ const appRoutes: RouteObject[] = [
     lazy: () => import("./routes/pipeline"),
   },
   {
+    path: paths.app.jobs.path,
+    loader: requireArea("jobs"),
+    lazy: () => import("./routes/jobs"),
+  },
+  {
+    path: paths.app.job.path,
+    loader: requireArea("jobs"),
+    lazy: () => import("./routes/job"),
+  },
+  {
     path: paths.app.settings.root.path,
     lazy: () => import("./layouts/settings-layout").then(({ SettingsLayout }) => ({ Component: SettingsLayout })),
     children: [
@@ -120,6 +139,7 @@ export const routes: RouteObject[] = [
       // The homeowner's proposal page: no account and no app shell (it has its own plain header).
       { path: paths.publicProposal.path, errorElement: <RootErrorPage />, lazy: () => import("./routes/public-proposal") },
       { path: paths.publicChangeOrder.path, errorElement: <RootErrorPage />, lazy: () => import("./routes/public-change-order") },
+      { path: paths.publicCompletion.path, errorElement: <RootErrorPage />, lazy: () => import("./routes/public-completion") },
       {
         element: <AuthLayout />,
         errorElement: <RootErrorPage />,

@@ -74,6 +74,11 @@ export const paths = {
     customers: { path: "/customers", getHref: () => "/customers" },
     catalog: { path: "/catalog", getHref: () => "/catalog" },
     pipeline: { path: "/pipeline", getHref: () => "/pipeline" },
+    jobs: { path: "/jobs", getHref: () => "/jobs" },
+    job: {
+      path: "/jobs/:jobId",
+      getHref: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}`,
+    },
     settings: {
       root: { path: "/settings", getHref: () => "/settings" },
       profile: { path: "/settings/profile", getHref: () => "/settings/profile" },
@@ -94,10 +99,16 @@ export const paths = {
     path: "/c/:token",
     getHref: (token: string) => `/c/${encodeURIComponent(token)}`,
   },
+
+  /** The homeowner's completion report page (no account). The server mails links to it: keep it stable. */
+  publicCompletion: {
+    path: "/done/:token",
+    getHref: (token: string) => `/done/${encodeURIComponent(token)}`,
+  },
 } as const;
 
 /** Where a user lands after signing in when no `next` was given. */
-export const DEFAULT_SIGNED_IN_PATH = paths.app.projects.getHref();
+export const DEFAULT_SIGNED_IN_PATH = paths.home.getHref();
 
 /**
  * Keeps `next` to a path on this site, so a crafted link can't bounce a user to another origin

@@ -11,12 +11,14 @@ export const ROLE_LABELS: Record<Role, string> = {
   owner: "Owner",
   estimator: "Estimator",
   sales: "Sales",
+  crew: "Crew",
 };
 
 export const ROLE_DESCRIPTIONS: Record<Role, string> = {
   owner: "Everything, including team, company profile, catalog prices and the outbox.",
   estimator: "Customers, projects, attic surveys, photos and design options. Drafts proposals.",
   sales: "Views all projects, edits options and proposals, signs and sends them.",
+  crew: "Only the jobs given to them: job sheet, materials, checklist with photos, completion. No prices unless the owner allows.",
 };
 
 export type Area =
@@ -25,6 +27,7 @@ export type Area =
   | "catalog"
   | "catalog-edit"
   | "pipeline"
+  | "jobs"
   | "team"
   | "outbox"
   | "company"
@@ -37,6 +40,7 @@ const AREA_PERMISSION: Record<Area, Permission | null> = {
   catalog: "catalog:read",
   "catalog-edit": "catalog:edit",
   pipeline: "pipeline:read",
+  jobs: "jobs:read",
   team: "team:manage",
   outbox: "outbox:read",
   company: "company:edit",

@@ -1,4 +1,4 @@
-import { pgTable, uuid, text, timestamp, integer, jsonb, date, index, uniqueIndex, check } from "drizzle-orm/pg-core";
+import { pgTable, uuid, text, timestamp, integer, date, index, uniqueIndex, check } from "drizzle-orm/pg-core";
 import { sql } from "drizzle-orm";
 import type { JobStatus } from "../../../shared/jobs/types.ts";
 import { companies } from "./companies.ts";

@@ -78,6 +78,14 @@ export function createJobsRepository(db: Database) {
         .where(scoped(jobs, tenant, crewUserId ? eq(jobs.crewUserId, crewUserId) : undefined))
         .orderBy(asc(jobs.status), asc(jobs.scheduledFor), asc(projects.title)),
 
+    /** Sold projects no crew has yet, oldest sale first: the office's queue to schedule. */
+    awaitingCrew: (tenant: Tenant) =>
+      db.select({ projectId: projects.id, title: projects.title, siteAddress: projects.siteAddress })
+        .from(projects)
+        .leftJoin(jobs, eq(jobs.projectId, projects.id))
+        .where(scoped(projects, tenant, eq(projects.status, "sold"), isNull(jobs.id)))
+        .orderBy(asc(projects.updatedAt)).limit(100),
+
     crewName: async (tenant: Tenant, userId: string) =>
       (await db.select({ name: users.name }).from(users).where(scoped(users, tenant, eq(users.id, userId))).limit(1))[0]?.name ?? null,
 

@@ -29,7 +29,7 @@ export function jobsRouter(service: JobsService) {
   return routesRouter([
     {
       method: "get", path: "/jobs", access: "jobs:read",
-      handler: async (req, res) => { res.json({ jobs: await service.list(actorOf(req)) }); },
+      handler: async (req, res) => { res.json(await service.list(actorOf(req))); },
     },
     {
       method: "get", path: "/crew-members", access: "jobs:assign",

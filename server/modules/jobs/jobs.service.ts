@@ -7,6 +7,7 @@ import { applyChangeOrders } from "../../../shared/change-orders/crew-list.ts";
 import type { ChangeOrderLine } from "../../../shared/change-orders/types.ts";
 import { checklistProblems, completionReport, installChecklist, JOB_DEFERRAL, jobCautions, type CompletionReport, type JobMoney, type JobPhoto, type JobSheetItem } from "../../../shared/jobs/index.ts";
 import type { AssignJobInput } from "../../../shared/jobs/schemas.ts";
+import { can } from "../../../shared/schemas/roles.ts";
 import type { ProposalRow, ProposalsRepository, Tenant } from "../proposals/proposals.repository.ts";
 import type { ProposalJobs } from "../proposals/proposal-jobs.ts";
 import { sha256Hex } from "../proposals/proposal-snapshot.ts";
@@ -97,9 +98,11 @@ export function createJobsService(deps: JobsDeps) {
     /** People who can be given a job: active crew members of the company. */
     crewMembers: (actor: Actor) => repo.crewMembers(actor),
 
+    /** The jobs the caller sees and, for those who assign work, the sold projects still without a crew. */
     async list(actor: Actor) {
       const rows = await repo.list(actor, crewFilter(actor));
-      return rows.map((r) => ({ ...r, completedAt: r.completedAt?.toISOString() ?? null }));
+      const jobs = rows.map((r) => ({ ...r, completedAt: r.completedAt?.toISOString() ?? null }));
+      return { jobs, awaitingCrew: can(actor.role, "jobs:assign") ? await repo.awaitingCrew(actor) : [] };
     },
 
     /** The project's job, for the office's project page (null before one is assigned). */

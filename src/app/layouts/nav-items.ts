@@ -1,5 +1,5 @@
 import type { ComponentType } from "react";
-import { BoxIcon, BuildingIcon, ChartIcon, ClipboardIcon, HouseIcon, InboxIcon, UserIcon, UsersIcon, type IconProps } from "@/components/ui/icons";
+import { BoxIcon, BuildingIcon, ChartIcon, ClipboardIcon, HouseIcon, InboxIcon, ToolboxIcon, UserIcon, UsersIcon, type IconProps } from "@/components/ui/icons";
 import { paths } from "@/config/paths";
 import { canAccess, type Area, type Role } from "@/lib/authorization";
 
@@ -15,6 +15,7 @@ export const MAIN_NAV: readonly NavItem[] = [
   { label: "Customers", to: paths.app.customers.getHref(), area: "customers", icon: HouseIcon },
   { label: "Catalog", to: paths.app.catalog.getHref(), area: "catalog", icon: BoxIcon },
   { label: "Pipeline", to: paths.app.pipeline.getHref(), area: "pipeline", icon: ChartIcon },
+  { label: "Jobs", to: paths.app.jobs.getHref(), area: "jobs", icon: ToolboxIcon },
 ];
 
 export const SETTINGS_NAV: readonly NavItem[] = [

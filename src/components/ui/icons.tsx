@@ -172,3 +172,21 @@ export const SearchIcon = (p: IconProps) => (
     <path d="m20 20-4-4" />
   </Icon>
 );
+export const ToolboxIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <rect x="3" y="9" width="18" height="11" rx="1.5" />
+    <path d="M9 9V6.5A1.5 1.5 0 0 1 10.5 5h3A1.5 1.5 0 0 1 15 6.5V9M3 13.5h18M10 13.5v2h4v-2" />
+  </Icon>
+);
+export const CameraIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M4 8h3l1.5-2.5h7L17 8h3v11H4z" />
+    <circle cx="12" cy="13.5" r="3.5" />
+  </Icon>
+);
+export const MapPinIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M12 21s-6.5-6.2-6.5-11a6.5 6.5 0 0 1 13 0c0 4.8-6.5 11-6.5 11z" />
+    <circle cx="12" cy="10" r="2.3" />
+  </Icon>
+);
