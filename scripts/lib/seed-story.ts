@@ -6,7 +6,8 @@
  *   Varnum attic           surveyed    two saved options, no proposal (seed.ts)
  *   Brennock attic         proposed    options and a proposal sent, not yet opened
  *   Farrowby ranch         proposed    a proposal the homeowner has opened
- *   Castellane attic       sold        accepted with a typed signature; the crew's list released
+ *   Castellane attic       sold        accepted with a typed signature; the crew's list released, the
+ *                                      job given to the crew member (Ansel Brightwater) for tomorrow
  *   Whitcombe rental       lost        the homeowner declined, with a reason
  *   Varnum garage          completed   accepted earlier, the work done
  *
@@ -16,7 +17,7 @@
 import path from "node:path";
 import { and, eq } from "drizzle-orm";
 import type { Database } from "../../server/db/client.ts";
-import { projects, proposals, users } from "../../server/db/schema/index.ts";
+import { jobs, projects, proposals, users } from "../../server/db/schema/index.ts";
 import type { Actor } from "../../server/lib/request-context.ts";
 import { createLocalStorage } from "../../server/lib/storage/index.ts";
 import { createCatalogRepository } from "../../server/modules/catalog/catalog.repository.ts";
@@ -27,6 +28,9 @@ import type { ProposalJobs } from "../../server/modules/proposals/proposal-jobs.
 import { createProposalsRepository } from "../../server/modules/proposals/proposals.repository.ts";
 import { createProposalsService } from "../../server/modules/proposals/proposals.service.ts";
 import { createSpacesRepository } from "../../server/modules/spaces/spaces.repository.ts";
+import { createJobsRepository } from "../../server/modules/jobs/jobs.repository.ts";
+import { createJobsService } from "../../server/modules/jobs/jobs.service.ts";
+import { renderCompletionPdf } from "../../server/modules/proposals/pdf/completion-document.tsx";
 import { ESIGN_CONSENT_VERSION } from "../../shared/proposals/disclosures.ts";
 import type { DesignOptionInput } from "../../shared/schemas/options.ts";
 import type { ProjectStatus } from "../../shared/schemas/projects.ts";
@@ -81,12 +85,13 @@ export async function seedProposalStory(db: Database, companyIds: Record<string,
   const actor: Actor = { userId: sales.id, companyId, role: "sales", email: sales.email, name: sales.name };
   const projectsRepo = createProjectsRepository(db);
   const spaces = createSpacesRepository(db);
+  const storage = createLocalStorage(path.join(projectRoot, process.env.STORAGE_DIR ?? ".var/files"));
   const catalog = createCatalogRepository(db);
   const optionsRepo = createOptionsRepository(db);
   const optionsService = createOptionsService({ repo: optionsRepo, projects: projectsRepo, spaces, catalog });
   const proposalsService = createProposalsService({
     repo: createProposalsRepository(db), projects: projectsRepo, spaces, options: optionsRepo, catalog,
-    storage: createLocalStorage(path.join(projectRoot, process.env.STORAGE_DIR ?? ".var/files")), jobs: noJobs,
+    storage, jobs: noJobs,
     now: () => new Date(), appOrigin: () => process.env.APP_ORIGIN ?? `http://127.0.0.1:${process.env.PORT ?? 3000}`,
   });
   if (!(await proposalsService.sellerSignature(actor)).signature) await proposalsService.setSellerSignature(actor, { typed: sales.name });
@@ -119,6 +124,22 @@ export async function seedProposalStory(db: Database, companyIds: Record<string,
     const current = await projectsRepo.find(actor, project.id);
     if (current && current.status !== step.finalStatus) await db.update(projects).set({ status: step.finalStatus }).where(eq(projects.id, project.id));
   }
+  await seedCrewJob(db, actor, storage);
+}
+
+/** The sold project goes to the demo's crew member for tomorrow, so signing in as the crew shows a job. */
+async function seedCrewJob(db: Database, actor: Actor, storage: ReturnType<typeof createLocalStorage>): Promise<void> {
+  const [crew] = await db.select().from(users).where(and(eq(users.companyId, actor.companyId), eq(users.email, "crew@tallgrass.example")));
+  const [project] = await db.select({ id: projects.id }).from(projects).where(and(eq(projects.companyId, actor.companyId), eq(projects.title, "Castellane attic — bath fan into attic")));
+  if (!crew || !project) return;
+  const [hasJob] = await db.select({ id: jobs.id }).from(jobs).where(eq(jobs.projectId, project.id)).limit(1);
+  if (hasJob) return;
+  const service = createJobsService({
+    repo: createJobsRepository(db), proposals: createProposalsRepository(db), storage, jobs: noJobs, renderReport: renderCompletionPdf,
+    now: () => new Date(), appOrigin: () => process.env.APP_ORIGIN ?? `http://127.0.0.1:${process.env.PORT ?? 3000}`,
+  });
+  const tomorrow = new Date(Date.now() + 24 * 3_600_000).toISOString().slice(0, 10);
+  await service.assign(actor, project.id, { crewUserId: crew.id, scheduledFor: tomorrow });
 }
 
 /** Up to two of the generator's options for the project: the first of each kind, every space in one option. */

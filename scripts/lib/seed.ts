@@ -27,6 +27,7 @@ export const DEMO_USERS: { company: string; email: string; name: string; role: R
   { company: "tallgrass", email: "owner@tallgrass.example", name: "Wren Halloway", role: "owner" },
   { company: "tallgrass", email: "estimator@tallgrass.example", name: "Dale Okafor", role: "estimator" },
   { company: "tallgrass", email: "sales@tallgrass.example", name: "Priya Lindqvist", role: "sales" },
+  { company: "tallgrass", email: "crew@tallgrass.example", name: "Ansel Brightwater", role: "crew" },
   { company: "bluestem", email: "owner@bluestem.example", name: "Marcus Tealby", role: "owner" },
 ];
 

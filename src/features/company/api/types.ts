@@ -22,5 +22,9 @@ export interface CompanyProfile {
   defaultCodeBasis: CodeBasis;
   defaultClimateZone: number;
   unitSystem: "imperial" | "metric";
+  /** Crew members see prices and the balance on their job sheets. */
+  isCrewShownPrices: boolean;
+  /** Printed on every completion report. */
+  warrantyTerms: string | null;
   logo: { contentType: string | null; sha256: string | null; url: string } | null;
 }

@@ -34,6 +34,8 @@ interface FormState {
   depositValue: string;
   depositCap: string;
   isCoolingOffNoticeEnabled: boolean;
+  isCrewShownPrices: boolean;
+  warrantyTerms: string;
   isReminderOn: boolean;
   reminderDays: string;
   upperShareBase: "required" | "provided";
@@ -71,6 +73,8 @@ function toForm(c: CompanyProfile): FormState {
     depositValue: rule ? (rule.kind === "percent" ? String(rule.value) : centsToDollarsText(rule.value)) : "",
     depositCap: rule?.capCents != null ? centsToDollarsText(rule.capCents) : "",
     isCoolingOffNoticeEnabled: c.isCoolingOffNoticeEnabled,
+    isCrewShownPrices: c.isCrewShownPrices,
+    warrantyTerms: c.warrantyTerms ?? "",
     isReminderOn: c.reminderDays !== null,
     reminderDays: String(c.reminderDays ?? 3),
     upperShareBase: c.upperShareBase ?? "required",
@@ -130,6 +134,8 @@ function toPatch(f: FormState): { patch: CompanyProfilePatch | null; errors: Rec
       taxRateBasisPoints: tax.value,
       depositRule,
       isCoolingOffNoticeEnabled: f.isCoolingOffNoticeEnabled,
+      isCrewShownPrices: f.isCrewShownPrices,
+      warrantyTerms: orNull(f.warrantyTerms),
       reminderDays,
       upperShareBase: f.upperShareBase,
       estimateConditions: conditions.data,
@@ -339,6 +345,20 @@ function ProfileForm({ company }: { company: CompanyProfile }) {
             description="The FTC cooling-off rule gives a buyer three business days to cancel a sale made at their home (or away from your place of business). When on, the proposal page and PDF carry the notice and the cancellation form."
             checked={form.isCoolingOffNoticeEnabled}
             onChange={(e) => set("isCoolingOffNoticeEnabled", e.target.checked)}
+          />
+          <TextArea
+            label="Warranty on completion reports"
+            hint="Printed on the report the homeowner gets when the crew completes a job: what is covered, for how long, how to claim."
+            rows={4}
+            isOptional
+            error={errors.warrantyTerms}
+            {...text("warrantyTerms")}
+          />
+          <Checkbox
+            label="Crew members see prices"
+            description="Off: job sheets show the work, materials and checklist without prices, totals or the balance. On: the crew also sees the job total and what is still due."
+            checked={form.isCrewShownPrices}
+            onChange={(e) => set("isCrewShownPrices", e.target.checked)}
           />
           <div className="space-y-3">
             <Checkbox
