@@ -6,6 +6,8 @@ export const jobKeys = {
   all: ["jobs"] as const,
   list: () => [...jobKeys.all, "list"] as const,
   sheet: (jobId: string) => [...jobKeys.all, "sheet", jobId] as const,
+  /** Mutations ticking this job's checklist (to tell when the last one settles). */
+  ticks: (jobId: string) => [...jobKeys.all, "ticks", jobId] as const,
   crew: () => [...jobKeys.all, "crew-members"] as const,
   public: (token: string) => [...jobKeys.all, "public", token] as const,
 };

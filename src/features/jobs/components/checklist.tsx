@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { useRef, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { Badge, SeverityBadge } from "@/components/ui/badge";
 import { CameraIcon } from "@/components/ui/icons";
 import { toast } from "@/components/ui/toaster";
@@ -15,10 +15,24 @@ function ChecklistRow({ jobId, item, index, isLocked }: { jobId: string; item: J
   const fileInput = useRef<HTMLInputElement>(null);
   const [progress, setProgress] = useState<number | null>(null);
   const needsPhoto = item.isAirflowChange && item.photos.length === 0;
+  // The box follows the hand in the same event (a controlled input waiting for the query cache would spring back).
+  const [isChecked, setChecked] = useState(item.isTicked);
+  useEffect(() => setChecked(item.isTicked), [item.isTicked]);
+  const showTicked = (isTicked: boolean) => {
+    setChecked(isTicked);
+    queryClient.setQueryData<JobSheet>(jobKeys.sheet(jobId), (sheet) => sheet && { ...sheet, checklist: sheet.checklist.map((i) => (i.id === item.id ? { ...i, isTicked } : i)) });
+  };
   const tick = useMutation({
-    mutationFn: setTick,
-    onSuccess: (sheet) => queryClient.setQueryData<JobSheet>(jobKeys.sheet(jobId), sheet),
-    onError: (error) => toast.error(error.message),
+    mutationKey: jobKeys.ticks(jobId),
+    mutationFn: ({ isDone }: { isDone: boolean }) => setTick({ jobId, itemId: item.id, isDone }),
+    onError: (error, { isDone }) => {
+      showTicked(!isDone);
+      toast.error(error.message);
+    },
+    // Ticks in quick succession: only the last one to settle refetches, so an earlier answer never undoes a later tick.
+    onSettled: () => {
+      if (queryClient.isMutating({ mutationKey: jobKeys.ticks(jobId) }) === 1) void queryClient.invalidateQueries({ queryKey: jobKeys.sheet(jobId) });
+    },
   });
   const upload = useMutation({
     mutationFn: (file: File) => uploadJobPhoto({ jobId, itemId: item.id, file }, setProgress),
@@ -36,10 +50,16 @@ function ChecklistRow({ jobId, item, index, isLocked }: { jobId: string; item: J
           id={checkboxId}
           type="checkbox"
           className="mt-1 size-7 shrink-0 cursor-pointer accent-ok-600 disabled:cursor-not-allowed"
-          checked={item.isTicked}
-          disabled={isLocked || tick.isPending || (needsPhoto && !item.isTicked)}
+          checked={isChecked}
+          disabled={isLocked || (needsPhoto && !item.isTicked)}
           aria-describedby={hintId}
-          onChange={(event) => tick.mutate({ jobId, itemId: item.id, isDone: event.target.checked })}
+          onChange={(event) => {
+            // The box answers at once, in this event (a roof is no place to wait for a spinner); a refusal puts it back.
+            const isDone = event.target.checked;
+            void queryClient.cancelQueries({ queryKey: jobKeys.sheet(jobId) });
+            showTicked(isDone);
+            tick.mutate({ isDone });
+          }}
         />
         <label htmlFor={checkboxId} className="min-w-0 flex-1 cursor-pointer text-base text-ink-950">
           <span className="font-semibold tabular-nums">{index + 1}. </span>
