@@ -20,6 +20,11 @@ beforeAll(async () => {
 afterAll(async () => close?.());
 
 const PHONE = { width: 390, height: 844 };
+/** Nothing on the page reaches past the phone's width (no sideways scrolling). */
+async function noWiderThanThePhone(page: Page) {
+  const widest = await page.evaluate(() => Math.max(...[...document.querySelectorAll("html, html *")].map((el) => el.getBoundingClientRect().right)));
+  expect(widest).toBeLessThanOrEqual(PHONE.width);
+}
 const shot = (page: Page, name: string) => page.screenshot({ path: path.join(SHOTS_DIR, `${name}.png`), fullPage: true });
 
 async function api<T>(request: APIRequestContext, method: "get" | "post" | "put", url: string, data?: unknown): Promise<T> {
@@ -103,8 +108,7 @@ describe("the crew's day, end to end", () => {
     await cp.getByRole("heading", { name: /Before you start: safety/ }).waitFor();
     expect(await cp.locator("body").innerText()).not.toMatch(/\$\d/);
     await shot(cp, "crew-job-sheet-390");
-    const widest = await cp.evaluate(() => Math.max(...[...document.querySelectorAll("main *")].map((el) => el.getBoundingClientRect().right)));
-    expect(widest).toBeLessThanOrEqual(PHONE.width);
+    await noWiderThanThePhone(cp);
 
     // 3. Every step: a photo, then the tick.
     const steps = cp.locator("[data-item]");
@@ -120,6 +124,7 @@ describe("the crew's day, end to end", () => {
       await step.getByText("Done", { exact: true }).waitFor();
     }
     await cp.getByText(`${count} of ${count} done`).waitFor();
+    await noWiderThanThePhone(cp);
     await shot(cp, "crew-job-ticked-390");
     await cp.getByRole("button", { name: "Mark the job done" }).click();
     await cp.getByText("Completed", { exact: true }).waitFor();
@@ -140,6 +145,7 @@ describe("the crew's day, end to end", () => {
     await home.page.goto(new URL(link).pathname);
     await home.page.getByRole("heading", { name: "Your attic work is finished" }).waitFor();
     await expect.poll(() => home.page.locator("[data-balance]").innerText()).toMatch(/\$/);
+    await noWiderThanThePhone(home.page);
     await shot(home.page, "crew-completion-homeowner-390");
     expect(errors).toEqual([]);
     await Promise.all([owner.context.close(), home.context.close(), sales.context.close(), crew.context.close()]);

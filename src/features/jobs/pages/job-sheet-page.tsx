@@ -98,10 +98,12 @@ export function JobSheetPage({ jobId }: { jobId: string }) {
           <MapPinIcon className="size-5" /> Open the address on a map
         </a>
         <p className="pt-2 text-base"><span className="font-semibold">Homeowner:</span> {sheet.homeowner.name}</p>
-        <div className="flex flex-col gap-2 sm:flex-row">
-          {sheet.homeowner.phone ? <a href={`tel:${sheet.homeowner.phone.replace(/[^0-9+]/g, "")}`} className={buttonStyles({ variant: "secondary", className: "flex-1" })}>Call {sheet.homeowner.phone}</a> : null}
-          {sheet.homeowner.email ? <a href={`mailto:${sheet.homeowner.email}`} className={buttonStyles({ variant: "ghost", className: "flex-1" })}><MailIcon className="size-5" /> {sheet.homeowner.email}</a> : null}
-        </div>
+        {sheet.homeowner.phone ? <a href={`tel:${sheet.homeowner.phone.replace(/[^0-9+]/g, "")}`} className={buttonStyles({ variant: "secondary", className: "w-full" })}>Call {sheet.homeowner.phone}</a> : null}
+        {sheet.homeowner.email ? (
+          <a href={`mailto:${sheet.homeowner.email}`} className="flex min-h-touch items-center gap-2 text-base font-medium break-all text-ink-900 underline">
+            <MailIcon className="size-5 shrink-0" /> {sheet.homeowner.email}
+          </a>
+        ) : null}
       </Section>
 
       <Cautions sheet={sheet} />
@@ -145,8 +147,18 @@ export function JobSheetPage({ jobId }: { jobId: string }) {
           const before = sheet.before.find((b) => b.spaceId === space.spaceId);
           return (
             <div key={space.spaceId} className="space-y-2">
-              {before?.picture ? <AirflowPicture picture={before.picture} title={`${space.name} as surveyed`} /> : null}
-              {space.picture ? <AirflowPicture picture={space.picture} title={`${space.name} after the signed work`} /> : null}
+              {before?.picture ? (
+                <>
+                  <h3 className="font-semibold">{space.name}: as surveyed</h3>
+                  <AirflowPicture picture={before.picture} title={`${space.name} as surveyed`} />
+                </>
+              ) : null}
+              {space.picture ? (
+                <>
+                  <h3 className="border-t border-ink-200 pt-3 font-semibold">{space.name}: after the signed work</h3>
+                  <AirflowPicture picture={space.picture} title={`${space.name} after the signed work`} />
+                </>
+              ) : null}
               {space.summary ? <p className="text-sm">{space.summary}</p> : null}
             </div>
           );
