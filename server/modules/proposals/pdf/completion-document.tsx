@@ -41,7 +41,7 @@ const shortCaption = (caption: string | null) => {
   if (text.length <= 80) return text;
   return `${text.slice(0, 80).replace(/\s+\S*$/, "")}…`;
 };
-const sqIn = (n: number) => `${formatNumber(Math.round(n))} sq in`;
+const sqIn = (n: number) => `${formatNumber(n, { maxFractionDigits: 1 })} sq in`;
 const verdict = (f: ReportFigures | null) => (f ? (f.isCompliant ? "meets the minimum" : "below the minimum") : "—");
 
 /**

@@ -8,7 +8,7 @@ import { buttonStyles } from "@/components/ui/button";
 import { jobQueries } from "../api/queries";
 import type { ReportFigures } from "@shared/jobs/index";
 
-const sqIn = (n: number) => `${formatNumber(Math.round(n))} sq in`;
+const sqIn = (n: number) => `${formatNumber(n, { maxFractionDigits: 1 })} sq in`;
 
 function Figures({ label, f }: { label: string; f: ReportFigures | null }) {
   if (!f) return <p className="text-sm">{label}: not available</p>;
