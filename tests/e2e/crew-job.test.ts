@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { mkdirSync } from "node:fs";
 import path from "node:path";
 import sharp from "sharp";
+import AxeBuilder from "@axe-core/playwright";
 import type { APIRequestContext, Browser, Page } from "playwright-core";
 import { ESIGN_CONSENT_VERSION } from "../../shared/proposals/disclosures.ts";
 import { BASE_URL, launchBrowser, newPage, signInAs, SHOTS_DIR } from "../setup/browser.ts";
@@ -24,6 +25,12 @@ const PHONE = { width: 390, height: 844 };
 async function noWiderThanThePhone(page: Page) {
   const widest = await page.evaluate(() => Math.max(...[...document.querySelectorAll("html, html *")].map((el) => el.getBoundingClientRect().right)));
   expect(widest).toBeLessThanOrEqual(PHONE.width);
+}
+/** Serious and critical axe findings, as in accessibility.test.ts. */
+async function seriousViolations(page: Page): Promise<string[]> {
+  const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "best-practice"]).analyze();
+  expect(results.passes.length).toBeGreaterThan(10);
+  return results.violations.filter((v) => v.impact === "serious" || v.impact === "critical").flatMap((v) => v.nodes.map((n) => `${v.id}: ${n.target.join(" ")}`));
 }
 const shot = (page: Page, name: string) => page.screenshot({ path: path.join(SHOTS_DIR, `${name}.png`), fullPage: true });
 
@@ -108,6 +115,7 @@ describe("the crew's day, end to end", () => {
     await cp.getByRole("heading", { name: /Before you start: safety/ }).waitFor();
     expect(await cp.locator("body").innerText()).not.toMatch(/\$\d/);
     await shot(cp, "crew-job-sheet-390");
+    expect(await seriousViolations(cp)).toEqual([]);
     await noWiderThanThePhone(cp);
 
     // 3. Every step: a photo, then the tick.
@@ -147,6 +155,7 @@ describe("the crew's day, end to end", () => {
     await expect.poll(() => home.page.locator("[data-balance]").innerText()).toMatch(/\$/);
     await noWiderThanThePhone(home.page);
     await shot(home.page, "crew-completion-homeowner-390");
+    expect(await seriousViolations(home.page)).toEqual([]);
     expect(errors).toEqual([]);
     await Promise.all([owner.context.close(), home.context.close(), sales.context.close(), crew.context.close()]);
   }, 300_000);

@@ -1,7 +1,8 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { FieldError, Label, controlStyles } from "@/components/ui/field";
+import { FieldError, TextField } from "@/components/ui/field";
+import { Select } from "@/components/ui/select";
 import { toast } from "@/components/ui/toaster";
 import { isApiError } from "@/lib/api-client";
 import { assignJob } from "../api/jobs";
@@ -25,27 +26,27 @@ export function AssignForm({ projectId, title, initial }: { projectId: string; t
   const dateId = `date-${projectId}`;
   return (
     <form
-      className="grid gap-3 sm:grid-cols-[1fr_auto_auto] sm:items-end"
+      className="grid gap-3 sm:grid-cols-[1fr_12rem_auto] sm:items-start"
       aria-label={`Assign ${title}`}
       onSubmit={(event) => {
         event.preventDefault();
         assign.mutate({ projectId, input: { crewUserId, scheduledFor } });
       }}
     >
-      <div>
-        <Label htmlFor={crewId}>Crew</Label>
-        <select id={crewId} className={controlStyles} value={crewUserId} onChange={(e) => setCrewUserId(e.target.value)} required>
-          <option value="">{crew.data?.length === 0 ? "No crew members yet: invite one under Team" : "Choose…"}</option>
-          {(crew.data ?? []).map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
-        </select>
-        <FieldError>{fields.crewUserId}</FieldError>
-      </div>
-      <div>
-        <Label htmlFor={dateId}>Install date</Label>
-        <input id={dateId} type="date" className={controlStyles} value={scheduledFor} onChange={(e) => setScheduledFor(e.target.value)} required />
-        <FieldError>{fields.scheduledFor}</FieldError>
-      </div>
-      <Button type="submit" isLoading={assign.isPending} loadingText="Assigning…">{initial ? "Move" : "Assign"}</Button>
+      <Select
+        label="Crew"
+        id={crewId}
+        value={crewUserId}
+        onChange={(e) => setCrewUserId(e.target.value)}
+        required
+        error={fields.crewUserId}
+        options={[
+          { value: "", label: crew.data?.length === 0 ? "No crew members yet: invite one under Team" : "Choose…" },
+          ...(crew.data ?? []).map((c) => ({ value: c.id, label: c.name })),
+        ]}
+      />
+      <TextField label="Install date" id={dateId} type="date" value={scheduledFor} onChange={(e) => setScheduledFor(e.target.value)} required error={fields.scheduledFor} />
+      <Button type="submit" className="sm:mt-7" isLoading={assign.isPending} loadingText="Assigning…">{initial ? "Move" : "Assign"}</Button>
       {assign.isError && Object.keys(fields).length === 0 ? <FieldError className="sm:col-span-3">{assign.error.message}</FieldError> : null}
     </form>
   );
