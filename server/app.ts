@@ -167,6 +167,7 @@ export function createApp(deps: AppDeps): Express {
 
   const jobsService = createJobsService({
     repo: createJobsRepository(db), proposals: proposalsRepo, storage, jobs: proposalJobs, renderReport: renderCompletionPdf, now, appOrigin: () => appOrigin(),
+    payments: paymentsService,
   });
 
   const pipelineService = createPipelineService({

@@ -25,6 +25,8 @@ export type PaymentStatus = "pending" | "paid" | "refunded" | "failed";
 
 /** One payment attempt, as staff see it (provider references included). */
 export interface Payment {
+  /** The deposit after signing, or the balance after completion. */
+  purpose: "deposit" | "balance";
   id: string;
   proposalId: string;
   optionId: string;

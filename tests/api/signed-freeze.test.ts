@@ -160,6 +160,7 @@ const ROUTES: Record<string, { refuses: Call[] } | { leavesAlone: string; calls?
   "put /api/projects/:id/job": { leavesAlone: "puts a crew and a date on the signed work; the sheet reads the frozen list (crew-jobs.test.ts)" },
   "put /api/jobs/:id/items/:itemId": { leavesAlone: "ticks a step of the install; the steps come from the signed work (crew-jobs.test.ts)" },
   "post /api/jobs/:id/items/:itemId/photos": { leavesAlone: "new photos only, marked as the crew's" },
+  "post /api/public/completion/:token/balance/checkout": { leavesAlone: "payments have their own records (job-balance.test.ts)" },
   "post /api/jobs/:id/complete": { leavesAlone: "closes the install and reports it; the signed documents are untouched (crew-jobs.test.ts)" },
 };
 

@@ -156,6 +156,18 @@ describe("the crew's day, end to end", () => {
     await noWiderThanThePhone(home.page);
     await shot(home.page, "crew-completion-homeowner-390");
     expect(await seriousViolations(home.page)).toEqual([]);
+
+    // 5. The balance is paid through the deposit's flow: the payment service's page, then back to the report.
+    const balance = await home.page.locator("[data-balance]").innerText();
+    await home.page.getByRole("button", { name: "Pay the balance online" }).click();
+    await home.page.waitForURL(new RegExp(`^${process.env.PAYMENTS_API_BASE}/pay/`));
+    await home.page.getByRole("button", { name: `Pay ${balance} (test)` }).click();
+    await home.page.waitForURL(/\/done\/.*balance=success/);
+    await expect.poll(async () => {
+      await home.page.reload();
+      return home.page.locator("[data-balance]").innerText();
+    }, { timeout: 30_000 }).toBe("$0.00");
+    await shot(home.page, "crew-completion-paid-390");
     expect(errors).toEqual([]);
     await Promise.all([owner.context.close(), home.context.close(), sales.context.close(), crew.context.close()]);
   }, 300_000);

@@ -6,6 +6,8 @@ import { users } from "./users.ts";
 
 export const PAYMENT_STATUSES = ["pending", "paid", "refunded", "failed"] as const;
 export type PaymentStatus = (typeof PAYMENT_STATUSES)[number];
+export const PAYMENT_PURPOSES = ["deposit", "balance"] as const;
+export type PaymentPurpose = (typeof PAYMENT_PURPOSES)[number];
 export const paymentStatusEnum = pgEnum("payment_status", PAYMENT_STATUSES);
 
 /**
@@ -20,6 +22,8 @@ export const payments = pgTable(
     id: uuid().primaryKey().defaultRandom(),
     companyId: uuid().notNull().references(() => companies.id),
     proposalId: uuid().notNull().references(() => proposals.id),
+    /** What the payment is for: the deposit after signing, or the balance after the crew completed the job (issue 21). */
+    purpose: text().$type<PaymentPurpose>().notNull().default("deposit"),
     /** The accepted option the deposit was computed for. */
     optionId: uuid().notNull(),
     /** What the server computed and asked the provider to charge; never a figure from the client. */
@@ -49,6 +53,7 @@ export const payments = pgTable(
     // One checkout in progress per proposal: a second click reuses it instead of opening another.
     uniqueIndex("payments_one_pending_idx").on(t.proposalId).where(sql`${t.status} = 'pending'`),
     check("payments_amount_check", sql`${t.amountCents} > 0`),
+    check("payments_purpose_check", sql`${t.purpose} in ('deposit', 'balance')`),
     check("payments_refunded_check", sql`${t.refundedCents} >= 0`),
     check("payments_currency_check", sql`${t.currency} ~ '^[a-z]{3}$'`),
   ],

@@ -111,6 +111,10 @@ export function publicJobsRouter(service: JobsService) {
       },
     },
     {
+      method: "post", path: "/public/completion/:token/balance/checkout", access: "public",
+      handler: async (req, res) => { res.json(await service.publicBalanceCheckout(tokenOf(req), metaOf(req))); },
+    },
+    {
       method: "get", path: "/public/completion/:token/photos/:photoId", access: "public",
       handler: async (req, res) => {
         const token = tokenOf(req);

@@ -21,6 +21,8 @@ export interface JobsDeps {
   storage: Storage;
   jobs: Pick<ProposalJobs, "nudgeMail">;
   renderReport: (report: CompletionReport, photos: { caption: string | null; bytes: Buffer }[]) => Promise<Buffer>;
+  /** The deposit's payment flow, for the balance (payments.service.ts); absent where no payments run (the demo seed). */
+  payments?: { startBalanceCheckout: (p: ProposalRow, input: { amountCents: number; back: string }, meta: RequestMeta) => Promise<{ url: string; amountCents: number; currency: string }> };
   now: () => Date;
   appOrigin: () => string;
 }
@@ -269,6 +271,18 @@ export function createJobsService(deps: JobsDeps) {
         company: { name: company?.name ?? proposal.snapshot.company.name, phone: company?.phone ?? null, email: company?.email ?? null, addressLine: company?.addressLine ?? null, licenseNumber: company?.licenseNumber ?? null, warrantyTerms: company?.settings.warrantyTerms ?? null } });
       const photos = items.flatMap((i) => i.photos.map((p) => ({ id: p.id, caption: p.caption, url: `/api/public/completion/${token}/photos/${p.id}` })));
       return { report, photos, isPdfReady: Boolean(job.reportPdfKey), proposalToken: null as string | null };
+    },
+
+    /** The balance of completed work, worked out here and paid through the deposit's checkout. */
+    async publicBalanceCheckout(token: string, meta: RequestMeta) {
+      const job = await byToken(token);
+      const proposal = await repo.acceptedProposal(job, job.projectId);
+      if (!proposal?.snapshot) throw new AppError("not-found", REPORT_LINK_PROBLEM, 404);
+      if (!deps.payments) throw new AppError("payments-not-configured", "Online payment is not set up. Please contact the company to pay the balance.", 503);
+      const scope = await signedScope(job, proposal);
+      const due = await money(job, proposal, scope.changes, scope.option.price?.totalCents ?? 0);
+      if (due.balanceCents <= 0) throw new AppError("nothing-due", "Nothing is left to pay for this job. Thank you.", 409);
+      return deps.payments.startBalanceCheckout(proposal, { amountCents: due.balanceCents, back: `${deps.appOrigin()}/done/${encodeURIComponent(token)}` }, meta);
     },
 
     async publicPdf(token: string) {

@@ -1,3 +1,4 @@
+import type { PaymentPurpose } from "../../db/schema/payments.ts";
 import { and, desc, eq, inArray, lt, sql } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
 import { auditEvents, companies, paymentEvents, payments, proposalEvents, proposals, users, type PaymentStatus } from "../../db/schema/index.ts";
@@ -40,7 +41,7 @@ export function createPaymentsRepository(db: Database) {
       db.select().from(payments).where(scoped(payments, tenant, eq(payments.proposalId, proposalId))).orderBy(desc(payments.createdAt)),
 
     /** A new pending payment, or null when one is already pending for the proposal (the partial unique index). */
-    async insertPending(tenant: Tenant, values: { proposalId: string; optionId: string; amountCents: number; currency: string }): Promise<PaymentRow | null> {
+    async insertPending(tenant: Tenant, values: { proposalId: string; optionId: string; amountCents: number; currency: string; purpose: PaymentPurpose }): Promise<PaymentRow | null> {
       try {
         const [row] = await db.insert(payments).values({ ...values, companyId: tenant.companyId, status: "pending" }).returning();
         return row!;

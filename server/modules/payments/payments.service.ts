@@ -5,7 +5,7 @@ import type { Actor, RequestMeta } from "../../lib/request-context.ts";
 import { formatCents } from "../../../shared/pricing/index.ts";
 import type { ProposalRow } from "../proposals/proposals.repository.ts";
 import type { ProposalsService } from "../proposals/proposals.service.ts";
-import { depositDue } from "./deposit-amount.ts";
+import { depositDue, MIN_ONLINE_CHARGE_CENTS } from "./deposit-amount.ts";
 import type { CheckoutSessionFacts, PaymentProvider, ProviderEvent } from "./payment-provider.ts";
 import type { PaymentRow, PaymentsRepository } from "./payments.repository.ts";
 import type { DepositView, Payment } from "../../../shared/schemas/deposits.ts";
@@ -18,7 +18,7 @@ const STALE_START_MS = 2 * 60_000;
 /** What staff see of one payment attempt, provider ids included. */
 export function presentPayment(p: PaymentRow): Payment {
   return {
-    id: p.id, proposalId: p.proposalId, optionId: p.optionId, amountCents: p.amountCents, currency: p.currency, status: p.status,
+    id: p.id, purpose: p.purpose, proposalId: p.proposalId, optionId: p.optionId, amountCents: p.amountCents, currency: p.currency, status: p.status,
     paidCents: p.paidCents, paidAt: iso(p.paidAt), checkoutSessionId: p.checkoutSessionId, paymentIntentId: p.paymentIntentId,
     refundId: p.refundId, refundRequestedAt: iso(p.refundRequestedAt), refundRequestedBy: p.refundRequestedBy, refundedCents: p.refundedCents, refundedAt: iso(p.refundedAt),
     failedAt: iso(p.failedAt), failureReason: p.failureReason, createdAt: p.createdAt.toISOString(), updatedAt: p.updatedAt.toISOString(),
@@ -49,7 +49,9 @@ export function createPaymentsService(deps: {
     return p.depositRule ?? (await repo.companyDepositRule(p));
   }
 
-  async function depositView(p: ProposalRow, rows: PaymentRow[]): Promise<DepositView> {
+  async function depositView(p: ProposalRow, allRows: PaymentRow[]): Promise<DepositView> {
+    // The balance paid after completion is not the deposit.
+    const rows = allRows.filter((r) => r.purpose === "deposit");
     const base = {
       currency: DEPOSIT_CURRENCY, message: null, isOnlinePaymentAvailable: deps.provider !== null, isCheckoutStarted: false,
       paidAt: null, isRefundRequested: false, refundedCents: 0, refundedAt: null,
@@ -112,18 +114,19 @@ export function createPaymentsService(deps: {
     // saying "paid" (completed, then async succeeded, or retries under new ids) exactly one applies.
     const outcome = await repo.applyEventOnce(payment, event.id, event.type,
       { status: "paid", paidCents, currency, paymentIntentId: session.paymentIntentId, paidAt: now, failedAt: null, failureReason: null },
-      { event: "deposit-paid", detail, meta }, { statuses: ["pending", "failed"] });
+      { event: `${payment.purpose}-paid`, detail, meta }, { statuses: ["pending", "failed"] });
     if (!outcome) return { isApplied: false, isDuplicate: true, note: "This event was already processed." };
     if (!outcome.isApplied) return { isApplied: false, note: "The payment was already recorded." };
     const updated = outcome.row;
     if (detail.isMismatch) deps.logger.warn({ paymentId: payment.id, paidCents, expectedCents: payment.amountCents }, "the provider collected a different amount than asked");
     const option = (await repo.proposal(payment, payment.proposalId))?.snapshot?.options.find((o) => o.id === payment.optionId);
-    await notifySeller(updated, `Deposit received: ${formatCents(paidCents)}`, [
-      `The homeowner paid the deposit of ${formatCents(paidCents)}${option ? ` for "${option.name}"` : ""}.`,
+    const what = payment.purpose === "balance" ? "balance" : "deposit";
+    await notifySeller(updated, `${what === "balance" ? "Balance" : "Deposit"} received: ${formatCents(paidCents)}`, [
+      `The homeowner paid the ${what} of ${formatCents(paidCents)}${option ? ` for "${option.name}"` : ""}.`,
       `Paid: ${utc(now)}`,
       `Payment service reference: ${session.paymentIntentId ?? session.id}`,
     ]);
-    return { isApplied: true, note: "Deposit recorded as paid." };
+    return { isApplied: true, note: `${what === "balance" ? "Balance" : "Deposit"} recorded as paid.` };
   }
 
   async function onSessionClosed(event: Extract<ProviderEvent, { session: CheckoutSessionFacts }>, meta: RequestMeta) {
@@ -165,6 +168,44 @@ export function createPaymentsService(deps: {
     return { isApplied: true, note: "Refund recorded." };
   }
 
+  /** Reuses an open checkout for the same purpose and amount, else retires it and opens a new one. */
+  async function openCheckout(p: ProposalRow, rows: PaymentRow[], want: { purpose: PaymentRow["purpose"]; optionId: string; amountCents: number; description: string; back: { success: string; cancel: string } }, meta: RequestMeta) {
+    const provider = requireProvider();
+    const now = deps.now();
+    const open = rows.find((r) => r.status === "pending");
+    if (open) {
+      if (!open.checkoutSessionId) {
+        if (now.getTime() - open.createdAt.getTime() < STALE_START_MS) throw conflict("The payment page is being prepared; try again in a moment.", "checkout-starting");
+        await retire(p, open, null, "the checkout was never opened");
+      } else {
+        const session = await provider.retrieveCheckout(open.checkoutSessionId);
+        if (session.status === "complete") throw conflict("This payment was just made and is being confirmed. Refresh the page in a moment.", "payment-confirming");
+        if (session.status === "open" && session.url && open.purpose === want.purpose && session.amountTotalCents === want.amountCents && open.amountCents === want.amountCents) {
+          return { url: session.url, amountCents: want.amountCents, currency: open.currency };
+        }
+        await retire(p, open, session, session.status === "expired" ? "the checkout expired" : "the amount changed");
+      }
+    }
+
+    const row = await repo.insertPending(p, { proposalId: p.id, optionId: want.optionId, amountCents: want.amountCents, currency: DEPOSIT_CURRENCY, purpose: want.purpose });
+    if (!row) throw conflict("The payment page is being prepared; try again in a moment.", "checkout-starting");
+    let session: CheckoutSessionFacts;
+    try {
+      session = await provider.createCheckout({
+        amountCents: want.amountCents, currency: DEPOSIT_CURRENCY, description: want.description.slice(0, 250),
+        customerEmail: p.snapshot!.customer.email, successUrl: want.back.success, cancelUrl: want.back.cancel,
+        paymentId: row.id, metadata: { paymentId: row.id, proposalId: p.id, companyId: p.companyId, purpose: want.purpose },
+      });
+      if (!session.url) throw new AppError("payments-unavailable", "The payment service did not return a payment page. Please try again in a few minutes.", 502);
+    } catch (err) {
+      await repo.update(p, row.id, { status: "failed", failedAt: deps.now(), failureReason: "the checkout could not be opened" }, ["pending"]);
+      throw err;
+    }
+    await repo.update(p, row.id, { checkoutSessionId: session.id });
+    await repo.audit(p.companyId, `${want.purpose}-checkout-opened`, { proposalId: p.id, paymentId: row.id, amountCents: want.amountCents, currency: DEPOSIT_CURRENCY, checkoutSessionId: session.id }, meta);
+    return { url: session.url, amountCents: want.amountCents, currency: DEPOSIT_CURRENCY };
+  }
+
   return {
     /** GET /public/proposals/:token/deposit */
     async publicDeposit(token: string): Promise<DepositView> {
@@ -181,47 +222,31 @@ export function createPaymentsService(deps: {
       if (p.status === "declined") throw conflict("This proposal was declined, so there is no deposit to pay.", "declined");
       if (p.status !== "accepted" || !p.snapshot || !p.acceptance) throw conflict("Accept an option first: the deposit is paid after signing.", "not-accepted");
       const rows = await repo.listForProposal(p, p.id);
-      if (rows.some((r) => r.status === "paid")) throw conflict("The deposit for this proposal has already been paid.", "already-paid");
-      if (rows.some((r) => r.status === "refunded")) throw conflict("The deposit for this proposal was refunded. Please contact the company.", "refunded");
+      const deposits = rows.filter((r) => r.purpose === "deposit");
+      if (deposits.some((r) => r.status === "paid")) throw conflict("The deposit for this proposal has already been paid.", "already-paid");
+      if (deposits.some((r) => r.status === "refunded")) throw conflict("The deposit for this proposal was refunded. Please contact the company.", "refunded");
       const due = depositDue(p.snapshot, p.acceptance.optionId, await ruleFor(p));
       if (!due.isDue) throw new AppError("no-deposit", due.reason, 409);
-      const provider = requireProvider();
-      const now = deps.now();
-
-      const open = rows.find((r) => r.status === "pending");
-      if (open) {
-        if (!open.checkoutSessionId) {
-          if (now.getTime() - open.createdAt.getTime() < STALE_START_MS) throw conflict("The payment page is being prepared; try again in a moment.", "checkout-starting");
-          await retire(p, open, null, "the checkout was never opened");
-        } else {
-          const session = await provider.retrieveCheckout(open.checkoutSessionId);
-          if (session.status === "complete") throw conflict("This deposit was just paid and is being confirmed. Refresh the page in a moment.", "payment-confirming");
-          if (session.status === "open" && session.url && session.amountTotalCents === due.amountCents && open.amountCents === due.amountCents) {
-            return { url: session.url, amountCents: due.amountCents, currency: open.currency };
-          }
-          await retire(p, open, session, session.status === "expired" ? "the checkout expired" : "the deposit amount changed");
-        }
-      }
-
-      const row = await repo.insertPending(p, { proposalId: p.id, optionId: due.optionId, amountCents: due.amountCents, currency: DEPOSIT_CURRENCY });
-      if (!row) throw conflict("The payment page is being prepared; try again in a moment.", "checkout-starting");
       const back = `${deps.appOrigin()}/p/${encodeURIComponent(token)}`;
-      let session: CheckoutSessionFacts;
-      try {
-        session = await provider.createCheckout({
-          amountCents: due.amountCents, currency: DEPOSIT_CURRENCY,
-          description: `Deposit: ${due.optionName} — ${p.snapshot.company.name}, ${p.snapshot.site.address}`.slice(0, 250),
-          customerEmail: p.snapshot.customer.email, successUrl: `${back}?deposit=success`, cancelUrl: `${back}?deposit=cancel`,
-          paymentId: row.id, metadata: { paymentId: row.id, proposalId: p.id, companyId: p.companyId },
-        });
-        if (!session.url) throw new AppError("payments-unavailable", "The payment service did not return a payment page. Please try again in a few minutes.", 502);
-      } catch (err) {
-        await repo.update(p, row.id, { status: "failed", failedAt: deps.now(), failureReason: "the checkout could not be opened" }, ["pending"]);
-        throw err;
-      }
-      await repo.update(p, row.id, { checkoutSessionId: session.id });
-      await repo.audit(p.companyId, "deposit-checkout-opened", { proposalId: p.id, paymentId: row.id, amountCents: due.amountCents, currency: DEPOSIT_CURRENCY, checkoutSessionId: session.id }, meta);
-      return { url: session.url, amountCents: due.amountCents, currency: DEPOSIT_CURRENCY };
+      return openCheckout(p, rows, {
+        purpose: "deposit", optionId: due.optionId, amountCents: due.amountCents, back: { success: `${back}?deposit=success`, cancel: `${back}?deposit=cancel` },
+        description: `Deposit: ${due.optionName} — ${p.snapshot.company.name}, ${p.snapshot.site.address}`,
+      }, meta);
+    },
+
+    /**
+     * Opens the provider's checkout for the balance of completed work, through the deposit's flow
+     * (one open checkout per proposal, confirmed only by the signed webhook). The caller (the jobs
+     * module) works out the amount on the server; nothing the client sends is read.
+     */
+    async startBalanceCheckout(p: ProposalRow, input: { amountCents: number; back: string }, meta: RequestMeta): Promise<{ url: string; amountCents: number; currency: string }> {
+      if (p.status !== "accepted" || !p.snapshot || !p.acceptance) throw conflict("This work's proposal is not accepted.", "not-accepted");
+      if (input.amountCents < MIN_ONLINE_CHARGE_CENTS) throw new AppError("nothing-due", "Nothing is left to pay online for this job.", 409);
+      const rows = await repo.listForProposal(p, p.id);
+      return openCheckout(p, rows, {
+        purpose: "balance", optionId: p.acceptance.optionId, amountCents: input.amountCents, back: { success: `${input.back}?balance=success`, cancel: `${input.back}?balance=cancel` },
+        description: `Balance: ${p.snapshot.company.name}, ${p.snapshot.site.address}`,
+      }, meta);
     },
 
     /** POST /webhooks/payments: verified, then applied at most once per event id. */

@@ -25,3 +25,7 @@ export const completeJob = (jobId: string) => apiClient.post<{ sheet: JobSheet; 
 
 /** GET /api/public/completion/:token */
 export const getPublicCompletion = (token: string, signal?: AbortSignal) => apiClient.get<PublicCompletion>(`/public/completion/${enc(token)}`, { signal });
+
+/** POST /api/public/completion/:token/balance/checkout → the provider's payment page for the balance. */
+export const startBalanceCheckout = (token: string) =>
+  apiClient.post<{ url: string; amountCents: number; currency: string }>(`/public/completion/${enc(token)}/balance/checkout`, {});

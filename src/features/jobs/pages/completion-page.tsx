@@ -1,10 +1,14 @@
-import { useQuery } from "@tanstack/react-query";
+import { useMutation, useQuery } from "@tanstack/react-query";
+import { useSearchParams } from "react-router";
+import { Alert } from "@/components/ui/alert";
+import { Button, buttonStyles } from "@/components/ui/button";
+import { startBalanceCheckout } from "../api/jobs";
 import { formatCents } from "@shared/pricing/format-money";
 import { formatNumber } from "@shared/units/format";
 import { EmptyState } from "@/components/ui/empty-state";
 import { HouseIcon, OkIcon } from "@/components/ui/icons";
 import { LoadingBlock } from "@/components/ui/spinner";
-import { buttonStyles } from "@/components/ui/button";
+
 import { jobQueries } from "../api/queries";
 import type { ReportFigures } from "@shared/jobs/index";
 
@@ -17,6 +21,20 @@ function Figures({ label, f }: { label: string; f: ReportFigures | null }) {
       <p className="text-sm font-semibold text-ink-700 uppercase">{label}</p>
       <p className="text-base">Intake {sqIn(f.intakeSqIn)} · exhaust {sqIn(f.exhaustSqIn)}</p>
       <p className="flex items-center gap-1 text-base font-semibold">{f.isCompliant ? <><OkIcon className="size-5 text-ok-600" /> Meets the code minimum</> : "Below the code minimum"}</p>
+    </div>
+  );
+}
+
+/** Sends the homeowner to the payment service's page for the balance (the deposit's flow); the amount is the server's. */
+function PayBalance({ token }: { token: string }) {
+  const [search] = useSearchParams();
+  const pay = useMutation({ mutationFn: () => startBalanceCheckout(token), onSuccess: ({ url }) => window.location.assign(url) });
+  return (
+    <div className="space-y-2">
+      {search.get("balance") === "success" ? <Alert severity="ok" title="Thank you">Your payment is being confirmed by the payment service; this page shows it as paid once it arrives.</Alert> : null}
+      {pay.isError ? <Alert severity="critical" title="The payment page did not open">{pay.error.message}</Alert> : null}
+      <Button className="w-full" isLoading={pay.isPending} loadingText="Opening the payment page…" onClick={() => pay.mutate()}>Pay the balance online</Button>
+      <p className="text-sm text-ink-700">You pay on the payment service's secure page; Eavesight never sees your card.</p>
     </div>
   );
 }
@@ -64,7 +82,7 @@ export function CompletionPage({ token }: { token: string }) {
           <dt>Paid so far</dt><dd className="text-right tabular-nums">{formatCents(r.money.paidCents)}</dd>
           <dt className="font-semibold">Balance due</dt><dd className="text-right font-semibold tabular-nums" data-balance>{formatCents(r.balanceCents)}</dd>
         </dl>
-        {r.balanceCents > 0 ? <p className="text-sm">To pay the balance, contact {r.company.name}{r.company.phone ? ` at ${r.company.phone}` : ""}.</p> : <p className="text-sm">Nothing is left to pay. Thank you.</p>}
+        {r.balanceCents > 0 ? <PayBalance token={token} /> : <p className="text-sm">Nothing is left to pay. Thank you.</p>}
       </section>
       <section aria-labelledby="warranty" className="space-y-1">
         <h2 id="warranty" className="text-lg font-semibold">Warranty</h2>
