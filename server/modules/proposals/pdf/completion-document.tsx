@@ -102,6 +102,7 @@ export function CompletionDocument({ report: r, photos }: { report: CompletionRe
           <View style={s.moneyRow}><Text>Job total (signed work and signed changes)</Text><Text>{formatCents(r.money.jobTotalCents)}</Text></View>
           <View style={s.moneyRow}><Text>Paid so far</Text><Text>{formatCents(r.money.paidCents)}</Text></View>
           <View style={s.moneyRow}><Text style={s.strong}>Balance due</Text><Text style={s.strong}>{formatCents(r.balanceCents)}</Text></View>
+          {r.balanceCents > 0 ? <Text style={s.small}>Pay it online from the link in our e-mail (the same secure payment page as the deposit), or contact us.</Text> : null}
         </View>
 
         <Text style={s.h2}>Warranty</Text>

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { useEffect, useRef, useState } from "react";
+import { useRef, useState } from "react";
 import { Badge, SeverityBadge } from "@/components/ui/badge";
 import { CameraIcon } from "@/components/ui/icons";
 import { toast } from "@/components/ui/toaster";
@@ -17,7 +17,12 @@ function ChecklistRow({ jobId, item, index, isLocked }: { jobId: string; item: J
   const needsPhoto = item.isAirflowChange && item.photos.length === 0;
   // The box follows the hand in the same event (a controlled input waiting for the query cache would spring back).
   const [isChecked, setChecked] = useState(item.isTicked);
-  useEffect(() => setChecked(item.isTicked), [item.isTicked]);
+  const [serverTicked, setServerTicked] = useState(item.isTicked);
+  if (serverTicked !== item.isTicked) {
+    // The sheet changed under us (a refetch): follow it (React's "adjust state on a prop change").
+    setServerTicked(item.isTicked);
+    setChecked(item.isTicked);
+  }
   const showTicked = (isTicked: boolean) => {
     setChecked(isTicked);
     queryClient.setQueryData<JobSheet>(jobKeys.sheet(jobId), (sheet) => sheet && { ...sheet, checklist: sheet.checklist.map((i) => (i.id === item.id ? { ...i, isTicked } : i)) });
