@@ -8,7 +8,7 @@ import { isDueToExpire, reminderDecision } from "../../../shared/proposals/lifec
 import { coolingOffNotice, thirdBusinessDayAfter } from "../../../shared/proposals/disclosures.ts";
 import { formatCents } from "../../../shared/pricing/index.ts";
 import type { ProposalSnapshot } from "../../../shared/proposals/types.ts";
-import { renderProposalPdf } from "./pdf/render-pdf.tsx";
+import { renderProposalPdfOffThread as renderProposalPdf } from "./pdf/render-off-thread.ts";
 import { sha256Hex } from "./proposal-snapshot.ts";
 import type { CompanySettings, ProposalsRepository, Tenant } from "./proposals.repository.ts";
 

@@ -84,8 +84,17 @@ export function ChangeOrderDocument({ snapshot: c, acceptance, verifyUrl }: { sn
   );
 }
 
-/** The change order as PDF bytes: one short page, a few hundred milliseconds. */
-export async function renderChangeOrderPdf(input: { snapshot: ChangeOrderSnapshot; acceptance: ChangeOrderAcceptance | null; verifyUrl: string }): Promise<Buffer> {
+export interface ChangeOrderRenderInput {
+  snapshot: ChangeOrderSnapshot;
+  acceptance: ChangeOrderAcceptance | null;
+  verifyUrl: string;
+}
+
+/**
+ * The change order as PDF bytes, on the calling thread: one short page, a few hundred milliseconds.
+ * The server calls it on a compute-pool thread (render-off-thread.ts).
+ */
+export async function renderChangeOrderPdf(input: ChangeOrderRenderInput): Promise<Buffer> {
   registerFonts();
   const bytes = await renderToBuffer(<ChangeOrderDocument {...input} />);
   await new Promise((resolve) => setImmediate(resolve));
