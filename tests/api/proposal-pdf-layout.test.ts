@@ -10,6 +10,7 @@ import { companies, projects, proposals } from "../../server/db/schema/index.ts"
 import { renderProposalPdf } from "../../server/modules/proposals/pdf/render-pdf.tsx";
 import { optionFixes } from "../../shared/proposals/option-fixes.ts";
 import type { ProposalSnapshot } from "../../shared/proposals/types.ts";
+import { verifyPageUrl } from "../../shared/proposals/public-paths.ts";
 import { startTestApp, type TestApp } from "../setup/test-app.ts";
 
 /**
@@ -20,6 +21,8 @@ import { startTestApp, type TestApp } from "../setup/test-app.ts";
  */
 
 let t: TestApp;
+/** A long origin, so the footer wraps as it would for a company's own domain. */
+const LONG_VERIFY_URL = verifyPageUrl("https://proposals.tallgrass-exteriors-marrow-creek.example");
 const work = mkdtempSync(path.join(tmpdir(), "eavesight-pdf-layout-"));
 const shots = path.resolve(".var/screenshots");
 let rendered: { title: string; snapshot: ProposalSnapshot; file: string }[] = [];
@@ -36,7 +39,7 @@ beforeAll(async () => {
   for (const [i, r] of demo.entries()) {
     const file = path.join(work, `demo-${i}.pdf`);
     writeFileSync(path.join(work, `demo-${i}.json`), JSON.stringify(r.snapshot));
-    writeFileSync(file, await renderProposalPdf({ snapshot: r.snapshot!, logoDataUrl: null, photoDataUrls: {} }));
+    writeFileSync(file, await renderProposalPdf({ snapshot: r.snapshot!, logoDataUrl: null, photoDataUrls: {}, verifyUrl: LONG_VERIFY_URL }));
     execFileSync("pdftoppm", ["-png", "-r", "50", file, path.join(shots, `demo-proposal-${i}`)]);
     rendered.push({ title: r.title, snapshot: r.snapshot!, file });
   }

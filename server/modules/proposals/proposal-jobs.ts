@@ -8,6 +8,7 @@ import { isDueToExpire, reminderDecision } from "../../../shared/proposals/lifec
 import { coolingOffNotice, thirdBusinessDayAfter } from "../../../shared/proposals/disclosures.ts";
 import { formatCents } from "../../../shared/pricing/index.ts";
 import type { ProposalSnapshot } from "../../../shared/proposals/types.ts";
+import { verifyPageUrl } from "../../../shared/proposals/public-paths.ts";
 import { renderProposalPdf } from "./pdf/render-pdf.tsx";
 import { sha256Hex } from "./proposal-snapshot.ts";
 import type { CompanySettings, ProposalsRepository, Tenant } from "./proposals.repository.ts";
@@ -132,7 +133,7 @@ export function createProposalJobs(deps: {
     if (row.pdfSnapshotSha256 === data.snapshotSha256 && row.pdfKey) return;
     await repo.update(tenant, row.id, { renderStatus: "rendering", renderAttempts: row.renderAttempts + 1, renderUpdatedAt: deps.now() });
     try {
-      const bytes = await renderProposalPdf({ snapshot: row.snapshot, ...(await assets(row.snapshot)) });
+      const bytes = await renderProposalPdf({ snapshot: row.snapshot, ...(await assets(row.snapshot)), verifyUrl: verifyPageUrl(deps.appOrigin()) });
       const sha256 = sha256Hex(bytes);
       await storage.put(pdfKey(row.companyId, sha256), bytes, "application/pdf");
       const done = await repo.update(tenant, row.id, {
@@ -164,7 +165,7 @@ export function createProposalJobs(deps: {
           ? { ...row.snapshot, coolingOff: { isEnabled: true, notice: coolingOffNotice({ companyName: row.snapshot.company.name, companyAddress: row.snapshot.company.addressLine, transactionDate: signDate, cancelByDate: thirdBusinessDayAfter(signDate) }) } }
           : row.snapshot;
         const bytes = await renderProposalPdf({
-          snapshot, ...(await assets(row.snapshot)),
+          snapshot, ...(await assets(row.snapshot)), verifyUrl: verifyPageUrl(deps.appOrigin()),
           signed: {
             acceptance: a, signaturePngDataUrl: signatureUrl, originalPdfSha256: row.pdfSha256, snapshotSha256: row.snapshotSha256,
             events: events.map((e) => ({ event: e.event, at: e.at.toISOString(), ip: e.ip, userAgent: e.userAgent })),

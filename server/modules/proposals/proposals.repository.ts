@@ -190,19 +190,27 @@ export function createProposalsRepository(db: Database) {
     events: (tenant: Tenant, proposalId: string) =>
       db.select().from(proposalEvents).where(scoped(proposalEvents, tenant, eq(proposalEvents.proposalId, proposalId))).orderBy(asc(proposalEvents.id)),
 
-    /** Is this hash one of a sent change order's PDF? Its accepted revision's number comes along. */
+    /** Is this hash one of a sent change order's PDF? Its accepted revision's number and the company's name as printed come along. */
     async findChangeOrderByPdfHash(sha256: string) {
       const [row] = await db
-        .select({ number: changeOrders.number, status: changeOrders.status, sentAt: changeOrders.sentAt, decidedAt: changeOrders.decidedAt, revision: proposals.revision })
+        .select({
+          number: changeOrders.number, status: changeOrders.status, sentAt: changeOrders.sentAt, decidedAt: changeOrders.decidedAt, revision: proposals.revision,
+          companyName: sql<string | null>`${changeOrders.snapshot}->'company'->>'name'`,
+        })
         .from(changeOrders).innerJoin(proposals, eq(proposals.id, changeOrders.proposalId))
         .where(eq(changeOrders.pdfSha256, sha256)).limit(1);
       return row ?? null;
     },
 
-    /** Is this hash one of a recorded PDF (as sent, or signed)? */
+    /** Is this hash one of a recorded PDF (as sent, or signed)? With what the public check may say about it. */
     async findByPdfHash(sha256: string) {
       const [row] = await db
-        .select({ id: proposals.id, companyId: proposals.companyId, revision: proposals.revision, status: proposals.status, pdfSha256: proposals.pdfSha256, signedPdfSha256: proposals.signedPdfSha256, sentAt: proposals.sentAt, decidedAt: proposals.decidedAt })
+        .select({
+          revision: proposals.revision, status: proposals.status, pdfSha256: proposals.pdfSha256, signedPdfSha256: proposals.signedPdfSha256,
+          sentAt: proposals.sentAt, decidedAt: proposals.decidedAt, supersededBy: proposals.supersededBy,
+          signedAt: sql<string | null>`${proposals.acceptance}->>'acceptedAt'`,
+          companyName: sql<string | null>`${proposals.snapshot}->'company'->>'name'`,
+        })
         .from(proposals)
         .where(sql`${proposals.status} <> 'draft' and (${proposals.pdfSha256} = ${sha256} or ${proposals.signedPdfSha256} = ${sha256})`)
         .limit(1);

@@ -76,6 +76,23 @@ export function publicView(p: ProposalRow, snapshot: ProposalSnapshot) {
   };
 }
 
+/** What the public PDF check answers (GET and POST /api/public/verify). */
+export type VerifyAnswer =
+  | { sha256: string; matches: false }
+  | {
+      sha256: string; matches: true;
+      document: {
+        /** "sent": the revision as mailed, before any signature; "signed": the copy with the signature and certificate. */
+        kind: "sent" | "signed" | "change-order";
+        companyName: string; revision: number; changeOrderNumber: number | null;
+        status: string; sentAt: Date | null;
+        /** When the homeowner signed (UTC, ISO 8601), or null while unsigned. */
+        signedAt: string | null; decidedAt: Date | null;
+        /** A newer revision of the proposal replaced this one. */
+        isSuperseded: boolean;
+      };
+    };
+
 export function createProposalsService(deps: {
   repo: ProposalsRepository; projects: ProjectsRepository; spaces: SpacesRepository; options: OptionsRepository; catalog: CatalogRepository;
   storage: Storage; jobs: ProposalJobs; now: () => Date; appOrigin: () => string;
@@ -426,20 +443,30 @@ export function createProposalsService(deps: {
       return publicView(updated, p.snapshot!);
     },
 
-    /** Does this SHA-256 belong to a PDF we recorded (as sent, or signed)? Says nothing else about it. */
-    async verify(sha256: string) {
+    /**
+     * Does this SHA-256 belong to a PDF we recorded (a revision as sent or signed, or a change order)?
+     * A match tells what the file itself already shows (company, revision or change order) and where
+     * it stands; no match tells nothing but that. Only someone holding the file knows its hash.
+     */
+    async verify(sha256: string): Promise<VerifyAnswer> {
       const hit = await repo.findByPdfHash(sha256);
-      if (!hit) {
-        const change = await repo.findChangeOrderByPdfHash(sha256);
-        if (!change) return { sha256, matches: false as const };
+      if (hit) {
         return {
-          sha256, matches: true as const,
-          document: { kind: "change-order" as const, changeOrderNumber: change.number, revision: change.revision, status: change.status, sentAt: change.sentAt, decidedAt: change.decidedAt },
+          sha256, matches: true,
+          document: {
+            kind: hit.signedPdfSha256 === sha256 ? "signed" : "sent", companyName: hit.companyName ?? "", revision: hit.revision, changeOrderNumber: null,
+            status: hit.status, sentAt: hit.sentAt, signedAt: hit.status === "accepted" ? hit.signedAt : null, decidedAt: hit.decidedAt, isSuperseded: hit.supersededBy !== null,
+          },
         };
       }
+      const change = await repo.findChangeOrderByPdfHash(sha256);
+      if (!change) return { sha256, matches: false };
       return {
-        sha256, matches: true as const,
-        document: { kind: hit.signedPdfSha256 === sha256 ? "signed" : "sent", revision: hit.revision, status: hit.status, sentAt: hit.sentAt, decidedAt: hit.decidedAt },
+        sha256, matches: true,
+        document: {
+          kind: "change-order", companyName: change.companyName ?? "", revision: change.revision, changeOrderNumber: change.number,
+          status: change.status, sentAt: change.sentAt, signedAt: change.status === "signed" && change.decidedAt ? change.decidedAt.toISOString() : null, decidedAt: change.decidedAt, isSuperseded: false,
+        },
       };
     },
 
