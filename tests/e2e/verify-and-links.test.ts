@@ -1,0 +1,142 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import AxeBuilder from "@axe-core/playwright";
+import { mkdirSync } from "node:fs";
+import path from "node:path";
+import type { APIRequestContext, Browser, Page } from "playwright-core";
+import { ESIGN_CONSENT_VERSION } from "../../shared/proposals/disclosures.ts";
+import { BASE_URL, launchBrowser, newPage, signInAs, SHOTS_DIR } from "../setup/browser.ts";
+
+/**
+ * Issue 14, items 5 and 6 in the browser: the public document check a homeowner can use (choose or
+ * drop a PDF, read the answer), and the homeowner's view of a link the company revoked or replaced.
+ * At 390 and 1280 px, by keyboard, with axe.
+ */
+let browser: Browser;
+let close: () => Promise<void>;
+const OWNER = "owner@tallgrass.example";
+const PHONE = { width: 390, height: 844 };
+const DESK = { width: 1280, height: 900 };
+const shot = (page: Page, name: string) => page.screenshot({ path: path.join(SHOTS_DIR, `${name}.png`), fullPage: true });
+
+async function api<T>(request: APIRequestContext, method: "get" | "post" | "put", url: string, data?: unknown): Promise<T> {
+  const res = await request[method](url, { headers: { origin: BASE_URL }, ...(data === undefined ? {} : { data }) });
+  if (!res.ok()) throw new Error(`${method} ${url}: ${res.status()} ${await res.text()}`);
+  return (await res.json()) as T;
+}
+async function waitFor<T>(what: string, read: () => Promise<T>, isDone: (v: T) => boolean, timeoutMs = 90_000): Promise<T> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const value = await read();
+    if (isDone(value)) return value;
+    if (Date.now() > deadline) throw new Error(`${what} did not happen in time`);
+    await new Promise((r) => setTimeout(r, 500));
+  }
+}
+
+/** Its own customer, attic, option and sent proposal, so other files' rows are untouched. */
+async function sentProposal(request: APIRequestContext, name: string) {
+  const stamp = `${Date.now()}-${Math.round(Math.random() * 1e6)}`;
+  const customer = await api<{ customer: { id: string } }>(request, "post", "/api/customers", { name, email: `verify-${stamp}@homeowner.example` });
+  const project = await api<{ project: { id: string } }>(request, "post", "/api/projects", { customerId: customer.customer.id, title: `${name} attic ${stamp}`, siteAddress: "14 Sorrel Court, Marrow Creek", climateZone: 5 });
+  const space = await api<{ space: { id: string } }>(request, "post", `/api/projects/${project.project.id}/spaces`, {
+    name: "Main attic", roof: { form: "gable", pitchIn12: 6, ridgeLengthFt: 40, eaveLengthFt: 80 }, sections: [{ kind: "rect", lengthFt: 40, widthFt: 28 }],
+    vents: [{ id: "soffit-1", kind: "soffit-individual", location: "lower", quantity: 10, nfaSqInPerUnit: 50 }], site: {}, notes: null,
+  });
+  const catalog = await api<{ items: { id: string; kind: string; soldInLengthFt: number | null }[] }>(request, "get", "/api/catalog");
+  const ridge = catalog.items.find((i) => i.kind === "ridge" && i.soldInLengthFt)!;
+  const option = await api<{ option: { id: string } }>(request, "post", `/api/projects/${project.project.id}/options`, {
+    name: "Ridge vent run", spaces: [{ spaceId: space.space.id, ventActions: {}, added: [{ id: "a1", catalogItemId: ridge.id, quantity: 36 }] }],
+  });
+  const proposal = await api<{ proposal: { id: string } }>(request, "post", `/api/projects/${project.project.id}/proposals`, { optionIds: [option.option.id] });
+  await api(request, "put", "/api/auth/me/signature", { typed: "Marit Okonjo" });
+  const sent = await api<{ link: string }>(request, "post", `/api/proposals/${proposal.proposal.id}/send`);
+  return { token: sent.link.split("/p/")[1]!, proposalId: proposal.proposal.id, optionId: option.option.id };
+}
+
+async function seriousViolations(page: Page): Promise<string[]> {
+  const results = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "best-practice"]).analyze();
+  expect(results.passes.length).toBeGreaterThan(10);
+  return results.violations
+    .filter((v) => v.impact === "serious" || v.impact === "critical")
+    .flatMap((v) => v.nodes.map((n) => `${v.id}: ${n.target.join(" ")}`));
+}
+async function noHorizontalScroll(page: Page, widthPx: number) {
+  const widest = await page.evaluate(() => Math.max(...[...document.querySelectorAll("body *")].map((el) => el.getBoundingClientRect().right)));
+  expect(widest).toBeLessThanOrEqual(widthPx);
+}
+
+let signedPdf: Buffer;
+let ownerRequest: APIRequestContext;
+let closeOwner: () => Promise<void>;
+
+beforeAll(async () => {
+  ({ browser, close } = await launchBrowser());
+  mkdirSync(SHOTS_DIR, { recursive: true });
+  const owner = await newPage(browser);
+  owner.page.setDefaultNavigationTimeout(60_000);
+  await signInAs(owner.page, OWNER);
+  await owner.page.waitForURL(/\/projects/);
+  ownerRequest = owner.context.request;
+  closeOwner = () => owner.context.close();
+  const p = await sentProposal(ownerRequest, "Ilse Varga");
+  await api(ownerRequest, "post", `/api/public/proposals/${p.token}/accept`, {
+    optionId: p.optionId, signerName: "Ilse Varga", signature: { typed: "Ilse Varga" }, consent: { esign: true, consentTextVersion: ESIGN_CONSENT_VERSION },
+  });
+  await waitFor("the signed PDF", () => api<{ proposal: { signedRender: { status: string } } }>(ownerRequest, "get", `/api/proposals/${p.proposalId}`), (d) => d.proposal.signedRender.status === "ready");
+  const res = await ownerRequest.get(`/api/proposals/${p.proposalId}/pdf?kind=signed`);
+  expect(res.status()).toBe(200);
+  signedPdf = Buffer.from(await res.body());
+}, 180_000);
+afterAll(async () => {
+  await closeOwner?.();
+  await close?.();
+});
+
+describe("the public document check", () => {
+  for (const size of [PHONE, DESK]) {
+    it(`when a homeowner chooses their signed PDF by keyboard at ${size.width} px, then the page says it is the signed original; a changed copy says no match`, async () => {
+      const { context, page } = await newPage(browser, size);
+      const errors: string[] = [];
+      page.on("pageerror", (e) => errors.push(e.message));
+      try {
+        await page.goto("/verify");
+        await page.getByRole("heading", { name: "Is this the document that was signed?" }).waitFor();
+        expect(await seriousViolations(page)).toEqual([]);
+
+        // Keyboard only: Tab reaches the button, Enter opens the file chooser.
+        await page.keyboard.press("Tab");
+        const choose = page.getByRole("button", { name: "Choose the PDF" });
+        await expect.poll(() => choose.evaluate((el) => el === document.activeElement)).toBe(true);
+        const box = await choose.boundingBox();
+        expect(box!.height).toBeGreaterThanOrEqual(44);
+        const [chooser] = await Promise.all([page.waitForEvent("filechooser"), page.keyboard.press("Enter")]);
+        await chooser.setFiles({ name: "signed-proposal-rev-1.pdf", mimeType: "application/pdf", buffer: signedPdf });
+        const result = page.locator("[data-verify-result]");
+        await expect.poll(() => result.getAttribute("data-verify-result"), { timeout: 20_000 }).toBe("match");
+        const text = await result.innerText();
+        expect(text).toContain("This is the signed original");
+        expect(text).toMatch(/Proposal revision 1 from Tallgrass Exteriors, sent /);
+        expect(text).toMatch(/It was signed on /);
+        // The answer takes the focus, so a screen reader reads it next.
+        expect(await result.evaluate((el) => el === document.activeElement)).toBe(true);
+        await noHorizontalScroll(page, size.width);
+        expect(await seriousViolations(page)).toEqual([]);
+        await shot(page, `verify-signed-${size.width}`);
+
+        const changed = Buffer.from(signedPdf);
+        const middle = changed.length >> 1;
+        changed[middle] = changed[middle]! ^ 0x01;
+        await page.locator("input[type=file]").setInputFiles({ name: "edited.pdf", mimeType: "application/pdf", buffer: changed });
+        await expect.poll(() => result.getAttribute("data-verify-result"), { timeout: 20_000 }).toBe("no-match");
+        const noMatch = await result.innerText();
+        expect(noMatch).toContain("No match: this file is not a document on record");
+        expect(noMatch).not.toMatch(/Tallgrass|revision \d/);
+        expect(await seriousViolations(page)).toEqual([]);
+        await shot(page, `verify-no-match-${size.width}`);
+        expect(errors).toEqual([]);
+      } finally {
+        await context.close();
+      }
+    }, 120_000);
+  }
+});
