@@ -25,7 +25,8 @@ const RENDER_RETRIES = 3;
 
 interface RenderJob { companyId: string; proposalId: string; snapshotSha256: string }
 interface SignedJob { companyId: string; proposalId: string }
-interface ReminderJob { companyId: string; proposalId: string; to: string; link: string }
+/** `tokenId`: the link the reminder carries; a job queued before it was recorded has none. */
+interface ReminderJob { companyId: string; proposalId: string; to: string; link: string; tokenId?: string }
 interface MailJob { dedupeKey: string }
 
 export const pdfKey = (companyId: string, sha256: string) => `proposals/${companyId}/${sha256}.pdf`;
@@ -213,6 +214,8 @@ export function createProposalJobs(deps: {
     const tenant = { companyId: data.companyId };
     const [row, company] = await Promise.all([repo.find(tenant, data.proposalId), repo.company(tenant)]);
     if (!row || !company) return;
+    // The link was replaced since the reminder was queued: never mail a link that no longer works.
+    if (data.tokenId && data.tokenId !== row.tokenId) return;
     const decision = reminderDecision(row, deps.now(), (company.settings as CompanySettings).reminderDays ?? null);
     if (!decision.shouldSend) return;
     const sent = await deliverOnce(tenant, row.id, `reminder:${row.id}`, "reminder", {
@@ -300,9 +303,9 @@ export function createProposalJobs(deps: {
     runReminder,
     enqueueRender,
     enqueueSignedRender,
-    async scheduleReminder(tenant: Tenant, proposalId: string, to: string, link: string, afterDays: number) {
+    async scheduleReminder(tenant: Tenant, proposalId: string, to: string, link: string, afterDays: number, tokenId: string) {
       await ready;
-      await boss.send(PROPOSAL_QUEUES.reminder, { companyId: tenant.companyId, proposalId, to, link } satisfies ReminderJob, { startAfter: Math.round(afterDays * 86_400), retryLimit: 3, singletonKey: `reminder:${proposalId}` });
+      await boss.send(PROPOSAL_QUEUES.reminder, { companyId: tenant.companyId, proposalId, to, link, tokenId } satisfies ReminderJob, { startAfter: Math.round(afterDays * 86_400), retryLimit: 3, singletonKey: `reminder:${proposalId}` });
     },
   };
 }
