@@ -140,3 +140,75 @@ describe("the public document check", () => {
     }, 120_000);
   }
 });
+
+describe("the homeowner on a revoked or replaced link", () => {
+  it("when sales revokes the link on the proposal page, then the homeowner's old link explains it plainly with nothing of the proposal; a new link works and the old one still says withdrawn", async () => {
+    const p = await sentProposal(ownerRequest, "Tobias Wren");
+    const sales = await newPage(browser, PHONE);
+    sales.page.setDefaultNavigationTimeout(60_000);
+    const errors: string[] = [];
+    sales.page.on("pageerror", (e) => errors.push(e.message));
+    try {
+      // Before: the homeowner's link opens the proposal.
+      const before = await newPage(browser, PHONE);
+      await before.page.goto(`/p/${p.token}`);
+      await before.page.getByRole("heading", { name: /Hello Tobias/ }).waitFor();
+      await before.context.close();
+
+      await signInAs(sales.page, "sales@tallgrass.example");
+      await sales.page.waitForURL(/\/projects/);
+      const detail = await api<{ proposal: { projectId: string } }>(ownerRequest, "get", `/api/proposals/${p.proposalId}`);
+      await sales.page.goto(`/projects/${detail.proposal.projectId}/proposals/${p.proposalId}`);
+      await sales.page.getByRole("button", { name: "Revoke the link" }).click();
+      await sales.page.getByRole("dialog").getByRole("button", { name: "Revoke the link" }).click();
+      await sales.page.getByText(/Link revoked .*withdrew it/).waitFor();
+      await shot(sales.page, "link-revoked-staff-390");
+
+      for (const size of [PHONE, DESK]) {
+        const home = await newPage(browser, size);
+        home.page.on("pageerror", (e) => errors.push(e.message));
+        await home.page.goto(`/p/${p.token}`);
+        await home.page.getByRole("heading", { name: "This link was withdrawn" }).waitFor();
+        const text = await home.page.locator("body").innerText();
+        expect(text).toMatch(/Anything you already signed stays as it was/);
+        // Nothing of the proposal: no name, address, price or company.
+        expect(text).not.toMatch(/Tobias|Sorrel Court|Ridge vent run|\$\d|Tallgrass/);
+        expect(await seriousViolations(home.page)).toEqual([]);
+        await noHorizontalScroll(home.page, size.width);
+        await shot(home.page, `link-revoked-homeowner-${size.width}`);
+        await home.context.close();
+      }
+
+      // Sales sends a new link from the same panel; it is shown once and opens the proposal.
+      await sales.page.getByRole("button", { name: "Send a new link" }).click();
+      await sales.page.getByRole("dialog").getByRole("button", { name: "Send the new link" }).click();
+      const fresh = await sales.page.locator("[data-proposal-link]").inputValue();
+      expect(fresh).toMatch(/\/p\/[A-Za-z0-9_-]{40,}$/);
+      await shot(sales.page, "link-reissued-staff-390");
+      const home = await newPage(browser, PHONE);
+      await home.page.goto(new URL(fresh).pathname);
+      await home.page.getByRole("heading", { name: /Hello Tobias/ }).waitFor();
+      await home.page.goto(`/p/${p.token}`);
+      await home.page.getByRole("heading", { name: "This link was withdrawn" }).waitFor();
+      await home.context.close();
+      expect(errors).toEqual([]);
+    } finally {
+      await sales.context.close();
+    }
+  }, 180_000);
+
+  it("when a link was replaced by a new one, then the old link says so", async () => {
+    const p = await sentProposal(ownerRequest, "Alma Reyes");
+    await api(ownerRequest, "post", `/api/proposals/${p.proposalId}/reissue-link`, {});
+    const { context, page } = await newPage(browser, PHONE);
+    try {
+      await page.goto(`/p/${p.token}`);
+      await page.getByRole("heading", { name: "This link was replaced by a new one" }).waitFor();
+      expect(await page.locator("body").innerText()).toMatch(/newest e-mail/);
+      expect(await seriousViolations(page)).toEqual([]);
+      await shot(page, "link-replaced-homeowner-390");
+    } finally {
+      await context.close();
+    }
+  });
+});
