@@ -125,7 +125,8 @@ describe("revoke and issue a new link", () => {
   it("when sales issues a new link, then the old one says it was replaced, the new one works and is mailed, and the event is logged", async () => {
     const p = await sentProposal();
     const before = (await detailOf(p.proposalId)).proposal.link.tokenId;
-    const res = await send(team.asSales, "post", `/api/proposals/${p.proposalId}/reissue-link`);
+    // A forged host must not reach the mailed link (it is built from APP_ORIGIN only).
+    const res = await send(team.asSales, "post", `/api/proposals/${p.proposalId}/reissue-link`).set("host", "attacker.example").set("x-forwarded-host", "attacker.example");
     expect(res.status, JSON.stringify(res.body)).toBe(200);
     const link = res.body.link as string;
     expect(link).toMatch(new RegExp(`^${ORIGIN}/p/[A-Za-z0-9_-]{40,}$`));
@@ -137,6 +138,7 @@ describe("revoke and issue a new link", () => {
     const mails = await waitForMails(p.homeownerEmail, 2);
     expect(mails[1]!.text).toContain(link);
     expect(mails[1]!.text).not.toContain(p.token);
+    expect(mails[1]!.text).not.toContain("attacker.example");
     const reissued = (await eventsOf(p.proposalId)).find((e) => e.event === "link-reissued")!;
     expect(reissued).toMatchObject({ userId: team.sales.id, tokenId: res.body.proposal.link.tokenId, detail: { previousTokenId: before, to: p.homeownerEmail } });
     expect(res.body.proposal.link).toMatchObject({ isActive: true, revokedAt: null });

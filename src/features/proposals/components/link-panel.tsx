@@ -58,7 +58,7 @@ export function LinkPanel({ proposal, justSentLink, canSend, customerEmail }: { 
       {shownLink ? (
         <>
           <Alert severity="ok" title={newLink ? "New link sent" : "Sent"}>
-            {newLink ? "The old link stopped working and now says it was replaced. " : ""}
+            {newLink ? "The old link no longer opens the proposal. " : ""}
             The e-mail with the link is on its way. Copy the link now if you want to send it another way: for safety it is not stored and can't be shown again.
           </Alert>
           <TextField label="Homeowner's link" value={shownLink} readOnly onFocus={(e) => e.target.select()} data-proposal-link />
