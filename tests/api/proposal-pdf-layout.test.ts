@@ -100,11 +100,14 @@ function sharedByOptions(snapshot: ProposalSnapshot): string[] {
 function repeatedParagraphs(file: string, snapshot: ProposalSnapshot): string[] {
   const text = execFileSync("pdftotext", [file, "-"]).toString();
   const headings = new Set(snapshot.options.map((o, i) => `Option ${i + 1}: ${o.name}`));
+  const footerStart = `${snapshot.company.name} · Proposal ${snapshot.proposalId.slice(0, 8)} rev. ${snapshot.revision}`;
   const shared = sharedByOptions(snapshot);
   const seen = new Map<string, number>();
   for (const block of text.split(/\n\s*\n/)) {
     const paragraph = norm(block);
-    if (paragraph.length < 70 || /Page \d+ of \d+/.test(paragraph) || headings.has(paragraph) || shared.some((t) => t.includes(paragraph))) continue;
+    // The running footer (company, proposal and where to check a copy, then the page number) is on every page by design.
+    const isFooter = /Page \d+ of \d+/.test(paragraph) || paragraph.startsWith(footerStart);
+    if (paragraph.length < 70 || isFooter || headings.has(paragraph) || shared.some((t) => t.includes(paragraph))) continue;
     seen.set(paragraph, (seen.get(paragraph) ?? 0) + 1);
   }
   return [...seen].filter(([, n]) => n > 1).map(([paragraph, n]) => `${n}× ${paragraph}`);
