@@ -94,7 +94,7 @@ afterAll(async () => {
 
 describe("the public document check", () => {
   for (const size of [PHONE, DESK]) {
-    it(`when a homeowner chooses their signed PDF by keyboard at ${size.width} px, then the page says it is the signed original; a changed copy says no match`, async () => {
+    it(`when a homeowner chooses their signed PDF by keyboard at ${size.width} px, then the page says it is the signed original; a changed copy says no match; a dropped file is checked the same way`, async () => {
       const { context, page } = await newPage(browser, size);
       const errors: string[] = [];
       page.on("pageerror", (e) => errors.push(e.message));
@@ -103,13 +103,16 @@ describe("the public document check", () => {
         await page.getByRole("heading", { name: "Is this the document that was signed?" }).waitFor();
         expect(await seriousViolations(page)).toEqual([]);
 
-        // Keyboard only: Tab reaches the button, Enter opens the file chooser.
+        // Keyboard only: Tab reaches the button, Enter opens the file chooser. Listening starts well
+        // before the key press: Playwright turns on its file-chooser interception asynchronously.
+        const chooserOpened = page.waitForEvent("filechooser", { timeout: 30_000 });
         await page.keyboard.press("Tab");
         const choose = page.getByRole("button", { name: "Choose the PDF" });
         await expect.poll(() => choose.evaluate((el) => el === document.activeElement)).toBe(true);
         const box = await choose.boundingBox();
         expect(box!.height).toBeGreaterThanOrEqual(44);
-        const [chooser] = await Promise.all([page.waitForEvent("filechooser"), page.keyboard.press("Enter")]);
+        await page.keyboard.press("Enter");
+        const chooser = await chooserOpened;
         await chooser.setFiles({ name: "signed-proposal-rev-1.pdf", mimeType: "application/pdf", buffer: signedPdf });
         const result = page.locator("[data-verify-result]");
         await expect.poll(() => result.getAttribute("data-verify-result"), { timeout: 20_000 }).toBe("match");
@@ -133,6 +136,17 @@ describe("the public document check", () => {
         expect(noMatch).not.toMatch(/Tallgrass|revision \d/);
         expect(await seriousViolations(page)).toEqual([]);
         await shot(page, `verify-no-match-${size.width}`);
+
+        // Dropped on the page instead of chosen: the same check.
+        await page.locator("[data-drop-zone]").evaluate((zone, base64) => {
+          const bytes = Uint8Array.from(atob(base64), (c) => c.charCodeAt(0));
+          const transfer = new DataTransfer();
+          transfer.items.add(new File([bytes], "dropped.pdf", { type: "application/pdf" }));
+          zone.dispatchEvent(new DragEvent("dragover", { dataTransfer: transfer, bubbles: true, cancelable: true }));
+          zone.dispatchEvent(new DragEvent("drop", { dataTransfer: transfer, bubbles: true, cancelable: true }));
+        }, signedPdf.toString("base64"));
+        await expect.poll(() => result.getAttribute("data-verify-result"), { timeout: 20_000 }).toBe("match");
+        expect(await page.getByText("File: dropped.pdf").count()).toBe(1);
         expect(errors).toEqual([]);
       } finally {
         await context.close();
