@@ -23,7 +23,9 @@ const CONTENT_WIDTH_PT = 512;
 const s = StyleSheet.create({
   page: { paddingTop: 48, paddingBottom: 56, paddingHorizontal: 50, fontFamily: PLEX_FAMILIES as unknown as string, fontSize: 10, color: INK },
   body: { lineHeight: "14pt" },
-  footer: { position: "absolute", bottom: 24, left: 50, right: 50, flexDirection: "row", justifyContent: "space-between", fontSize: 8, color: MUTED, borderTopWidth: 0.5, borderTopColor: RULE, paddingTop: 6 },
+  footer: { position: "absolute", bottom: 24, left: 50, right: 50, flexDirection: "row", justifyContent: "space-between", gap: 12, fontSize: 8, color: MUTED, borderTopWidth: 0.5, borderTopColor: RULE, paddingTop: 6 },
+  // Wraps to a second line with a long origin; the page's bottom padding leaves room for two.
+  footerLeft: { flex: 1, lineHeight: "11pt" },
   coverBand: { flexDirection: "row", justifyContent: "space-between", alignItems: "flex-start", borderBottomWidth: 2, borderBottomColor: ACCENT, paddingBottom: 14, marginBottom: 18 },
   company: { fontSize: 18, fontWeight: 700, color: ACCENT, lineHeight: "23pt", marginBottom: 2 },
   small: { fontSize: 8.5, color: MUTED, lineHeight: "12pt" },
@@ -338,11 +340,12 @@ export interface SignedPart {
 }
 
 /** The whole proposal; with `signed`, the homeowner's signature and a signing certificate page. */
-export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed }: {
+export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed, verifyUrl }: {
   snapshot: ProposalSnapshot;
   logoDataUrl: string | null;
   photoDataUrls: Record<string, string>;
   signed?: SignedPart;
+  verifyUrl: string;
 }) {
   const c = snapshot.company;
   const footerLeft = `${c.name} · Proposal ${snapshot.proposalId.slice(0, 8)} rev. ${snapshot.revision}`;
@@ -356,7 +359,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
     <Document title={`Proposal for ${snapshot.customer.name}`} author={c.name} subject="Attic ventilation proposal" creator="Eavesight" producer="Eavesight">
       <Page size="LETTER" style={s.page}>
         <View style={s.footer} fixed>
-          <Text style={s.body}>{footerLeft}</Text>
+          <Text style={s.footerLeft}>{footerLeft} · check a copy at {verifyUrl}</Text>
           <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
         </View>
 
@@ -502,7 +505,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
       {signed ? (
         <Page size="LETTER" style={s.page}>
           <View style={s.footer} fixed>
-            <Text style={s.body}>{footerLeft} · signing certificate</Text>
+            <Text style={s.footerLeft}>{footerLeft} · signing certificate · check a copy at {verifyUrl}</Text>
             <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
           </View>
           <Text style={s.title}>Signing certificate</Text>
@@ -529,7 +532,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
               <Text style={s.cell}>{e.at}{e.ip ? ` · ${e.ip}` : ""}</Text>
             </View>
           ))}
-          <Text style={[s.small, { marginTop: 10 }]}>The fingerprint of this signed PDF is recorded when it is made; verify a copy at the verification page of {c.name}'s proposal service.</Text>
+          <Text style={[s.para, { marginTop: 10 }]}>Check a copy of this signed PDF at {verifyUrl}: choose the file there and the page says whether it is this signed original, unchanged. The fingerprint of this PDF is recorded when it is made.</Text>
         </Page>
       ) : null}
     </Document>
