@@ -140,6 +140,7 @@ export const routes: RouteObject[] = [
       { path: paths.publicProposal.path, errorElement: <RootErrorPage />, lazy: () => import("./routes/public-proposal") },
       { path: paths.publicChangeOrder.path, errorElement: <RootErrorPage />, lazy: () => import("./routes/public-change-order") },
       { path: paths.publicCompletion.path, errorElement: <RootErrorPage />, lazy: () => import("./routes/public-completion") },
+      { path: paths.publicVerify.path, errorElement: <RootErrorPage />, lazy: () => import("./routes/public-verify") },
       {
         element: <AuthLayout />,
         errorElement: <RootErrorPage />,

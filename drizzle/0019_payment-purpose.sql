@@ -1,2 +1,0 @@
-ALTER TABLE "payments" ADD COLUMN "purpose" text DEFAULT 'deposit' NOT NULL;--> statement-breakpoint
-ALTER TABLE "payments" ADD CONSTRAINT "payments_purpose_check" CHECK ("payments"."purpose" in ('deposit', 'balance'));
