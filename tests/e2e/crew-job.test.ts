@@ -138,6 +138,13 @@ describe("the crew's day, end to end", () => {
     await cp.getByText("Completed", { exact: true }).waitFor();
     await shot(cp, "crew-job-completed-390");
 
+    // The office sees it done, with prices (sales may see them), at desk width.
+    await sales.page.goto("/jobs");
+    await sales.page.getByRole("link", { name: new RegExp(`${work.title}.*Done`) }).click();
+    await sales.page.getByText("Completed", { exact: true }).waitFor();
+    await sales.page.getByText("Balance due").waitFor();
+    await shot(sales.page, "crew-job-office-1280");
+
     // The crew has no project pages.
     await cp.goto("/projects");
     await cp.getByRole("heading", { name: "Not part of your role" }).waitFor();
