@@ -22,6 +22,11 @@ export function createAuthRepository(db: Database) {
       const [row] = await db.update(users).set({ ...patch, updatedAt: new Date() }).where(eq(users.id, id)).returning();
       return row ?? null;
     },
+    /** The units a company works in (its profile's setting), for people who join it. */
+    async companyUnitSystem(companyId: string): Promise<"imperial" | "metric"> {
+      const [row] = await db.select({ settings: companies.settings }).from(companies).where(eq(companies.id, companyId)).limit(1);
+      return (row?.settings as { unitSystem?: unknown } | undefined)?.unitSystem === "metric" ? "metric" : "imperial";
+    },
     async insertUser(row: typeof users.$inferInsert) {
       const [created] = await db.insert(users).values(row).returning();
       return created!;

@@ -197,6 +197,8 @@ export function createAuthService(deps: AuthDeps) {
         name: input.name,
         role: invite.role,
         passwordHash: await hashPassword(input.password),
+        // A newcomer starts in the units the company works in; each person can change their own.
+        unitSystem: await deps.repo.companyUnitSystem(invite.companyId),
       });
       await deps.audit({ event: "invite-accepted", userId: user.id, companyId: user.companyId, subjectEmail: user.email }, meta);
       const session = await createSession(user.id);

@@ -20,6 +20,11 @@ export function projectsRouter(service: ProjectsService) {
       },
     },
     {
+      // What a new project starts with when the form leaves them out: the form shows them.
+      method: "get", path: "/company/project-defaults", access: "projects:read",
+      handler: async (req, res) => { res.json({ defaults: await service.projectDefaults(actorOf(req)) }); },
+    },
+    {
       method: "get", path: "/projects/:id", access: "projects:read", idParams: ["id"],
       handler: async (req, res) => { res.json(await service.detail(actorOf(req), projectId(req))); },
     },

@@ -52,6 +52,8 @@ export function createProjectsService(deps: { repo: ProjectsRepository; audit: A
       return project;
     },
 
+    projectDefaults: (actor: Actor) => repo.projectDefaults(actor),
+
     async detail(actor: Actor, id: string) {
       const row = await repo.detail(actor, id);
       if (!row) throw notFound("That project");

@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions } from "@tanstack/react-query";
 import { findCustomers, getCustomer } from "./find-customers";
 import { getEstimators } from "./get-estimators";
+import { getProjectDefaults } from "./get-project-defaults";
 import { getProjects } from "./get-projects";
 import type { ProjectListParams } from "./types";
 
@@ -12,6 +13,7 @@ export const projectKeys = {
   customerSearches: () => [...projectKeys.all, "customer-search"] as const,
   customerSearch: (q: string) => [...projectKeys.customerSearches(), q] as const,
   customer: (id: string) => [...projectKeys.all, "customer", id] as const,
+  defaults: () => ["company", "project-defaults"] as const,
 };
 
 export const projectQueries = {
@@ -32,4 +34,7 @@ export const projectQueries = {
     }),
   customer: (id: string) =>
     queryOptions({ queryKey: projectKeys.customer(id), queryFn: ({ signal }) => getCustomer(id, signal) }),
+  /** The company's defaults for a new project (climate zone, code basis). */
+  defaults: () =>
+    queryOptions({ queryKey: projectKeys.defaults(), queryFn: ({ signal }) => getProjectDefaults(signal), staleTime: 5 * 60_000 }),
 };

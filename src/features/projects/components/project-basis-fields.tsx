@@ -24,12 +24,12 @@ export interface ProjectBasisFieldsProps {
   onChange: (patch: Partial<ProjectBasisValue>) => void;
   disabled?: boolean;
   errors?: Partial<Record<keyof ProjectBasisValue, string>>;
-  /** Offer "Company default" as the code basis (when starting a project). */
-  allowCompanyDefault?: boolean;
+  /** Offer the company's default as the code basis (when starting a project), with these words. */
+  companyDefaultLabel?: string;
 }
 
 /** What the code check depends on: climate zone and moisture regime, code text, vapor retarder, roof colour. */
-export function ProjectBasisFields({ value, onChange, disabled, errors = {}, allowCompanyDefault }: ProjectBasisFieldsProps) {
+export function ProjectBasisFields({ value, onChange, disabled, errors = {}, companyDefaultLabel }: ProjectBasisFieldsProps) {
   const regimes = moistureOptions(value.climateZone);
   return (
     <div className="grid gap-4 sm:grid-cols-2">
@@ -59,7 +59,7 @@ export function ProjectBasisFields({ value, onChange, disabled, errors = {}, all
         label="Code basis"
         hint="The code text enforced locally."
         options={CODE_BASIS_OPTIONS}
-        placeholder={allowCompanyDefault ? "Company default" : undefined}
+        placeholder={companyDefaultLabel}
         value={value.codeBasis}
         disabled={disabled}
         error={errors.codeBasis}

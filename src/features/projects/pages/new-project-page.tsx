@@ -1,7 +1,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Link, useNavigate } from "react-router";
-import { CustomerInputSchema, ProjectInputSchema } from "@shared/schemas/projects";
+import { CODE_BASIS_LABELS, CustomerInputSchema, ProjectInputSchema } from "@shared/schemas/projects";
 import { Alert } from "@/components/ui/alert";
 import { Button, buttonStyles } from "@/components/ui/button";
 import { Card, CardBody, CardDescription, CardFooter, CardHeader, CardTitle } from "@/components/ui/card";
@@ -17,6 +17,7 @@ import { useCreateProject } from "../api/create-project";
 import { projectQueries } from "../api/queries";
 import { CustomerPicker, type CustomerChoice, type NewCustomerDraft } from "../components/customer-picker";
 import { ProjectBasisFields, type ProjectBasisValue } from "../components/project-basis-fields";
+import { fitMoistureRegime } from "../lib/project-options";
 
 export interface NewProjectPageProps {
   /** Start with this customer chosen (from the customers list). */
@@ -38,13 +39,17 @@ export function NewProjectPage({ initialCustomerId, currentUser }: NewProjectPag
   const [title, setTitle] = useState("");
   const [siteAddress, setSiteAddress] = useState("");
   const [estimatorId, setEstimatorId] = useState<string>(currentUser.role === "estimator" ? currentUser.id : "");
-  const [basis, setBasis] = useState<ProjectBasisValue>({
-    climateZone: 4,
-    moistureRegime: "A",
+  const defaults = useQuery(projectQueries.defaults());
+  // The climate zone starts at the company's default until the estimator picks one.
+  const [basisEdits, setBasis] = useState<ProjectBasisValue | null>(null);
+  const defaultZone = defaults.data?.climateZone ?? 4;
+  const basis: ProjectBasisValue = basisEdits ?? {
+    climateZone: defaultZone,
+    moistureRegime: fitMoistureRegime(defaultZone, "A"),
     codeBasis: "",
     ceilingVaporRetarder: "none",
     roofColor: "medium",
-  });
+  };
   const [errors, setErrors] = useState<FieldErrors>({});
   const [formError, setFormError] = useState<string | null>(null);
   const addCustomer = useAddCustomer();
@@ -173,9 +178,9 @@ export function NewProjectPage({ initialCustomerId, currentUser }: NewProjectPag
           <CardBody>
             <ProjectBasisFields
               value={basis}
-              onChange={(patch) => setBasis((b) => ({ ...b, ...patch }))}
+              onChange={(patch) => setBasis({ ...basis, ...patch })}
               errors={errors}
-              allowCompanyDefault
+              companyDefaultLabel={defaults.data ? `Company default (${CODE_BASIS_LABELS[defaults.data.codeBasis]})` : "Company default"}
             />
           </CardBody>
           <CardFooter>
