@@ -31,7 +31,7 @@ beforeAll(async () => {
   const [company] = await orm.insert(companies).values({ name: "Restart Roofing", slug: `restart-${randomUUID()}` }).returning();
   await orm.insert(users).values({ id: randomUUID(), companyId: company!.id, email: "owner@restart.example", name: "Restart Owner", role: "owner", passwordHash: await hashPassword(PASSWORD) });
   await sql.end();
-  server = await startServerProcess({ DATABASE_URL: db.databaseUrl, STORAGE_DIR: storageDir });
+  server = await startServerProcess({ DATABASE_URL: db.databaseUrl, STORAGE_DIR: storageDir, LOG_LEVEL: process.env.EAVESIGHT_STRESS_LOG_LEVEL ?? "fatal" });
 });
 afterAll(async () => {
   await server?.stop("SIGKILL");
@@ -103,7 +103,9 @@ describe("PostgreSQL restarted while requests flow", () => {
     const byStatus = new Map<number, number>();
     for (const o of outcomes) byStatus.set(o.status, (byStatus.get(o.status) ?? 0) + 1);
     const errors = [...new Set(outcomes.flatMap((o) => (o.error ? [o.error] : [])))];
-    const summary = `${JSON.stringify(Object.fromEntries(byStatus))} ${errors.join("; ")}`;
+    // A dropped request says when it ran, measured from the stop and the start of the database.
+    const dropped = outcomes.filter((o) => o.status === -1).map((o) => `${o.name}: sent ${o.startedAt - downAt} ms after the stop, dropped ${o.at - upAt} ms from the start`);
+    const summary = `${JSON.stringify(Object.fromEntries(byStatus))} ${errors.join("; ")} ${dropped.join("; ")}`;
     // Only success or "briefly unavailable": no 500, no dropped connection, no other error.
     expect([...byStatus.keys()].filter((s) => s !== 200 && s !== 201 && s !== 503), summary).toEqual([]);
     expect(outcomes.filter((o) => o.at < downAt && o.status === 201).length, summary).toBeGreaterThan(0);
