@@ -2,6 +2,7 @@ import { data, redirect, type LoaderFunctionArgs } from "react-router";
 import { paths, safeNextPath } from "@/config/paths";
 import { authQueries } from "@/features/auth/api/queries";
 import { canAccess, type Area } from "@/lib/authorization";
+import { ensureDeviceCopy } from "@/lib/field/device-copy";
 import { queryClient } from "@/lib/query-client";
 import type { Session } from "@/lib/session";
 
@@ -10,8 +11,17 @@ function currentPath(request: Request): string {
   return `${url.pathname}${url.search}`;
 }
 
+/**
+ * The session, from memory or the device copy when there is one (so the app opens with no signal;
+ * it is checked again with the server in the background), else from the server.
+ */
+export async function currentSession(): Promise<Session | null> {
+  await ensureDeviceCopy(queryClient);
+  return queryClient.ensureQueryData({ ...authQueries.me(), revalidateIfStale: true });
+}
+
 async function sessionOrRedirect(request: Request): Promise<Session> {
-  const session = await queryClient.ensureQueryData(authQueries.me());
+  const session = await currentSession();
   if (!session) throw redirect(paths.auth.signIn.getHref(currentPath(request)));
   return session;
 }
@@ -37,7 +47,7 @@ export function requireArea(area: Area) {
 export async function redirectIfSignedIn({ request }: LoaderFunctionArgs) {
   let session: Session | null = null;
   try {
-    session = await queryClient.ensureQueryData(authQueries.me());
+    session = await currentSession();
   } catch {
     // Server unreachable: still show the form; signing in will report the problem.
   }

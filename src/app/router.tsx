@@ -1,7 +1,9 @@
+import { onlineManager } from "@tanstack/react-query";
 import { createBrowserRouter, redirect, type RouteObject } from "react-router";
 import { paths } from "@/config/paths";
 import { redirectIfSignedIn, requireArea, requireSession } from "./guards";
 import { surveyQueries } from "@/features/survey/api/queries";
+import { ensureDeviceCopy } from "@/lib/field/device-copy";
 import { queryClient } from "@/lib/query-client";
 import { AuthLayout } from "./layouts/auth-layout";
 import { FullPageLoading, RootLayout } from "./layouts/root-layout";
@@ -29,9 +31,13 @@ const appRoutes: RouteObject[] = [
     path: paths.app.project.path,
     // The project is asked for together with the page's code and the session, not after the code runs.
     loader: async (args) => {
-      const project = queryClient.prefetchQuery(surveyQueries.project(args.params.projectId ?? ""));
+      await ensureDeviceCopy(queryClient);
+      const options = surveyQueries.project(args.params.projectId ?? "");
+      const isOnDevice = queryClient.getQueryData(options.queryKey) !== undefined;
+      const project = queryClient.prefetchQuery(options);
       await requireArea("projects")(args);
-      await project;
+      // A copy on the device opens at once (refreshed behind it); offline without one, the page says so.
+      if (!isOnDevice && onlineManager.isOnline()) await project;
       return null;
     },
     lazy: () => import("./routes/projects-detail"),

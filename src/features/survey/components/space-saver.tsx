@@ -3,9 +3,9 @@ import { memo, useEffect, useMemo, useState } from "react";
 import type { SpaceRoof } from "@shared/schemas/survey";
 import type { UnitSystem } from "@shared/units/format";
 import type { Section, Vent } from "@shared/ventilation/index";
-import { surveyQueries } from "../api/queries";
+import { surveyKeys, surveyQueries } from "../api/queries";
 import { saveSpace } from "../api/save-space";
-import type { SpaceRecord } from "../api/types";
+import type { ProjectDetail, SpaceRecord } from "../api/types";
 import { useAutosave, type SaveState } from "@/lib/use-autosave";
 import { buildSpace, fingerprint, spaceFromServer, type Problem, type SpaceDraft } from "../lib/drafts";
 import { clearDraft, spaceDraftKey, writeDraft } from "../lib/local-drafts";
@@ -48,7 +48,13 @@ export const SpaceSaver = memo(function SpaceSaver({ projectId, draft, init, uni
     startInConflict: init.startInConflict,
     send: (survey, version) => saveSpace(projectId, draft.id, survey, version),
     versionOf: (space: SpaceRecord) => space.version,
-    onSaved: (space) => setLastSaved({ sections: space.sections, vents: space.vents, roof: space.roof }),
+    onSaved: (space) => {
+      setLastSaved({ sections: space.sections, vents: space.vents, roof: space.roof });
+      // The device copy then opens on what was saved, also after a reload with no signal.
+      queryClient.setQueryData<ProjectDetail>(surveyKeys.detail(projectId), (old) =>
+        old ? { ...old, spaces: old.spaces.some((s) => s.id === space.id) ? old.spaces.map((s) => (s.id === space.id ? space : s)) : [...old.spaces, space] } : old,
+      );
+    },
   });
   const { state, isDirty, saveNow, resolve, getVersion } = autosave;
 
