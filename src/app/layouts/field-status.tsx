@@ -60,7 +60,10 @@ export function FieldStatus() {
         </span>
       </button>
       {isOpen ? (
-        <div id={panelId} className="absolute right-0 z-30 mt-2 w-[min(22rem,calc(100vw-1.5rem))] rounded-lg border border-ink-200 bg-white p-4 text-ink-900 shadow-lg">
+        <div
+          id={panelId}
+          className="fixed inset-x-3 top-16 z-30 max-h-[calc(100dvh-9rem)] overflow-y-auto rounded-lg border border-ink-200 bg-white p-4 text-ink-900 shadow-lg md:absolute md:inset-x-auto md:top-auto md:right-0 md:mt-2 md:w-[22rem]"
+        >
           <p className="text-sm text-ink-800">
             {isOnline
               ? "Everything below is sent in the order it was made."

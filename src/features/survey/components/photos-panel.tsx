@@ -73,7 +73,10 @@ export function PhotosPanel({ projectId, spaceId, spaceName, photos, vents, find
         ventId: kind === "vent" ? id : undefined,
         findingCode: kind === "finding" ? id : undefined,
         caption: caption.trim() || undefined,
-        attachedTo: attachOptions.find((o) => o.value === attachTo)?.label ?? spaceName,
+        attachedTo:
+          kind === "vent" ? (vents.find((v) => v.value === id)?.label ?? "a vent")
+          : kind === "finding" ? (findings.find((f) => f.value === id)?.label ?? "a finding")
+          : `${spaceName} in general`,
       });
       toast.success(navigator.onLine ? "Photo added" : "Photo kept on this device", {
         description: navigator.onLine ? undefined : "It uploads when the signal returns.",
