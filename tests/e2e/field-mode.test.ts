@@ -180,3 +180,72 @@ function figures(a: {
     intakeSqIn: a.provided.intakeSqIn, exhaustSqIn: a.provided.exhaustSqIn, findings: a.findings.map((f) => f.code).sort(),
   };
 }
+
+describe("field mode: the same survey changed elsewhere meanwhile", () => {
+  it("when edits made offline meet a newer saved version, then each differing part is shown with both versions and the estimator's choice of each is what is saved", async () => {
+    const { context, page, errors } = await openPhone();
+    await signInAs(page, ESTIMATOR);
+    await page.waitForURL(/\/projects/);
+    const tag = Date.now().toString(36);
+    const projectId = await makeProject(page, `c${tag}`);
+    const created = await api<{ space: { id: string; version: number } }>(page, "POST", `/api/projects/${projectId}/spaces`, {
+      name: "Main attic",
+      sections: [{ id: "block", kind: "rect", lengthFt: 40, widthFt: 30 }],
+      vents: [
+        { id: "ridge", kind: "ridge", location: "upper", lengthFt: 36, nfaSqInPerFt: 18 },
+        { id: "soffit", kind: "soffit-individual", location: "lower", quantity: 10, nfaSqInPerUnit: 50 },
+      ],
+    });
+    expect(created.status).toBe(201);
+    await page.goto(`/projects/${projectId}`);
+    await page.getByRole("tab", { name: /Main attic/ }).waitFor();
+    await waitUntilKeptOnDevice(page, projectId);
+
+    // In the attic with no signal: the block is 44 ft, not 40.
+    await context.setOffline(true);
+    await page.getByLabel("Length (along the ridge)").fill(`44'`);
+    await page.locator("header").getByText("1 change waiting").waitFor();
+
+    // Meanwhile the office renames the space and counts 12 soffit vents.
+    const office = await newPage(browser);
+    await signInAs(office.page, "owner@tallgrass.example");
+    await office.page.waitForURL(/\/projects/);
+    const saved = await api<{ space: { version: number } }>(office.page, "PUT", `/api/projects/${projectId}/spaces/${created.body.space.id}`, {
+      name: "House attic", roof: { form: "gable", pitchIn12: 6, ridgeLengthFt: null, eaveLengthFt: null },
+      sections: [{ id: "block", kind: "rect", lengthFt: 40, widthFt: 30 }],
+      vents: [
+        { id: "ridge", kind: "ridge", location: "upper", lengthFt: 36, nfaSqInPerFt: 18 },
+        { id: "soffit", kind: "soffit-individual", location: "lower", quantity: 12, nfaSqInPerUnit: 50 },
+      ],
+      site: {}, notes: "Counted from the ladder", version: created.body.space.version,
+    });
+    expect(saved.status).toBe(200);
+    await office.context.close();
+
+    // The signal returns: the save meets the newer version and asks, part by part.
+    await context.setOffline(false);
+    const dialog = page.getByRole("dialog");
+    await dialog.getByRole("heading", { name: /Someone else changed/ }).waitFor();
+    await dialog.locator("fieldset[data-part]").first().waitFor();
+    const parts = await dialog.locator("fieldset[data-part]").evaluateAll((list) => list.map((f) => f.getAttribute("data-part")));
+    expect(parts).toEqual(["name", "section:block", "vent:soffit", "notes"]);
+    await dialog.locator('fieldset[data-part="name"]').getByLabel(/Theirs/).check();
+    await dialog.locator('fieldset[data-part="vent:soffit"]').getByLabel(/Theirs/).check();
+    await dialog.locator('fieldset[data-part="notes"]').getByLabel(/Theirs/).check();
+    // The block keeps this device's 44 ft (chosen by default).
+    expect(await dialog.locator('fieldset[data-part="section:block"]').getByLabel(/Yours/).isChecked()).toBe(true);
+    await shot(page, "field-conflict-phone");
+    await dialog.getByRole("button", { name: "Save my choices" }).click();
+    await dialog.waitFor({ state: "detached" });
+    await expect.poll(() => page.locator("[data-save-state]").first().getAttribute("data-save-state"), { timeout: 15_000 }).toBe("saved");
+
+    const detail = await api<{ spaces: { name: string; version: number; notes: string | null; sections: { lengthFt: number }[]; vents: { id: string; quantity?: number; lengthFt?: number }[] }[] }>(page, "GET", `/api/projects/${projectId}`);
+    const [space] = detail.body.spaces;
+    expect(space).toMatchObject({ name: "House attic", notes: "Counted from the ladder", version: saved.body.space.version + 1 });
+    expect(space!.sections[0]!.lengthFt).toBe(44);
+    expect(space!.vents.find((v) => v.id === "soffit")!.quantity).toBe(12);
+    expect(space!.vents.find((v) => v.id === "ridge")!.lengthFt).toBe(36);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+});
