@@ -156,7 +156,7 @@ async function offlineAndConflict(page: Page, projectUrl: string) {
   await conflict.waitFor();
   await conflict.getByText(/Main attic \(office copy\)/).waitFor();
   await shot(page, "conflict-wide");
-  await conflict.getByRole("button", { name: "Keep mine (overwrite)" }).click();
+  await conflict.getByRole("button", { name: "All of mine" }).click();
   await waitForSaved(page);
   const after = (await (await page.request.get(`/api/projects/${projectId}`)).json()) as { spaces: { name: string; roof: { ridgeLengthFt: number } }[] };
   expect(after.spaces[0]!.name).toBe("Main attic");
