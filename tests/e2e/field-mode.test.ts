@@ -81,7 +81,7 @@ async function smallPng(): Promise<Buffer> {
 }
 
 async function openPhone(): Promise<{ context: BrowserContext; page: Page; errors: string[] }> {
-  const { context, page } = await newPage(browser, { width: 390, height: 844 });
+  const { context, page } = await newPage(browser, { width: 390, height: 844, serviceWorkers: "allow" });
   const errors: string[] = [];
   page.on("pageerror", (error) => errors.push(error.message));
   return { context, page, errors };

@@ -37,6 +37,7 @@ describe("spaceDifferences", () => {
     expect(diffs.find((d) => d.key === "vent:ridge")).toMatchObject({ mine: expect.stringContaining("30 ft"), theirs: expect.stringContaining("36 ft") });
     expect(diffs.find((d) => d.key === "vent:box")).toMatchObject({ theirs: "Not in this version" });
     expect(diffs.find((d) => d.key === "name")).toMatchObject({ mine: "Main attic", theirs: "House attic" });
+    expect(diffs.find((d) => d.key === "roof:pitch")).toMatchObject({ mine: "8 in 12", theirs: "6 in 12" });
   });
 });
 

@@ -72,6 +72,13 @@ export function describeVent(vent: Vent, system: UnitSystem): string {
   return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
+function describeRoofPart(key: string, value: Record<string, unknown>, system: UnitSystem): string {
+  const only = Object.values(value)[0];
+  if (key === "pitch" && typeof only === "number") return `${only} in 12`;
+  if ((key === "ridge" || key === "eave") && typeof only === "number") return formatLength(only, system);
+  return describeValue(Object.keys(value).length === 1 ? only : value);
+}
+
 type Part<T> = { id: string; built: T | null };
 
 /** Parts of both lists by id, this device's order first, then those only the other version has. */
@@ -99,7 +106,7 @@ export function spaceDifferences(mine: SpaceDraft, theirs: SpaceRecord, system: 
   for (const part of ROOF_PARTS) {
     const a = pick(myRoof, part.surveyKeys);
     const b = pick(buildRoof(other.roof).roof, part.surveyKeys);
-    if (!same(a, b)) out.push({ key: `roof:${part.key}`, label: part.label, mine: describeValue(part.surveyKeys.length === 1 ? a[part.surveyKeys[0]!] : a), theirs: describeValue(part.surveyKeys.length === 1 ? b[part.surveyKeys[0]!] : b) });
+    if (!same(a, b)) out.push({ key: `roof:${part.key}`, label: part.label, mine: describeRoofPart(part.key, a, system), theirs: describeRoofPart(part.key, b, system) });
   }
 
   const siteKeys = [...new Set([...Object.keys(mine.site), ...Object.keys(theirs.site)])] as (keyof SpaceDraft["site"])[];
