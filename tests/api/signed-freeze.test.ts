@@ -191,7 +191,12 @@ describe("signed work is frozen (routes from the declared list)", () => {
       }
     }
     expect(await signedState()).toEqual(before);
-    // The PDF the homeowner signed is still served by its recorded hash.
+    // The PDF the homeowner signed is still served by its recorded hash (once its render has run:
+    // on a loaded machine the job may still be drawing it).
+    const renderDeadline = Date.now() + 60_000;
+    while (Date.now() < renderDeadline && (await team.asOwner.get(`/api/proposals/${ids.proposal}/render-status`)).body.render?.status !== "ready") {
+      await new Promise((r) => setTimeout(r, 250));
+    }
     const pdf = await team.asOwner.get(`/api/proposals/${ids.proposal}/pdf?kind=original`);
     expect(pdf.status).toBe(200);
     expect(pdf.headers["x-content-sha256"]).toBe((await t.db.select().from(proposals).where(eq(proposals.id, ids.proposal!)))[0]!.pdfSha256);

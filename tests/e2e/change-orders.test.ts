@@ -81,6 +81,8 @@ describe("change orders, end to end", () => {
       hp.setDefaultNavigationTimeout(60_000);
       hp.setDefaultTimeout(30_000);
       await hp.goto(p.link);
+      // The homeowner chooses an option first; the signing form follows.
+      await hp.locator('[data-choose-option="1"]').click();
       await hp.getByLabel("2. Your full name").fill("Wren Calloway");
       await hp.getByRole("radio", { name: /Type it/ }).check();
       await hp.getByLabel("Type your name to sign").fill("Wren Calloway");

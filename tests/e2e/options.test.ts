@@ -146,7 +146,8 @@ describe("design options for the fan-and-ridge demo", () => {
       await page.getByRole("button", { name: "Suggest options" }).click();
       await page.locator("[data-proposal]").first().waitFor();
       await shot(page, "options-suggested-390");
-      await page.locator("[data-option-card]").first().getByRole("link", { name: /^Edit/ }).click();
+      // The first option that is still editable (another test may have had one accepted: it is locked).
+      await page.locator("[data-option-card]").getByRole("link", { name: /^Edit/ }).first().click();
       await page.waitForURL(/\/options\/[0-9a-f-]{36}$/);
       await waitForSaved(page);
       await shot(page, "option-editor-390");

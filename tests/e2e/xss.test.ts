@@ -367,9 +367,11 @@ describe("markup in every field of a job, from the survey to the signed PDF", ()
     expect(await renders()).toBe("ready / ready");
 
     const original = pdfText(await pdfBytes(rq, `/api/proposals/${job.accepted.id}/pdf?kind=original`), "original");
+    // Not printed, so not listed: the space's name (the PDF names spaces only when there are several)
+    // and the catalog item (the materials list is the crew's; the homeowner reads the scope).
     const shown = [
       V.company, V.companyAddress, V.licence, V.phone, V.customer, V.siteAddress, V.title, V.ownerName,
-      V.coverNote, V.option, V.optionNotes, V.scope, V.terms, V.space, V.caption, V.item, `the ridge vent "${V.ridgeLabel}"`,
+      V.coverNote, V.option, V.optionNotes, V.scope, V.terms, V.caption, `the ridge vent "${V.ridgeLabel}"`,
     ];
     const missing = shown.filter((s) => !original.includes(s));
     expect(missing, `not found as text in the sent PDF:\n${original.slice(0, 3_000)}`).toEqual([]);
