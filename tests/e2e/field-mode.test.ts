@@ -106,6 +106,9 @@ describe("field mode: a survey with no signal", () => {
     await page.reload();
     await page.getByRole("heading", { name: `Field survey ${tag}` }).waitFor();
     await page.locator("header").getByText("No signal").waitFor();
+    await page.setViewportSize({ width: 1280, height: 900 });
+    await shot(page, "field-offline-desk");
+    await page.setViewportSize({ width: 390, height: 844 });
 
     // A new space, made on the device.
     await page.getByRole("button", { name: 'Add "Main attic"' }).click();
@@ -165,6 +168,37 @@ describe("field mode: a survey with no signal", () => {
     expect(analysis.body.spaces).toHaveLength(1);
     expect(figures(analysis.body.spaces[0]!.analysis)).toEqual(JSON.parse(offlineFigures!));
     await shot(again, "field-back-online-phone");
+
+    // The service worker keeps the app's files only: no API answer in any of its caches.
+    const cachedApi = await again.evaluate(async () => {
+      const urls: string[] = [];
+      for (const name of await caches.keys()) for (const request of await (await caches.open(name)).keys()) urls.push(request.url);
+      return { count: urls.length, api: urls.filter((u) => new URL(u).pathname.startsWith("/api/")) };
+    });
+    expect(cachedApi.count).toBeGreaterThan(10);
+    expect(cachedApi.api).toEqual([]);
+
+    // Signing out on a shared phone deletes the device copy, the queue and any unsent draft.
+    await again.getByRole("button", { name: /^Account:/ }).click();
+    await again.getByRole("button", { name: "Sign out", exact: true }).click();
+    await again.waitForURL(/\/sign-in/);
+    const left = await again.evaluate(async () => {
+      const count = (db: string, store: string) =>
+        new Promise<number>((resolve) => {
+          const open = indexedDB.open(db);
+          open.onsuccess = () => {
+            if (!open.result.objectStoreNames.contains(store)) return resolve(0);
+            const req = open.result.transaction(store).objectStore(store).count();
+            req.onsuccess = () => resolve(req.result);
+          };
+        });
+      return {
+        copies: await count("eavesight-device-copy", "copies"),
+        queued: await count("eavesight-field-outbox", "items"),
+        local: Object.keys(localStorage).filter((k) => k.startsWith("eavesight:")),
+      };
+    });
+    expect(left).toEqual({ copies: 0, queued: 0, local: [] });
     expect(errors).toEqual([]);
     await context.close();
   });

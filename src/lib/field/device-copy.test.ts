@@ -10,7 +10,7 @@ const keysOf = (c: PersistedClient) => c.clientState.queries.map((q) => q.queryK
 
 describe("what the device copy keeps", () => {
   it("when a query is the session, a project, the project list, the catalog or the estimate conditions, then it is kept", () => {
-    for (const key of [["auth", "me"], ["projects", "detail", "p1"], ["projects", "list", {}], ["catalog", "list", {}], ["company", "estimate-conditions"]]) {
+    for (const key of [["auth", "me"], ["projects", "detail", "p1"], ["projects", "list", {}], ["catalog", "list", {}], ["users", "estimators"], ["company", "estimate-conditions"]]) {
       expect(isKept(key), JSON.stringify(key)).toBe(true);
     }
   });

@@ -35,6 +35,7 @@ export const KEPT_ROOTS: readonly QueryKey[] = [
   ["projects", "list"], // the project list
   ["projects", "detail"], // each project's survey, spaces and photo list
   ["catalog"], // the catalog
+  ["users", "estimators"], // names in the project form's estimator list
   ["company", "estimate-conditions"], // summer and winter conditions for airflow estimates
 ];
 
