@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { mkdirSync } from "node:fs";
+import { readFile, rm, writeFile } from "node:fs/promises";
 import path from "node:path";
 import sharp from "sharp";
 import type { BrowserContext, Page } from "playwright-core";
@@ -281,5 +282,54 @@ describe("field mode: the same survey changed elsewhere meanwhile", () => {
     expect(space!.vents.find((v) => v.id === "ridge")!.lengthFt).toBe(36);
     expect(errors).toEqual([]);
     await context.close();
+  });
+});
+
+describe("field mode: a new version", () => {
+  it("when a new version is published while the estimator works, then the app says so and waits; it reloads only when asked", async () => {
+    const clientDir = process.env["E2E_CLIENT_DIR"];
+    expect(clientDir, "E2E_CLIENT_DIR is set by the test task").toBeTruthy();
+    const swPath = path.join(clientDir!, "sw.js");
+    const original = await readFile(swPath);
+    const { context, page, errors } = await openPhone();
+    try {
+      await signInAs(page, ESTIMATOR);
+      await page.waitForURL(/\/projects/);
+      await page.evaluate(async () => {
+        await navigator.serviceWorker.ready;
+      });
+      // The app opened again (from the home screen, say): now the service worker serves this page.
+      await page.reload();
+      await expect.poll(() => page.evaluate(() => navigator.serviceWorker.controller !== null)).toBe(true);
+      // A mark that a reload would wipe, and something typed that must not be lost.
+      await page.evaluate(() => Object.assign(window, { stillTheSamePage: true }));
+      const search = page.getByLabel("Search projects");
+      await search.fill("Varnum");
+
+      // Publish a new version: any change to sw.js is one (its compressed copies are dropped so the new text is served).
+      await Promise.all([".br", ".gz"].map((ext) => rm(`${swPath}${ext}`, { force: true })));
+      await writeFile(swPath, `${original.toString("utf8")}\n// next release ${Date.now()}\n`);
+      await page.evaluate(async () => {
+        const registration = await navigator.serviceWorker.getRegistration();
+        await registration?.update();
+      });
+      await page.getByText("A new version of Eavesight is ready.").waitFor();
+      await shot(page, "field-update-ready-phone");
+      // Nothing reloaded by itself.
+      await page.waitForTimeout(1_000);
+      expect(await page.evaluate(() => (window as unknown as { stillTheSamePage?: boolean }).stillTheSamePage)).toBe(true);
+      expect(await search.inputValue()).toBe("Varnum");
+
+      // The estimator chooses when.
+      await Promise.all([page.waitForEvent("framenavigated"), page.getByRole("button", { name: "Update now" }).click()]);
+      await page.waitForLoadState("domcontentloaded");
+      await expect.poll(() => page.evaluate(() => (window as unknown as { stillTheSamePage?: boolean }).stillTheSamePage ?? false)).toBe(false);
+      await page.getByRole("heading", { name: "Projects" }).first().waitFor();
+      expect(await page.getByText("A new version of Eavesight is ready.").count()).toBe(0);
+      expect(errors).toEqual([]);
+    } finally {
+      await writeFile(swPath, original);
+      await context.close();
+    }
   });
 });
