@@ -33,11 +33,11 @@ const appRoutes: RouteObject[] = [
     loader: async (args) => {
       await ensureDeviceCopy(queryClient);
       const options = surveyQueries.project(args.params.projectId ?? "");
-      const isOnDevice = queryClient.getQueryData(options.queryKey) !== undefined;
-      const project = queryClient.prefetchQuery(options);
+      // Online, the workspace starts from the server's copy (the device's may be behind, and edits
+      // based on it would meet a conflict); with no signal, or none reaching the server, from the device's.
+      const fresh = onlineManager.isOnline() ? queryClient.fetchQuery({ ...options, staleTime: 0, retry: false }).catch(() => undefined) : undefined;
       await requireArea("projects")(args);
-      // A copy on the device opens at once (refreshed behind it); offline without one, the page says so.
-      if (!isOnDevice && onlineManager.isOnline()) await project;
+      await fresh;
       return null;
     },
     lazy: () => import("./routes/projects-detail"),
