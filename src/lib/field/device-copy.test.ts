@@ -16,7 +16,7 @@ describe("what the device copy keeps", () => {
   });
 
   it("when a query is a proposal, payments, the mail outbox, the team or a homeowner's page, then it is not kept", () => {
-    for (const key of [["proposals", "detail", "x"], ["deposits", "x"], ["outbox"], ["team"], ["public-proposal", "token"], ["company"], ["options", "list", "p1"]]) {
+    for (const key of [["proposals", "detail", "x"], ["deposits", "x"], ["outbox"], ["team"], ["public-proposal", "token"], ["company"], ["options", "list", "p1"], ["auth", "me", "signature"]]) {
       expect(isKept(key), JSON.stringify(key)).toBe(false);
     }
   });

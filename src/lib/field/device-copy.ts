@@ -40,7 +40,9 @@ export const KEPT_ROOTS: readonly QueryKey[] = [
 ];
 
 const startsWith = (key: QueryKey, root: QueryKey) => root.every((part, i) => key[i] === part);
-export const isKept = (key: QueryKey) => KEPT_ROOTS.some((root) => startsWith(key, root));
+/** The session itself, not queries filed under it (a drawn signature is `["auth", "me", "signature"]`). */
+const isSessionKey = (key: QueryKey) => key.length === SESSION_KEY.length && startsWith(key, SESSION_KEY);
+export const isKept = (key: QueryKey) => KEPT_ROOTS.some((root) => (root === SESSION_KEY ? isSessionKey(key) : startsWith(key, root)));
 const isProjectCopy = (key: QueryKey) => startsWith(key, ["projects", "detail"]);
 
 /**
@@ -52,8 +54,8 @@ const isProjectCopy = (key: QueryKey) => startsWith(key, ["projects", "detail"])
 export function trimToBudget(client: PersistedClient, maxChars = MAX_COPY_CHARS, maxProjects = MAX_PROJECT_COPIES): PersistedClient {
   const queries = client.clientState.queries;
   const byNewest = [...queries].sort((a, b) => {
-    const aSession = startsWith(a.queryKey, SESSION_KEY) ? 1 : 0;
-    const bSession = startsWith(b.queryKey, SESSION_KEY) ? 1 : 0;
+    const aSession = isSessionKey(a.queryKey) ? 1 : 0;
+    const bSession = isSessionKey(b.queryKey) ? 1 : 0;
     return bSession - aSession || b.state.dataUpdatedAt - a.state.dataUpdatedAt;
   });
   const kept = new Set<(typeof queries)[number]>();
@@ -108,7 +110,7 @@ async function follow(queryClient: QueryClient, session: Session) {
   if (current && current.userId === owner.userId && current.companyId === owner.companyId) return;
   if (current) {
     // Another person on this device: nothing of the previous one stays in memory.
-    queryClient.removeQueries({ predicate: (q) => !startsWith(q.queryKey, SESSION_KEY) });
+    queryClient.removeQueries({ predicate: (q) => !isSessionKey(q.queryKey) });
   }
   fieldOwner.write(owner);
   persistAs(queryClient, owner);
@@ -135,9 +137,9 @@ export function ensureDeviceCopy(queryClient: QueryClient): Promise<void> {
       await outbox.open(owner);
     }
     queryClient.getQueryCache().subscribe((event) => {
-      if (event.type !== "updated" || !startsWith(event.query.queryKey, SESSION_KEY)) return;
+      if (event.type !== "updated" || !isSessionKey(event.query.queryKey)) return;
       const session = event.query.state.data as Session | null | undefined;
-      if (session) void follow(queryClient, session);
+      if (session?.user?.id && session.company?.id) void follow(queryClient, session);
     });
   })();
   return started;
