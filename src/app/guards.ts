@@ -1,3 +1,4 @@
+import { onlineManager } from "@tanstack/react-query";
 import { data, redirect, type LoaderFunctionArgs } from "react-router";
 import { paths, safeNextPath } from "@/config/paths";
 import { authQueries } from "@/features/auth/api/queries";
@@ -17,8 +18,20 @@ function currentPath(request: Request): string {
  */
 export async function currentSession(): Promise<Session | null> {
   await ensureDeviceCopy(queryClient);
+  // Once per page load, online, ask the server as before (a name or role may have changed); the
+  // device copy stands in only when there is no signal or no answer.
+  if (!isSessionChecked && onlineManager.isOnline()) {
+    try {
+      const session = await queryClient.fetchQuery({ ...authQueries.me(), staleTime: 0, retry: false });
+      isSessionChecked = true;
+      return session;
+    } catch {
+      // no answer: fall through to the copy on this device
+    }
+  }
   return queryClient.ensureQueryData({ ...authQueries.me(), revalidateIfStale: true });
 }
+let isSessionChecked = false;
 
 async function sessionOrRedirect(request: Request): Promise<Session> {
   const session = await currentSession();
