@@ -70,6 +70,8 @@ export default defineConfig({
           name: "unit",
           include: ["shared/**/*.test.ts", "server/**/*.test.ts", "src/**/*.test.{ts,tsx}", "tests/unit/**/*.test.ts"],
           environment: "node",
+          // A guard against a hang, not a speed check: property tests of 1,000 runs pass 5 s on a busy machine.
+          testTimeout: 20_000,
         },
       },
       {

@@ -12,7 +12,7 @@
 import { createHash } from "node:crypto";
 import express from "express";
 import postgres from "postgres";
-import { analyzeSpace } from "../server/modules/projects/projects.service.ts";
+import { analyzeSpace } from "../server/modules/projects/analyze-space.ts";
 
 const databaseUrl = process.env.DATABASE_URL;
 const port = Number(process.env.PORT);

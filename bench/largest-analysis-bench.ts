@@ -3,9 +3,10 @@
  * attic space at its limits (LIMITS: spaces, sections, vent rows), analysed by GET
  * /api/projects/:id/analysis on the real server (NODE_ENV=production, as `npm start` runs it).
  *
- * Printed, from one run: the time of one such analysis request alone; then the health check's
- * p50 / p95 / max latency with nothing else running (the baseline), and again while ten clients
- * request that analysis back to back.
+ * Printed, from one run, twice: with the analysis on the request thread (COMPUTE_THREADS=0, the
+ * baseline) and on the compute pool's worker threads (the default): the time of one such analysis
+ * request alone; then the health check's p50 / p95 / max latency with nothing else running, and
+ * again while ten clients request that analysis back to back.
  *
  *   npm run bench -- largest-analysis                 (a throwaway database, via scripts/tasks/bench.ts)
  *   node --import tsx bench/largest-analysis-bench.ts (a database of its own in the test cluster, dropped after)
@@ -26,14 +27,9 @@ const ANALYSIS_CLIENTS = 10;
 const demo = await demoDatabase("largest-analysis");
 const storageDir = await mkdtemp(path.join(os.tmpdir(), "eavesight-bench-files-"));
 const smtp = await startFakeSmtp({ databaseUrl: demo.databaseUrl, port: await freePort() });
-const port = await freePort();
-const origin = `http://127.0.0.1:${port}`;
-const app = await startServer({
-  ...process.env, DATABASE_URL: demo.databaseUrl, HOST: "127.0.0.1", PORT: String(port), APP_ORIGIN: origin,
-  SMTP_PORT: String(smtp.port), STORAGE_DIR: storageDir, SERVE_CLIENT: "false", LOG_LEVEL: "warn", NODE_ENV: "production",
-});
-
+let origin = "";
 let cookie = "";
+
 async function call<T>(method: string, url: string, body?: unknown): Promise<{ status: number; body: T }> {
   const res = await fetch(`${origin}${url}`, {
     method, headers: { origin, cookie, ...(body === undefined ? {} : { "content-type": "application/json" }) },
@@ -71,8 +67,10 @@ async function healthLatencies(): Promise<{ p50: number; p95: number; max: numbe
   return { p50: quantile(ms, 0.5), p95: quantile(ms, 0.95), max: ms[ms.length - 1]! };
 }
 
-try {
-  must(await call("POST", "/api/auth/sign-in", { email: "owner@tallgrass.example", password: DEMO_PASSWORD }), "sign-in");
+let projectId: string | null = null;
+/** The largest legal project, made once through the API of the first server. */
+async function largestProject(): Promise<string> {
+  if (projectId) return projectId;
   const customer = must(await call<{ customer: { id: string } }>("POST", "/api/customers", { name: "Largest Survey" }), "customer").customer;
   const project = must(await call<{ project: { id: string } }>("POST", "/api/projects", { customerId: customer.id, title: "Largest legal survey", siteAddress: "1 Bench Road, Marrow Creek", climateZone: 5 }), "project").project;
   for (let s = 0; s < LIMITS.maxSpacesPerProject; s++) {
@@ -84,48 +82,72 @@ try {
       site: { atmosphericCombustionAppliance: true },
     }), `space ${s + 1}`);
   }
-  const analysisUrl = `/api/projects/${project.id}/analysis`;
-  // Warm up the code paths, then time one request alone.
-  for (let i = 0; i < 3; i++) must(await call("GET", analysisUrl), "analysis");
-  const size = (await (await fetch(`${origin}${analysisUrl}`, { headers: { cookie } })).arrayBuffer()).byteLength;
-  const alone: number[] = [];
-  for (let i = 0; i < 10; i++) {
-    const start = performance.now();
-    must(await call("GET", analysisUrl), "analysis");
-    alone.push(performance.now() - start);
-  }
-  alone.sort((a, b) => a - b);
+  projectId = project.id;
+  return projectId;
+}
 
-  const baseline = await healthLatencies();
-  let isLoading = true;
-  let analyses = 0;
-  const failures: string[] = [];
-  const clients = Array.from({ length: ANALYSIS_CLIENTS }, async () => {
-    while (isLoading) {
-      try {
-        must(await call("GET", analysisUrl), "analysis");
-        analyses++;
-      } catch (err) {
-        failures.push(err instanceof Error ? `${err.message}${err.cause instanceof Error ? ` (${err.cause.message})` : ""}` : String(err));
-      }
-    }
+const f = (x: number) => `${x.toFixed(1)} ms`;
+
+/** One server with these settings: the figures of one line pair. */
+async function measure(label: string, env: Record<string, string>) {
+  const port = await freePort();
+  origin = `http://127.0.0.1:${port}`;
+  cookie = "";
+  const app = await startServer({
+    ...process.env, DATABASE_URL: demo.databaseUrl, HOST: "127.0.0.1", PORT: String(port), APP_ORIGIN: origin,
+    SMTP_PORT: String(smtp.port), STORAGE_DIR: storageDir, SERVE_CLIENT: "false", LOG_LEVEL: "warn", NODE_ENV: "production", ...env,
   });
-  const loadStart = performance.now();
-  const loaded = await healthLatencies();
-  isLoading = false;
-  await Promise.all(clients);
-  const loadSeconds = (performance.now() - loadStart) / 1000;
+  try {
+    must(await call("POST", "/api/auth/sign-in", { email: "owner@tallgrass.example", password: DEMO_PASSWORD }), "sign-in");
+    const analysisUrl = `/api/projects/${await largestProject()}/analysis`;
+    // Warm up the code paths (and the pool's threads), then time one request alone.
+    for (let i = 0; i < 3; i++) must(await call("GET", analysisUrl), "analysis");
+    const size = (await (await fetch(`${origin}${analysisUrl}`, { headers: { cookie } })).arrayBuffer()).byteLength;
+    const alone: number[] = [];
+    for (let i = 0; i < 10; i++) {
+      const start = performance.now();
+      must(await call("GET", analysisUrl), "analysis");
+      alone.push(performance.now() - start);
+    }
+    alone.sort((a, b) => a - b);
 
-  const f = (x: number) => `${x.toFixed(1)} ms`;
+    const baseline = await healthLatencies();
+    let isLoading = true;
+    let analyses = 0;
+    const failures: string[] = [];
+    const clients = Array.from({ length: ANALYSIS_CLIENTS }, async () => {
+      while (isLoading) {
+        try {
+          must(await call("GET", analysisUrl), "analysis");
+          analyses++;
+        } catch (err) {
+          failures.push(err instanceof Error ? `${err.message}${err.cause instanceof Error ? ` (${err.cause.message})` : ""}` : String(err));
+        }
+      }
+    });
+    const loadStart = performance.now();
+    const loaded = await healthLatencies();
+    isLoading = false;
+    await Promise.all(clients);
+    const loadSeconds = (performance.now() - loadStart) / 1000;
+
+    console.log(`${label}`);
+    console.log(`  analysis answer: ${(size / 1024).toFixed(0)} KiB of JSON`);
+    console.log(`  one analysis request alone: median ${f(quantile(alone, 0.5))}, max ${f(alone[alone.length - 1]!)}`);
+    console.log(`  health, nothing else running:            p50 ${f(baseline.p50)}  p95 ${f(baseline.p95)}  max ${f(baseline.max)}`);
+    console.log(`  health, ${ANALYSIS_CLIENTS} clients analysing it nonstop:  p50 ${f(loaded.p50)}  p95 ${f(loaded.p95)}  max ${f(loaded.max)}  (${(analyses / loadSeconds).toFixed(1)} analyses/s)`);
+    if (failures.length) console.log(`  failed analysis requests: ${failures.length} (first: ${failures[0]})`);
+  } finally {
+    await stopChild(app);
+  }
+}
+
+try {
   console.log(`largest legal project: ${LIMITS.maxSpacesPerProject} spaces × ${LIMITS.maxSections} sections × ${LIMITS.maxVents} vent rows`);
-  console.log(`  analysis answer: ${(size / 1024).toFixed(0)} KiB of JSON`);
-  console.log(`  one analysis request alone: median ${f(quantile(alone, 0.5))}, max ${f(alone[alone.length - 1]!)}`);
-  console.log(`  health, nothing else running:            p50 ${f(baseline.p50)}  p95 ${f(baseline.p95)}  max ${f(baseline.max)}`);
-  console.log(`  health, ${ANALYSIS_CLIENTS} clients analysing it nonstop:  p50 ${f(loaded.p50)}  p95 ${f(loaded.p95)}  max ${f(loaded.max)}  (${(analyses / loadSeconds).toFixed(1)} analyses/s)`);
-  if (failures.length) console.log(`  failed analysis requests: ${failures.length} (first: ${failures[0]})`);
+  await measure("baseline, analysis on the request thread (COMPUTE_THREADS=0):", { COMPUTE_THREADS: "0" });
+  await measure(`analysis on the compute pool (${process.env.COMPUTE_THREADS ?? "default"} threads):`, {});
   console.log(`  load average (1/5/15 min): ${os.loadavg().map((x) => x.toFixed(2)).join(" / ")}`);
 } finally {
-  await stopChild(app);
   await smtp.close();
   await rm(storageDir, { recursive: true, force: true });
   demo.drop();

@@ -104,7 +104,7 @@ async function renderChild(fonts: FontSource, renders: number, snapshotFile: str
   const medianOf = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
   const isBaseline = fonts === "woff";
   // The demo has no logo or photos, so the job's assets step would hand over exactly these.
-  const input: RenderInput = { snapshot: JSON.parse(await readFile(snapshotFile, "utf8")), logoDataUrl: null, photoDataUrls: {} };
+  const input: RenderInput = { snapshot: JSON.parse(await readFile(snapshotFile, "utf8")), logoDataUrl: null, photoDataUrls: {}, verifyUrl: "http://127.0.0.1:3000/verify" };
   const snapshot = input.snapshot;
 
   const start = memory("at start (after GC)", { isAfterGc: true });

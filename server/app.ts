@@ -56,7 +56,7 @@ import { createProposalJobs } from "./modules/proposals/proposal-jobs.ts";
 import { proposalsRouter } from "./modules/proposals/proposals.router.ts";
 import { publicProposalsRouter, publicRateLimits } from "./modules/proposals/public.router.ts";
 import { signatureJson } from "./modules/proposals/uploads.ts";
-import { renderChangeOrderPdf } from "./modules/proposals/pdf/change-order-document.tsx";
+import { renderChangeOrderPdfOffThread } from "./modules/proposals/pdf/render-off-thread.ts";
 import { createChangeOrdersRepository } from "./modules/change-orders/change-orders.repository.ts";
 import { createChangeOrdersService } from "./modules/change-orders/change-orders.service.ts";
 import { changeOrdersRouter, publicChangeOrdersRouter } from "./modules/change-orders/change-orders.router.ts";
@@ -153,7 +153,7 @@ export function createApp(deps: AppDeps): Express {
   });
   const companyService = createCompanyService({ repo: proposalsRepo, storage });
   const changeOrdersService = createChangeOrdersService({
-    repo: createChangeOrdersRepository(db), proposals: proposalsRepo, catalog: catalogRepo, storage, jobs: proposalJobs, renderPdf: renderChangeOrderPdf, now, appOrigin: () => appOrigin(),
+    repo: createChangeOrdersRepository(db), proposals: proposalsRepo, catalog: catalogRepo, storage, jobs: proposalJobs, renderPdf: renderChangeOrderPdfOffThread, now, appOrigin: () => appOrigin(),
   });
   app.locals.proposalJobs = proposalJobs;
   const paymentsService = createPaymentsService({

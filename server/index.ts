@@ -7,6 +7,7 @@ import { createMailer } from "./lib/mailer.ts";
 import { startJobs } from "./lib/jobs.ts";
 import { createApp } from "./app.ts";
 import { createSessionCache } from "./modules/auth/session-cache.ts";
+import { closeComputePool } from "./lib/compute/pool.ts";
 
 const env = parseEnv();
 const logger = createLogger(env.LOG_LEVEL, { pretty: Boolean(process.stdout.isTTY) });
@@ -44,6 +45,7 @@ async function shutdown(signal: string) {
   await jobs.stop().catch(() => {});
   mailer.close();
   await sessionCache.close();
+  await closeComputePool();
   await sql.end({ timeout: 5 });
   process.exit(0);
 }

@@ -43,6 +43,8 @@ export function errorMiddleware(logger: Logger): ErrorRequestHandler {
   return (err, req, res, _next) => {
     if (res.headersSent) return;
     if (err instanceof AppError) {
+      // "Briefly unavailable" always says when to come back.
+      if (err.status === 503) res.set("Retry-After", "5");
       res.status(err.status).json({ error: { ...err.details, code: err.code, message: err.message, fields: err.fields ?? {} } });
       return;
     }

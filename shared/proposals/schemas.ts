@@ -3,6 +3,7 @@
  * homeowner's answers: shared by the client's forms and the server's validation.
  */
 import { z } from "zod";
+import { PROPOSAL_LIMITS } from "./limits.ts";
 import { CodeBasisSchema, UpperShareBaseSchema } from "../ventilation/schema";
 import { versionField } from "../schemas/input-safety.ts";
 import { EstimateConditionsSchema } from "../airflow-model/schema";
@@ -13,9 +14,11 @@ const CONTROL = /[\u0000-\u001f\u007f-\u009f\u2028\u2029]/;
 const oneLine = (what: string, max: number) =>
   z.string({ error: `${what} must be text.` }).trim()
     .min(1, `Enter ${what.toLowerCase()}.`)
-    .max(max, `${what} must be at most ${max} characters.`)
+    .max(max, `${what} must be at most ${max.toLocaleString("en-US")} characters.`)
     .refine((v) => !CONTROL.test(v), `${what} can't contain control characters or line breaks.`);
-const optionalText = (what: string, max: number) => z.string({ error: `${what} must be text.` }).trim().max(max, `${what} must be at most ${max} characters.`).nullable().optional();
+export { PROPOSAL_LIMITS } from "./limits.ts";
+
+const optionalText = (what: string, max: number) => z.string({ error: `${what} must be text.` }).trim().max(max, `${what} must be at most ${max.toLocaleString("en-US")} characters.`).nullable().optional();
 
 /** A drawn signature as a PNG data URL; the server checks the bytes really are a PNG of at most 1 MB. */
 export const MAX_SIGNATURE_PNG_BYTES = 1024 * 1024;
@@ -44,7 +47,7 @@ export const CompanyProfilePatchSchema = z.object({
   addressLine: optionalText("The address", 500),
   phone: optionalText("The phone number", 40),
   email: z.string().trim().max(254).email("That does not look like an e-mail address.").nullable().optional(),
-  defaultTerms: optionalText("The default terms", 20_000),
+  defaultTerms: optionalText("The default terms", PROPOSAL_LIMITS.maxTermsChars),
   taxRateBasisPoints: z.number({ error: "The tax rate is a number of basis points (825 = 8.25 %)." }).int().min(0).max(5_000, "The tax rate is at most 50 %."),
   depositRule: DepositRuleSchema.nullable(),
   /** Print the FTC three-day cancellation notice and form (sales made at the home). */
@@ -74,22 +77,24 @@ const isRealDate = (v: string) => {
 const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "Use a date like 2026-12-31.").refine(isRealDate, "That is not a real date.");
 
 export const ProposalCreateSchema = z.object({
-  optionIds: z.array(z.string().uuid("Choose design options of this project.")).min(1, "Choose at least one design option.").max(6, "At most 6 options in one proposal."),
+  optionIds: z.array(z.string().uuid("Choose design options of this project.")).min(1, "Choose at least one design option.").max(PROPOSAL_LIMITS.maxOptions, `At most ${PROPOSAL_LIMITS.maxOptions} options in one proposal.`),
   validUntil: isoDate.optional(),
 }).strict();
 
-export const ScopeTextSchema = z.array(z.string().trim().min(1, "A scope line can't be empty.").max(1_000)).max(60);
+export const ScopeTextSchema = z
+  .array(z.string().trim().min(1, "A scope line can't be empty.").max(PROPOSAL_LIMITS.maxScopeLineChars, `A scope line is at most ${PROPOSAL_LIMITS.maxScopeLineChars} characters.`))
+  .max(PROPOSAL_LIMITS.maxScopeLines, `At most ${PROPOSAL_LIMITS.maxScopeLines} scope lines for one option.`);
 
 export const ProposalPatchSchema = z.object({
   version: versionField("proposal"),
-  coverNote: optionalText("The cover note", 5_000),
-  terms: optionalText("The terms", 20_000),
+  coverNote: optionalText("The cover note", PROPOSAL_LIMITS.maxCoverNoteChars),
+  terms: optionalText("The terms", PROPOSAL_LIMITS.maxTermsChars),
   validUntil: isoDate,
   depositRule: DepositRuleSchema.nullable(),
-  optionIds: z.array(z.string().uuid()).min(1, "Choose at least one design option.").max(6),
+  optionIds: z.array(z.string().uuid()).min(1, "Choose at least one design option.").max(PROPOSAL_LIMITS.maxOptions, `At most ${PROPOSAL_LIMITS.maxOptions} options in one proposal.`),
   /** Scope lines per option id. */
   scopes: z.record(z.string().uuid(), ScopeTextSchema),
-  photoIds: z.array(z.string().uuid()).max(24, "At most 24 photos."),
+  photoIds: z.array(z.string().uuid()).max(PROPOSAL_LIMITS.maxPhotos, `At most ${PROPOSAL_LIMITS.maxPhotos} photos.`),
   /** Finding codes to show; null shows all. */
   findingCodes: z.array(z.string().regex(/^[a-z0-9-]+$/).max(60)).max(60).nullable(),
 }).partial().required({ version: true }).strict();

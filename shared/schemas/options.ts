@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { OPTION_NOTES_MAX_CHARS } from "../proposals/limits.ts";
 import { versionField } from "./input-safety.ts";
 import { LIMITS } from "../ventilation/schema.ts";
 
@@ -54,7 +55,7 @@ export const AdjustmentSchema = z.discriminatedUnion("kind", [
 
 const optionFields = {
   name: z.string().trim().min(1, "Name the option.").max(120),
-  notes: z.string().max(5_000).nullable(),
+  notes: z.string().max(OPTION_NOTES_MAX_CHARS, `Notes are at most ${OPTION_NOTES_MAX_CHARS.toLocaleString("en-US")} characters.`).nullable(),
   spaces: z.array(OptionSpaceSchema).max(LIMITS.maxSpacesPerProject, `An option covers at most ${LIMITS.maxSpacesPerProject} attic spaces.`),
   laborLines: z.array(LaborLineSchema).max(30, "At most 30 labour lines."),
   discount: AdjustmentSchema,

@@ -126,6 +126,7 @@ export const routes: RouteObject[] = [
       // The homeowner's proposal page: no account and no app shell (it has its own plain header).
       { path: paths.publicProposal.path, errorElement: <RootErrorPage />, lazy: () => import("./routes/public-proposal") },
       { path: paths.publicChangeOrder.path, errorElement: <RootErrorPage />, lazy: () => import("./routes/public-change-order") },
+      { path: paths.publicVerify.path, errorElement: <RootErrorPage />, lazy: () => import("./routes/public-verify") },
       {
         element: <AuthLayout />,
         errorElement: <RootErrorPage />,

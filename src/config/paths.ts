@@ -3,6 +3,8 @@
  * The server builds e-mail links to `acceptInvite` and `resetPassword`: keep those two stable.
  */
 
+import { VERIFY_PAGE_PATH } from "@shared/proposals/public-paths";
+
 function withQuery(path: string, query: Record<string, string | undefined>): string {
   const params = new URLSearchParams();
   for (const [key, value] of Object.entries(query)) if (value) params.set(key, value);
@@ -87,6 +89,12 @@ export const paths = {
   publicProposal: {
     path: "/p/:token",
     getHref: (token: string) => `/p/${encodeURIComponent(token)}`,
+  },
+
+  /** The public document check (no account); the server prints its address on every PDF. */
+  publicVerify: {
+    path: VERIFY_PAGE_PATH,
+    getHref: () => VERIFY_PAGE_PATH,
   },
 
   /** The homeowner's change-order page (no account). */

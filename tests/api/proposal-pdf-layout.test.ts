@@ -10,6 +10,7 @@ import { companies, projects, proposals } from "../../server/db/schema/index.ts"
 import { renderProposalPdf } from "../../server/modules/proposals/pdf/render-pdf.tsx";
 import { optionFixes } from "../../shared/proposals/option-fixes.ts";
 import type { ProposalSnapshot } from "../../shared/proposals/types.ts";
+import { verifyPageUrl } from "../../shared/proposals/public-paths.ts";
 import { startTestApp, type TestApp } from "../setup/test-app.ts";
 
 /**
@@ -20,6 +21,8 @@ import { startTestApp, type TestApp } from "../setup/test-app.ts";
  */
 
 let t: TestApp;
+/** A long origin, so the footer wraps as it would for a company's own domain. */
+const LONG_VERIFY_URL = verifyPageUrl("https://proposals.tallgrass-exteriors-marrow-creek.example");
 const work = mkdtempSync(path.join(tmpdir(), "eavesight-pdf-layout-"));
 const shots = path.resolve(".var/screenshots");
 let rendered: { title: string; snapshot: ProposalSnapshot; file: string }[] = [];
@@ -36,7 +39,7 @@ beforeAll(async () => {
   for (const [i, r] of demo.entries()) {
     const file = path.join(work, `demo-${i}.pdf`);
     writeFileSync(path.join(work, `demo-${i}.json`), JSON.stringify(r.snapshot));
-    writeFileSync(file, await renderProposalPdf({ snapshot: r.snapshot!, logoDataUrl: null, photoDataUrls: {} }));
+    writeFileSync(file, await renderProposalPdf({ snapshot: r.snapshot!, logoDataUrl: null, photoDataUrls: {}, verifyUrl: LONG_VERIFY_URL }));
     execFileSync("pdftoppm", ["-png", "-r", "50", file, path.join(shots, `demo-proposal-${i}`)]);
     rendered.push({ title: r.title, snapshot: r.snapshot!, file });
   }
@@ -97,11 +100,14 @@ function sharedByOptions(snapshot: ProposalSnapshot): string[] {
 function repeatedParagraphs(file: string, snapshot: ProposalSnapshot): string[] {
   const text = execFileSync("pdftotext", [file, "-"]).toString();
   const headings = new Set(snapshot.options.map((o, i) => `Option ${i + 1}: ${o.name}`));
+  const footerStart = `${snapshot.company.name} · Proposal ${snapshot.proposalId.slice(0, 8)} rev. ${snapshot.revision}`;
   const shared = sharedByOptions(snapshot);
   const seen = new Map<string, number>();
   for (const block of text.split(/\n\s*\n/)) {
     const paragraph = norm(block);
-    if (paragraph.length < 70 || /Page \d+ of \d+/.test(paragraph) || headings.has(paragraph) || shared.some((t) => t.includes(paragraph))) continue;
+    // The running footer (company, proposal and where to check a copy, then the page number) is on every page by design.
+    const isFooter = /Page \d+ of \d+/.test(paragraph) || paragraph.startsWith(footerStart);
+    if (paragraph.length < 70 || isFooter || headings.has(paragraph) || shared.some((t) => t.includes(paragraph))) continue;
     seen.set(paragraph, (seen.get(paragraph) ?? 0) + 1);
   }
   return [...seen].filter(([, n]) => n > 1).map(([paragraph, n]) => `${n}× ${paragraph}`);

@@ -398,13 +398,15 @@ describe("revisions, typed signatures, refusals", () => {
     expect(pdfText(signed.body, "typed")).toContain("<script>alert('x')</script> Rowan");
   });
 
-  it("when a link is wrong, revoked or expired, then it answers 404, 404 and 410 with no data; the sweep marks it expired", async () => {
+  it("when a link is wrong, revoked or expired, then it answers 404, 410 and 410 with no data; the sweep marks it expired", async () => {
     expect((await pub("get", "/api/public/proposals/not-a-real-token-at-all-000000")).status).toBe(404);
     const p = await draft(team.asSales, [optionIds[0]!]);
     const { token } = await sendAndGetToken(team.asSales, p.id);
     await send(team.asSales, "post", `/api/proposals/${p.id}/revoke-link`).expect(200);
     const revoked = await pub("get", `/api/public/proposals/${token}`);
-    expect(revoked.status).toBe(404);
+    // The holder had the link: they are told it was withdrawn (proposal-links.test.ts), and nothing more.
+    expect(revoked.status).toBe(410);
+    expect(revoked.body.error.code).toBe("link-revoked");
     expect(Object.keys(revoked.body)).toEqual(["error"]);
 
     const q = await draft(team.asSales, [optionIds[0]!]);

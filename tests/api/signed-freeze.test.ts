@@ -129,7 +129,15 @@ const ROUTES: Record<string, { refuses: Call[] } | { leavesAlone: string; calls?
   "post /api/public/change-orders/:token/decline": { leavesAlone: "a declined change order changes nothing (change-orders.test.ts)" },
   "post /api/projects/:id/options/generate": { leavesAlone: "saves nothing" },
   "post /api/projects/:id/proposals": { leavesAlone: "makes a new draft proposal" },
-  "post /api/proposals/:id/revoke-link": { leavesAlone: "changes who may open the link, not what was signed (proposals.test.ts)" },
+  "post /api/proposals/:id/resend": { leavesAlone: "an accepted proposal is not resent; a new link is issued instead (proposal-links.test.ts)", calls: [
+    () => send(team.asSales, "post", `/api/proposals/${ids.proposal}/resend`),
+  ] },
+  "post /api/proposals/:id/revoke-link": { leavesAlone: "changes who may open the link, not what was signed (proposal-links.test.ts)", calls: [
+    () => send(team.asSales, "post", `/api/proposals/${ids.proposal}/revoke-link`),
+  ] },
+  "post /api/proposals/:id/reissue-link": { leavesAlone: "a new link shows what was signed; the acceptance is not a link column (proposal-links.test.ts)", calls: [
+    () => send(team.asSales, "post", `/api/proposals/${ids.proposal}/reissue-link`),
+  ] },
   "post /api/public/proposals/:token/deposit/checkout": { leavesAlone: "payments have their own records (payments.test.ts)" },
   "post /api/webhooks/payments": { leavesAlone: "as above" },
   "post /api/payments/:id/refund": { leavesAlone: "as above" },

@@ -4,6 +4,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import request from "supertest";
 import { eq, sql as rawSql } from "drizzle-orm";
+import { closeComputePool } from "../../server/lib/compute/pool.ts";
 import { createApp } from "../../server/app.ts";
 import { parseEnv } from "../../server/env.ts";
 import { createDb } from "../../server/db/client.ts";
@@ -82,6 +83,7 @@ export async function startTestApp(opts: { envOverrides?: Record<string, string 
     await jobs.stop();
     mailer.close();
     await sessionCache.close();
+    await closeComputePool();
     await sql.end({ timeout: 2 });
     rmSync(storageDir, { recursive: true, force: true });
   }

@@ -80,6 +80,28 @@ export const proposals = pgTable(
 );
 
 /**
+ * Links that no longer open their proposal: the SHA-256 of each token that was replaced by a new
+ * link, with why it stopped (the company withdrew it, or sent a new one). Kept so a homeowner on
+ * an old link is told what happened instead of "not found"; a token itself is never stored.
+ */
+export const proposalRetiredLinks = pgTable(
+  "proposal_retired_links",
+  {
+    tokenHash: text().primaryKey(),
+    companyId: uuid().notNull().references(() => companies.id),
+    proposalId: uuid().notNull().references(() => proposals.id, { onDelete: "cascade" }),
+    tokenId: uuid(),
+    /** "revoked": withdrawn by the company before it was replaced; "replaced": a new link was sent. */
+    reason: text().$type<"revoked" | "replaced">().notNull(),
+    retiredAt: timestamp({ withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [
+    index("proposal_retired_links_proposal_idx").on(t.proposalId),
+    check("proposal_retired_links_reason_check", sql`${t.reason} in ('revoked', 'replaced')`),
+  ],
+);
+
+/**
  * What happened to a proposal, in order: sent, viewed, accepted (with the signing evidence),
  * declined, expired, reminded, link revoked. A trigger refuses UPDATE and DELETE.
  */

@@ -6,6 +6,7 @@ import { hashToken, newToken } from "../../lib/tokens.ts";
 import { changeLineTotalCents, changeOrderTotals, type ChangeOrderDraftInput, type ChangeOrderLine, type ChangeOrderSnapshot } from "../../../shared/change-orders/index.ts";
 import type { ChangeOrderSignInput } from "../../../shared/change-orders/schemas.ts";
 import { esignDisclosure } from "../../../shared/proposals/disclosures.ts";
+import { verifyPageUrl } from "../../../shared/proposals/public-paths.ts";
 import type { CatalogRepository } from "../catalog/catalog.repository.ts";
 import type { ProposalJobs } from "../proposals/proposal-jobs.ts";
 import { sha256Hex, snapshotSha256 as canonicalSha256 } from "../proposals/proposal-snapshot.ts";
@@ -164,7 +165,7 @@ export function createChangeOrdersService(deps: ChangeOrdersDeps) {
       };
       const snapshotSha = canonicalSha256(snapshot as never);
       // A one-page document: drawn here so its hash is on record before the e-mail can go out.
-      const pdf = await deps.renderPdf({ snapshot, acceptance: null, verifyUrl: `${deps.appOrigin()}/verify` });
+      const pdf = await deps.renderPdf({ snapshot, acceptance: null, verifyUrl: verifyPageUrl(deps.appOrigin()) });
       const pdfSha = sha256Hex(pdf);
       const pdfKey = `change-orders/${actor.companyId}/${pdfSha}.pdf`;
       await deps.storage.put(pdfKey, pdf, "application/pdf");

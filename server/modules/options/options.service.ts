@@ -5,7 +5,7 @@ import type { CatalogItem } from "../../../shared/schemas/catalog.ts";
 import type { SpaceSurvey } from "../../../shared/schemas/survey.ts";
 import { applyOption, DesignError, generateOptions, materialsList, withCatalogLabor, type MaterialsList, type OptionType } from "../../../shared/design/index.ts";
 import { priceOption, PricingError, NO_DEPOSIT, type OptionPrice, type PricingSettings } from "../../../shared/pricing/index.ts";
-import { analyzeSpace, type SpaceAnalysis } from "../projects/projects.service.ts";
+import { analyzeSpace, type SpaceAnalysis } from "../projects/analyze-space.ts";
 import type { ProjectRow, ProjectsRepository } from "../projects/projects.repository.ts";
 import type { SpaceRow, SpacesRepository } from "../spaces/spaces.repository.ts";
 import type { CatalogRepository } from "../catalog/catalog.repository.ts";

@@ -32,7 +32,7 @@ export function projectsRouter(service: ProjectsService) {
     },
     {
       method: "get", path: "/projects/:id/analysis", access: "projects:read", idParams: ["id"],
-      handler: async (req, res) => { res.json(await service.analysis(actorOf(req), projectId(req))); },
+      handler: async (req, res) => { res.type("json").send(await service.analysisJson(actorOf(req), projectId(req))); },
     },
   ]);
 }

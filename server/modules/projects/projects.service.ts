@@ -2,36 +2,11 @@ import { AppError, notFound } from "../../lib/errors.ts";
 import type { Audit } from "../../lib/audit.ts";
 import type { Actor, RequestMeta } from "../../lib/request-context.ts";
 import type { ListQuery, ProjectInput, ProjectPatch } from "../../../shared/schemas/projects.ts";
-import { analyzeAttic, AtticInputSchema, type AtticAnalysis } from "../../../shared/ventilation/index.ts";
-import { toAtticInput, type ProjectBasis } from "../../../shared/survey/to-attic-input.ts";
-import type { SpaceSurvey } from "../../../shared/schemas/survey.ts";
+import { computePool } from "../../lib/compute/pool.ts";
 import { photoView } from "../photos/photos.service.ts";
 import type { ProjectRow, ProjectsRepository } from "./projects.repository.ts";
 
 export const STALE_PROJECT_MESSAGE = "Someone else saved this project since you opened it.";
-
-export interface SpaceAnalysis {
-  spaceId: string;
-  name: string;
-  analysis: AtticAnalysis | null;
-  issues: { path: string; message: string }[];
-}
-
-/**
- * One space through the shared core, exactly as the client's live panel does it: the same
- * toAtticInput, the same schema, the same analyzeAttic. Never stored: always recomputed.
- */
-export function analyzeSpace(project: ProjectBasis, space: SpaceSurvey & { id: string }): SpaceAnalysis {
-  const base = { spaceId: space.id, name: space.name };
-  if (space.sections.length === 0) {
-    return { ...base, analysis: null, issues: [{ path: "sections", message: "Add at least one section of attic floor to see the analysis." }] };
-  }
-  const parsed = AtticInputSchema.safeParse(toAtticInput(project, space));
-  if (!parsed.success) {
-    return { ...base, analysis: null, issues: parsed.error.issues.map((i) => ({ path: i.path.map(String).join("."), message: i.message })) };
-  }
-  return { ...base, analysis: analyzeAttic(parsed.data), issues: [] };
-}
 
 export function createProjectsService(deps: { repo: ProjectsRepository; audit: Audit }) {
   const { repo } = deps;
@@ -94,11 +69,15 @@ export function createProjectsService(deps: { repo: ProjectsRepository; audit: A
       throw new AppError("stale-version", STALE_PROJECT_MESSAGE, 409, {}, { current });
     },
 
-    async analysis(actor: Actor, id: string): Promise<{ spaces: SpaceAnalysis[] }> {
+    /**
+     * Every space of the project through the core, on the compute pool: the answer's JSON text
+     * (`{ spaces: SpaceAnalysis[] }`), made on a worker thread so the request thread only sends it.
+     */
+    async analysisJson(actor: Actor, id: string): Promise<string> {
       const row = await repo.findWithSpaces(actor, id);
       if (!row) throw notFound("That project");
       const { spaces, ...project } = row;
-      return { spaces: spaces.map((space) => analyzeSpace(project, space)) };
+      return computePool().run("analyzeProject", { project, spaces });
     },
   };
 }

@@ -8,7 +8,8 @@ import { isDueToExpire, reminderDecision } from "../../../shared/proposals/lifec
 import { coolingOffNotice, thirdBusinessDayAfter } from "../../../shared/proposals/disclosures.ts";
 import { formatCents } from "../../../shared/pricing/index.ts";
 import type { ProposalSnapshot } from "../../../shared/proposals/types.ts";
-import { renderProposalPdf } from "./pdf/render-pdf.tsx";
+import { verifyPageUrl } from "../../../shared/proposals/public-paths.ts";
+import { renderProposalPdfOffThread as renderProposalPdf } from "./pdf/render-off-thread.ts";
 import { sha256Hex } from "./proposal-snapshot.ts";
 import type { CompanySettings, ProposalsRepository, Tenant } from "./proposals.repository.ts";
 
@@ -24,7 +25,8 @@ const RENDER_RETRIES = 3;
 
 interface RenderJob { companyId: string; proposalId: string; snapshotSha256: string }
 interface SignedJob { companyId: string; proposalId: string }
-interface ReminderJob { companyId: string; proposalId: string; to: string; link: string }
+/** `tokenId`: the link the reminder carries; a job queued before it was recorded has none. */
+interface ReminderJob { companyId: string; proposalId: string; to: string; link: string; tokenId?: string }
 interface MailJob { dedupeKey: string }
 
 export const pdfKey = (companyId: string, sha256: string) => `proposals/${companyId}/${sha256}.pdf`;
@@ -132,7 +134,7 @@ export function createProposalJobs(deps: {
     if (row.pdfSnapshotSha256 === data.snapshotSha256 && row.pdfKey) return;
     await repo.update(tenant, row.id, { renderStatus: "rendering", renderAttempts: row.renderAttempts + 1, renderUpdatedAt: deps.now() });
     try {
-      const bytes = await renderProposalPdf({ snapshot: row.snapshot, ...(await assets(row.snapshot)) });
+      const bytes = await renderProposalPdf({ snapshot: row.snapshot, ...(await assets(row.snapshot)), verifyUrl: verifyPageUrl(deps.appOrigin()) });
       const sha256 = sha256Hex(bytes);
       await storage.put(pdfKey(row.companyId, sha256), bytes, "application/pdf");
       const done = await repo.update(tenant, row.id, {
@@ -164,7 +166,7 @@ export function createProposalJobs(deps: {
           ? { ...row.snapshot, coolingOff: { isEnabled: true, notice: coolingOffNotice({ companyName: row.snapshot.company.name, companyAddress: row.snapshot.company.addressLine, transactionDate: signDate, cancelByDate: thirdBusinessDayAfter(signDate) }) } }
           : row.snapshot;
         const bytes = await renderProposalPdf({
-          snapshot, ...(await assets(row.snapshot)),
+          snapshot, ...(await assets(row.snapshot)), verifyUrl: verifyPageUrl(deps.appOrigin()),
           signed: {
             acceptance: a, signaturePngDataUrl: signatureUrl, originalPdfSha256: row.pdfSha256, snapshotSha256: row.snapshotSha256,
             events: events.map((e) => ({ event: e.event, at: e.at.toISOString(), ip: e.ip, userAgent: e.userAgent })),
@@ -212,6 +214,8 @@ export function createProposalJobs(deps: {
     const tenant = { companyId: data.companyId };
     const [row, company] = await Promise.all([repo.find(tenant, data.proposalId), repo.company(tenant)]);
     if (!row || !company) return;
+    // The link was replaced since the reminder was queued: never mail a link that no longer works.
+    if (data.tokenId && data.tokenId !== row.tokenId) return;
     const decision = reminderDecision(row, deps.now(), (company.settings as CompanySettings).reminderDays ?? null);
     if (!decision.shouldSend) return;
     const sent = await deliverOnce(tenant, row.id, `reminder:${row.id}`, "reminder", {
@@ -299,9 +303,9 @@ export function createProposalJobs(deps: {
     runReminder,
     enqueueRender,
     enqueueSignedRender,
-    async scheduleReminder(tenant: Tenant, proposalId: string, to: string, link: string, afterDays: number) {
+    async scheduleReminder(tenant: Tenant, proposalId: string, to: string, link: string, afterDays: number, tokenId: string) {
       await ready;
-      await boss.send(PROPOSAL_QUEUES.reminder, { companyId: tenant.companyId, proposalId, to, link } satisfies ReminderJob, { startAfter: Math.round(afterDays * 86_400), retryLimit: 3, singletonKey: `reminder:${proposalId}` });
+      await boss.send(PROPOSAL_QUEUES.reminder, { companyId: tenant.companyId, proposalId, to, link, tokenId } satisfies ReminderJob, { startAfter: Math.round(afterDays * 86_400), retryLimit: 3, singletonKey: `reminder:${proposalId}` });
     },
   };
 }

@@ -2,7 +2,7 @@ import { randomUUID } from "node:crypto";
 import type { EstimateConditions } from "../../../shared/airflow-model/schema.ts";
 import { and, asc, desc, eq, inArray, isNotNull, isNull, lt, lte, or, sql } from "drizzle-orm";
 import type { Database } from "../../db/client.ts";
-import { changeOrders, companies, customers, designOptions, photos, projects, proposalEvents, proposalMails, proposals, userSignatures, users } from "../../db/schema/index.ts";
+import { changeOrders, companies, customers, designOptions, photos, projects, proposalEvents, proposalMails, proposalRetiredLinks, proposals, userSignatures, users } from "../../db/schema/index.ts";
 import { scoped } from "../../lib/tenant.ts";
 import type { ProposalStatus } from "../../../shared/proposals/types.ts";
 import type { OutgoingEmail } from "../../lib/mailer.ts";
@@ -106,6 +106,59 @@ export function createProposalsRepository(db: Database) {
       return row ?? null;
     },
 
+    /** A link that was replaced by a newer one: why it stopped, and nothing else. */
+    async findRetiredLink(tokenHash: string): Promise<{ reason: "revoked" | "replaced" } | null> {
+      const [row] = await db.select({ reason: proposalRetiredLinks.reason }).from(proposalRetiredLinks).where(eq(proposalRetiredLinks.tokenHash, tokenHash)).limit(1);
+      return row ?? null;
+    },
+
+    /**
+     * A new homeowner link in place of the current one, in one transaction: the old token's hash is
+     * kept as retired (so its holder is told what happened), the proposal takes the new one (only if
+     * the link is still the one read: two clicks make one new link), the event is written and the
+     * e-mail with the new link goes into the outbox. Null when the link changed meanwhile.
+     */
+    reissueLink: (tenant: Tenant, old: ProposalRow, next: { tokenHash: string; tokenId: string }, reason: "revoked" | "replaced", event: NewProposalEvent, mail: OutboxMail) =>
+      db.transaction(async (tx) => {
+        const [row] = await tx.update(proposals)
+          .set({ tokenHash: next.tokenHash, tokenId: next.tokenId, tokenRevokedAt: null, updatedAt: new Date() })
+          .where(scoped(proposals, tenant, eq(proposals.id, old.id), eq(proposals.tokenHash, old.tokenHash!), isNull(proposals.supersededBy)))
+          .returning();
+        if (!row) return null;
+        await tx.insert(proposalRetiredLinks).values({ tokenHash: old.tokenHash!, companyId: tenant.companyId, proposalId: old.id, tokenId: old.tokenId, reason });
+        await tx.insert(proposalEvents).values({ ...event, companyId: tenant.companyId, proposalId: old.id });
+        await tx.insert(proposalMails).values(outboxRow(tenant, old.id, mail));
+        return row;
+      }),
+
+    /** The outbox e-mail that carried this link to the homeowner: a re-issued link's own, else the first sending's. */
+    async mailCarryingLink(tenant: Tenant, proposalId: string, tokenId: string | null): Promise<OutgoingEmail | null> {
+      const keys = [`send:${proposalId}`, ...(tokenId ? [`link:${tokenId}`] : [])];
+      const rows = await db.select({ key: proposalMails.dedupeKey, payload: proposalMails.payload }).from(proposalMails)
+        .where(and(eq(proposalMails.companyId, tenant.companyId), eq(proposalMails.proposalId, proposalId), inArray(proposalMails.dedupeKey, keys)));
+      const own = rows.find((r) => r.key.startsWith("link:")) ?? rows.find((r) => r.key.startsWith("send:"));
+      return own?.payload ?? null;
+    },
+
+    /**
+     * A resend: the e-mail and its "resent" event in one transaction, under the proposal row's lock,
+     * so parallel clicks queue one after another and each sees the one before. False (nothing
+     * written) when the last resend is younger than `minIntervalMs`: a double click, or a burst
+     * that would flood the homeowner's inbox, sends one e-mail.
+     */
+    queueResend: (tenant: Tenant, proposalId: string, mail: Omit<OutboxMail, "dedupeKey">, event: NewProposalEvent, now: Date, minIntervalMs: number): Promise<string | null> =>
+      db.transaction(async (tx) => {
+        const [locked] = await tx.select({ id: proposals.id }).from(proposals).where(scoped(proposals, tenant, eq(proposals.id, proposalId))).for("update");
+        if (!locked) return null;
+        const earlier = await tx.select({ at: proposalEvents.at }).from(proposalEvents)
+          .where(scoped(proposalEvents, tenant, eq(proposalEvents.proposalId, proposalId), eq(proposalEvents.event, "resent"))).orderBy(desc(proposalEvents.at));
+        if (earlier[0] && now.getTime() - earlier[0].at.getTime() < minIntervalMs) return null;
+        const dedupeKey = `resend:${proposalId}:${earlier.length + 1}`;
+        await tx.insert(proposalMails).values(outboxRow(tenant, proposalId, { ...mail, dedupeKey }));
+        await tx.insert(proposalEvents).values({ ...event, at: now, companyId: tenant.companyId, proposalId });
+        return dedupeKey;
+      }),
+
     listForProject: (tenant: Tenant, projectId: string) =>
       db.select().from(proposals).where(scoped(proposals, tenant, eq(proposals.projectId, projectId))).orderBy(desc(proposals.createdAt), desc(proposals.revision)),
 
@@ -190,19 +243,27 @@ export function createProposalsRepository(db: Database) {
     events: (tenant: Tenant, proposalId: string) =>
       db.select().from(proposalEvents).where(scoped(proposalEvents, tenant, eq(proposalEvents.proposalId, proposalId))).orderBy(asc(proposalEvents.id)),
 
-    /** Is this hash one of a sent change order's PDF? Its accepted revision's number comes along. */
+    /** Is this hash one of a sent change order's PDF? Its accepted revision's number and the company's name as printed come along. */
     async findChangeOrderByPdfHash(sha256: string) {
       const [row] = await db
-        .select({ number: changeOrders.number, status: changeOrders.status, sentAt: changeOrders.sentAt, decidedAt: changeOrders.decidedAt, revision: proposals.revision })
+        .select({
+          number: changeOrders.number, status: changeOrders.status, sentAt: changeOrders.sentAt, decidedAt: changeOrders.decidedAt, revision: proposals.revision,
+          companyName: sql<string | null>`${changeOrders.snapshot}->'company'->>'name'`,
+        })
         .from(changeOrders).innerJoin(proposals, eq(proposals.id, changeOrders.proposalId))
         .where(eq(changeOrders.pdfSha256, sha256)).limit(1);
       return row ?? null;
     },
 
-    /** Is this hash one of a recorded PDF (as sent, or signed)? */
+    /** Is this hash one of a recorded PDF (as sent, or signed)? With what the public check may say about it. */
     async findByPdfHash(sha256: string) {
       const [row] = await db
-        .select({ id: proposals.id, companyId: proposals.companyId, revision: proposals.revision, status: proposals.status, pdfSha256: proposals.pdfSha256, signedPdfSha256: proposals.signedPdfSha256, sentAt: proposals.sentAt, decidedAt: proposals.decidedAt })
+        .select({
+          revision: proposals.revision, status: proposals.status, pdfSha256: proposals.pdfSha256, signedPdfSha256: proposals.signedPdfSha256,
+          sentAt: proposals.sentAt, decidedAt: proposals.decidedAt, supersededBy: proposals.supersededBy,
+          signedAt: sql<string | null>`${proposals.acceptance}->>'acceptedAt'`,
+          companyName: sql<string | null>`${proposals.snapshot}->'company'->>'name'`,
+        })
         .from(proposals)
         .where(sql`${proposals.status} <> 'draft' and (${proposals.pdfSha256} = ${sha256} or ${proposals.signedPdfSha256} = ${sha256})`)
         .limit(1);

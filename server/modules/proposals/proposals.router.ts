@@ -103,6 +103,20 @@ export function proposalsRouter(service: ProposalsService, company: CompanyServi
       method: "post", path: "/proposals/:id/revoke-link", access: "proposals:send", idParams: ["id"],
       handler: async (req, res) => { res.json({ proposal: await service.revokeLink(actorOf(req), proposalId(req), metaOf(req)) }); },
     },
+    {
+      method: "post", path: "/proposals/:id/resend", access: "proposals:send", idParams: ["id"],
+      handler: async (req, res) => {
+        const id = proposalId(req);
+        res.json(await service.resend(actorOf(req), id, metaOf(req), parse(SendSchema, req.body ?? {})));
+      },
+    },
+    {
+      method: "post", path: "/proposals/:id/reissue-link", access: "proposals:send", idParams: ["id"],
+      handler: async (req, res) => {
+        const id = proposalId(req);
+        res.json(await service.reissueLink(actorOf(req), id, metaOf(req), parse(SendSchema, req.body ?? {})));
+      },
+    },
   ]);
 }
 

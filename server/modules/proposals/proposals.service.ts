@@ -23,12 +23,24 @@ import { checkedSignaturePng } from "./signature-image.ts";
 import { THUMB_CONTENT_TYPE } from "../photos/photos.service.ts";
 
 const DEFAULT_VALID_DAYS = 30;
+/** A second resend within this time sends nothing (a double click; a burst would flood the homeowner's inbox). Common practice. */
+export const RESEND_MIN_INTERVAL_MS = 60_000;
 const EDITABLE = ["draft"] as const;
 
 const SIGNED_LOCKED = "The homeowner accepted this revision, so it is read-only. To change the signed work, draft a change order.";
 const signedLocked = () => conflict(SIGNED_LOCKED, "accepted-locked");
 
 const invalid = (field: string, message: string) => new AppError("invalid-input", `Please check ${field}: ${message}`, 400, { [field]: message });
+
+/**
+ * A link the company withdrew or replaced: what happened, in plain words, and nothing of the
+ * proposal (410, like a replaced revision). Whatever was signed through it stands.
+ */
+function linkGone(reason: "revoked" | "replaced"): AppError {
+  return reason === "revoked"
+    ? new AppError("link-revoked", "The company that sent this link has withdrawn it, so it no longer opens the proposal. If you still need it, contact them: they can send you a new link. Anything you already signed stays as it was.", 410)
+    : new AppError("link-replaced", "This link was replaced by a new link, sent to you by e-mail. Please use the link in the newest e-mail from the company, or contact them. Anything you already signed stays as it was.", 410);
+}
 
 /** What staff see of a proposal: never the token hash or storage keys. */
 export function presentProposal(p: ProposalRow) {
@@ -75,6 +87,23 @@ export function publicView(p: ProposalRow, snapshot: ProposalSnapshot) {
     esign: snapshot.esign,
   };
 }
+
+/** What the public PDF check answers (GET and POST /api/public/verify). */
+export type VerifyAnswer =
+  | { sha256: string; matches: false }
+  | {
+      sha256: string; matches: true;
+      document: {
+        /** "sent": the revision as mailed, before any signature; "signed": the copy with the signature and certificate. */
+        kind: "sent" | "signed" | "change-order";
+        companyName: string; revision: number; changeOrderNumber: number | null;
+        status: string; sentAt: Date | null;
+        /** When the homeowner signed (UTC, ISO 8601), or null while unsigned. */
+        signedAt: string | null; decidedAt: Date | null;
+        /** A newer revision of the proposal replaced this one. */
+        isSuperseded: boolean;
+      };
+    };
 
 export function createProposalsService(deps: {
   repo: ProposalsRepository; projects: ProjectsRepository; spaces: SpacesRepository; options: OptionsRepository; catalog: CatalogRepository;
@@ -155,6 +184,33 @@ export function createProposalsService(deps: {
         throw err;
       }
     }));
+  }
+
+  /**
+   * Whom the homeowner's e-mail goes to: the customer's address, or the one sales typed now, which
+   * becomes the customer's address from then on (one record, no second copy to drift).
+   */
+  async function recipientFor(actor: Actor, p: ProposalRow, input: SendInput, meta: RequestMeta): Promise<{ id: string; email: string }> {
+    const project = await requireProject(actor, p.projectId);
+    let customer = await repo.customer(actor, project.customerId);
+    if (customer && input.recipientEmail && input.recipientEmail !== customer.email) {
+      customer = await repo.setCustomerEmail(actor, customer.id, input.recipientEmail);
+      await repo.addEvent(actor, p.id, { event: "recipient-changed", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, detail: { to: input.recipientEmail } });
+    }
+    if (!customer?.email) throw new AppError("customer-email-missing", "The customer has no e-mail address: enter it in the send dialog.", 400, { recipientEmail: "Enter the homeowner's e-mail address." });
+    return { id: customer.id, email: customer.email };
+  }
+
+  /** Why this revision's link can't be sent again or replaced, or null when it can. */
+  function linkChangeRefusal(p: ProposalRow): AppError | null {
+    if (!p.tokenHash || p.status === "draft") return conflict("This proposal has not been sent, so it has no link yet. Send it first.", "no-link");
+    if (p.supersededBy) return new AppError("superseded", "A newer revision of this proposal exists; send that one instead.", 409, {}, { supersededBy: p.supersededBy });
+    if (p.status === "declined") return conflict("The homeowner declined this proposal. To offer the work again, change it to make a new revision and send that.", "already-declined");
+    // Expiry by date, whatever the revocation: a new link to an expired proposal would not open it either.
+    if (p.status === "expired" || linkState({ ...p, tokenRevokedAt: null }, deps.now()) === "expired") {
+      return conflict("This proposal has expired. Change it (with a later validity date) to make a new revision and send that.", "expired");
+    }
+    return null;
   }
 
   async function checkPhotos(actor: Actor, projectId: string, ids: string[]) {
@@ -286,14 +342,7 @@ export function createProposalsService(deps: {
       if (!seller || (!seller.signatureTyped && !seller.signatureDataUrl)) {
         throw new AppError("signature-required", "Add your signature to your profile before sending (typed or drawn).", 409);
       }
-      const project = await requireProject(actor, p.projectId);
-      let customer = await repo.customer(actor, project.customerId);
-      if (customer && input.recipientEmail && input.recipientEmail !== customer.email) {
-        // The address sales typed at sending is the customer's address from now on (one record, no second copy to drift).
-        customer = await repo.setCustomerEmail(actor, customer.id, input.recipientEmail);
-        await repo.addEvent(actor, id, { event: "recipient-changed", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, detail: { to: input.recipientEmail } });
-      }
-      if (!customer?.email) throw new AppError("customer-email-missing", "The customer has no e-mail address: enter it in the send dialog.", 400, { recipientEmail: "Enter the homeowner's e-mail address." });
+      const customer = await recipientFor(actor, p, input, meta);
 
       const snapshot = await snapshotNow(actor, p, { userId: seller.id, name: seller.name, email: seller.email, signature: { typed: seller.signatureTyped, pngDataUrl: seller.signatureDataUrl } });
       const sha = snapshotSha256(snapshot);
@@ -321,7 +370,7 @@ export function createProposalsService(deps: {
       await deps.jobs.nudgeMail(dedupeKey);
       const company = await repo.company(actor);
       const reminderDays = (company?.settings as CompanySettings | undefined)?.reminderDays ?? null;
-      if (reminderDays) await deps.jobs.scheduleReminder(actor, id, customer.email, link, reminderDays);
+      if (reminderDays) await deps.jobs.scheduleReminder(actor, id, customer.email, link, reminderDays, tokenId);
       return { proposal: presentProposal(sent), link };
     },
 
@@ -334,14 +383,84 @@ export function createProposalsService(deps: {
       return presentProposal(updated!);
     },
 
+    /**
+     * The same link in a new e-mail (the first one was lost, or went to a wrong address): a copy of
+     * the e-mail that carried the current link, through the outbox, logged as "resent". Two clicks
+     * at once send one e-mail. Only while the homeowner can still answer.
+     */
+    async resend(actor: Actor, id: string, meta: RequestMeta, input: SendInput = {}) {
+      const p = await requireProposal(actor, id);
+      const refusal = linkChangeRefusal(p);
+      if (refusal) throw refusal;
+      if (p.status === "accepted") throw conflict("The homeowner has signed this proposal. To give them a link to what they signed, issue a new link.", "already-accepted");
+      if (p.tokenRevokedAt) throw conflict("This link was revoked, so it can't be sent again. Issue a new link instead: the homeowner gets it by e-mail.", "link-revoked");
+      const carried = await repo.mailCarryingLink(actor, p.id, p.tokenId);
+      if (!carried) throw conflict("The e-mail that carried this link was not kept, so it can't be sent again as it was. Issue a new link instead.", "no-mail");
+      const recipient = await recipientFor(actor, p, input, meta);
+      const seller = await repo.user(actor, actor.userId);
+      const dedupeKey = await repo.queueResend(actor, id, {
+        kind: "proposal-resend",
+        message: {
+          ...carried, to: recipient.email, subject: `Sent again: ${carried.subject}`,
+          text: `${seller?.name ?? actor.name} asked us to send this again. The link is the same one as in the first e-mail.\n\n${carried.text}`,
+        },
+      }, { event: "resent", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, tokenId: p.tokenId, snapshotSha256: p.snapshotSha256, detail: { to: recipient.email, revision: p.revision } }, deps.now(), RESEND_MIN_INTERVAL_MS);
+      // Committed; should the nudge fail, the recovery sweep sends it.
+      if (dedupeKey) await deps.jobs.nudgeMail(dedupeKey).catch(() => {});
+      return { proposal: presentProposal(await requireProposal(actor, id)), isQueued: dedupeKey !== null };
+    },
+
+    /**
+     * A new link in place of the current one (revoked or not): the old one stops at once and tells
+     * its holder it was replaced; the new one is mailed through the outbox. After acceptance the new
+     * link shows what was signed, read-only: the acceptance, the signed PDF and the crew's release
+     * are not touched (they are not link columns, and the database refuses changes to them).
+     */
+    async reissueLink(actor: Actor, id: string, meta: RequestMeta, input: SendInput = {}) {
+      const p = await requireProposal(actor, id);
+      const refusal = linkChangeRefusal(p);
+      if (refusal) throw refusal;
+      const recipient = await recipientFor(actor, p, input, meta);
+      const snapshot = p.snapshot!;
+      const { token, tokenHash } = newToken();
+      const tokenId = randomUUID();
+      const link = `${deps.appOrigin()}/p/${token}`;
+      const dedupeKey = `link:${tokenId}`;
+      const isSigned = p.status === "accepted";
+      const closing = `${snapshot.company.name}${snapshot.company.phone ? `\n${snapshot.company.phone}` : ""}`;
+      const updated = await repo.reissueLink(actor, p, { tokenHash, tokenId }, p.tokenRevokedAt ? "revoked" : "replaced", {
+        event: "link-reissued", userId: actor.userId, ip: meta.ip, userAgent: meta.userAgent, tokenId, snapshotSha256: p.snapshotSha256,
+        detail: { previousTokenId: p.tokenId, to: recipient.email, revision: p.revision },
+      }, {
+        dedupeKey, kind: "proposal-link",
+        message: isSigned
+          ? {
+              companyId: actor.companyId, to: recipient.email, subject: `A new link to your signed proposal from ${snapshot.company.name}`,
+              text: `Hello ${snapshot.customer.firstName},\n\n${snapshot.company.name} has sent you a new link to the proposal you signed for ${snapshot.site.address}. The link you had before no longer works. What you signed is unchanged.\n\nOpen it here: ${link}\n\nYou can read what you signed and download your signed copy on that page.\n\n${closing}`,
+            }
+          : {
+              companyId: actor.companyId, to: recipient.email, subject: `A new link to your proposal from ${snapshot.company.name}`,
+              text: `Hello ${snapshot.customer.firstName},\n\n${snapshot.company.name} has sent you a new link to your attic ventilation proposal for ${snapshot.site.address}. The link you had before no longer works; please use this one (valid until ${p.validUntil}):\n\n${link}\n\nYou can read the proposal, download the PDF and accept or decline on that page.\n\n${closing}`,
+            },
+      });
+      if (!updated) throw conflict("The link changed meanwhile (someone else replaced it, or a newer revision was made). Reload and try again.", "stale-version");
+      await deps.jobs.nudgeMail(dedupeKey).catch(() => {});
+      return { proposal: presentProposal(updated), link };
+    },
+
     // ——— the homeowner's link ———
 
-    /** The proposal behind a token, or the right refusal: 404 unknown or revoked, 410 superseded or expired. */
+    /** The proposal behind a token, or the right refusal: 404 unknown; 410 revoked, replaced by a new link, superseded or expired. */
     async byToken(token: string): Promise<ProposalRow> {
-      const p = token.length >= 20 && token.length <= 100 ? await repo.findByTokenHash(hashToken(token)) : null;
-      if (!p || !p.snapshot) throw new AppError("not-found", "This proposal link is not valid. Please check the link or contact the company that sent it.", 404);
+      const tokenHash = token.length >= 20 && token.length <= 100 ? hashToken(token) : null;
+      const p = tokenHash ? await repo.findByTokenHash(tokenHash) : null;
+      if (!p || !p.snapshot) {
+        const retired = tokenHash ? await repo.findRetiredLink(tokenHash) : null;
+        if (retired) throw linkGone(retired.reason);
+        throw new AppError("not-found", "This proposal link is not valid. Please check the link or contact the company that sent it.", 404);
+      }
       const state = linkState(p, deps.now());
-      if (state === "revoked") throw new AppError("not-found", "This proposal link is not valid. Please check the link or contact the company that sent it.", 404);
+      if (state === "revoked") throw linkGone("revoked");
       if (state === "superseded") throw new AppError("superseded", "This proposal has been replaced by a newer revision. Look for the newer e-mail, or contact the company that sent it.", 410, {}, { supersededByRevision: true });
       if (state === "expired") throw new AppError("expired", "This proposal has expired. Contact the company that sent it for a new one.", 410);
       return p;
@@ -426,20 +545,30 @@ export function createProposalsService(deps: {
       return publicView(updated, p.snapshot!);
     },
 
-    /** Does this SHA-256 belong to a PDF we recorded (as sent, or signed)? Says nothing else about it. */
-    async verify(sha256: string) {
+    /**
+     * Does this SHA-256 belong to a PDF we recorded (a revision as sent or signed, or a change order)?
+     * A match tells what the file itself already shows (company, revision or change order) and where
+     * it stands; no match tells nothing but that. Only someone holding the file knows its hash.
+     */
+    async verify(sha256: string): Promise<VerifyAnswer> {
       const hit = await repo.findByPdfHash(sha256);
-      if (!hit) {
-        const change = await repo.findChangeOrderByPdfHash(sha256);
-        if (!change) return { sha256, matches: false as const };
+      if (hit) {
         return {
-          sha256, matches: true as const,
-          document: { kind: "change-order" as const, changeOrderNumber: change.number, revision: change.revision, status: change.status, sentAt: change.sentAt, decidedAt: change.decidedAt },
+          sha256, matches: true,
+          document: {
+            kind: hit.signedPdfSha256 === sha256 ? "signed" : "sent", companyName: hit.companyName ?? "", revision: hit.revision, changeOrderNumber: null,
+            status: hit.status, sentAt: hit.sentAt, signedAt: hit.status === "accepted" ? hit.signedAt : null, decidedAt: hit.decidedAt, isSuperseded: hit.supersededBy !== null,
+          },
         };
       }
+      const change = await repo.findChangeOrderByPdfHash(sha256);
+      if (!change) return { sha256, matches: false };
       return {
-        sha256, matches: true as const,
-        document: { kind: hit.signedPdfSha256 === sha256 ? "signed" : "sent", revision: hit.revision, status: hit.status, sentAt: hit.sentAt, decidedAt: hit.decidedAt },
+        sha256, matches: true,
+        document: {
+          kind: "change-order", companyName: change.companyName ?? "", revision: change.revision, changeOrderNumber: change.number,
+          status: change.status, sentAt: change.sentAt, signedAt: change.status === "signed" && change.decidedAt ? change.decidedAt.toISOString() : null, decidedAt: change.decidedAt, isSuperseded: false,
+        },
       };
     },
 

@@ -14,7 +14,7 @@ const ACCENT = "#1f5c4a";
 const s = StyleSheet.create({
   page: { paddingTop: 48, paddingBottom: 56, paddingHorizontal: 50, fontFamily: PLEX_FAMILIES as unknown as string, fontSize: 10, color: INK },
   footer: { position: "absolute", bottom: 24, left: 50, right: 50, flexDirection: "row", justifyContent: "space-between", fontSize: 8, color: MUTED, borderTopWidth: 0.5, borderTopColor: RULE, paddingTop: 6 },
-  footerText: { lineHeight: "11pt" },
+  footerText: { flex: 1, lineHeight: "11pt" },
   band: { borderBottomWidth: 2, borderBottomColor: ACCENT, paddingBottom: 12, marginBottom: 16 },
   company: { fontSize: 16, fontWeight: 700, color: ACCENT, lineHeight: "21pt" },
   small: { fontSize: 8.5, color: MUTED, lineHeight: "12pt" },
@@ -37,7 +37,7 @@ export function ChangeOrderDocument({ snapshot: c, acceptance, verifyUrl }: { sn
     <Document title={`Change order ${c.number} — ${c.site.address}`} author={c.company.name} creator="Eavesight" producer="Eavesight">
       <Page size="LETTER" style={s.page}>
         <View style={s.footer} fixed>
-          <Text style={s.footerText}>Change order {c.number} · check this copy at {verifyUrl}</Text>
+          <Text style={s.footerText}>Change order {c.number} · check a copy at {verifyUrl}</Text>
           <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
         </View>
         <View style={s.band}>
@@ -84,8 +84,17 @@ export function ChangeOrderDocument({ snapshot: c, acceptance, verifyUrl }: { sn
   );
 }
 
-/** The change order as PDF bytes: one short page, a few hundred milliseconds. */
-export async function renderChangeOrderPdf(input: { snapshot: ChangeOrderSnapshot; acceptance: ChangeOrderAcceptance | null; verifyUrl: string }): Promise<Buffer> {
+export interface ChangeOrderRenderInput {
+  snapshot: ChangeOrderSnapshot;
+  acceptance: ChangeOrderAcceptance | null;
+  verifyUrl: string;
+}
+
+/**
+ * The change order as PDF bytes, on the calling thread: one short page, a few hundred milliseconds.
+ * The server calls it on a compute-pool thread (render-off-thread.ts).
+ */
+export async function renderChangeOrderPdf(input: ChangeOrderRenderInput): Promise<Buffer> {
   registerFonts();
   const bytes = await renderToBuffer(<ChangeOrderDocument {...input} />);
   await new Promise((resolve) => setImmediate(resolve));

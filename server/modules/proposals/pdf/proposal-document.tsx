@@ -23,7 +23,9 @@ const CONTENT_WIDTH_PT = 512;
 const s = StyleSheet.create({
   page: { paddingTop: 48, paddingBottom: 56, paddingHorizontal: 50, fontFamily: PLEX_FAMILIES as unknown as string, fontSize: 10, color: INK },
   body: { lineHeight: "14pt" },
-  footer: { position: "absolute", bottom: 24, left: 50, right: 50, flexDirection: "row", justifyContent: "space-between", fontSize: 8, color: MUTED, borderTopWidth: 0.5, borderTopColor: RULE, paddingTop: 6 },
+  footer: { position: "absolute", bottom: 24, left: 50, right: 50, flexDirection: "row", justifyContent: "space-between", gap: 12, fontSize: 8, color: MUTED, borderTopWidth: 0.5, borderTopColor: RULE, paddingTop: 6 },
+  // Wraps to a second line with a long origin; the page's bottom padding leaves room for two.
+  footerLeft: { flex: 1, lineHeight: "11pt" },
   coverBand: { flexDirection: "row", justifyContent: "space-between", alignItems: "flex-start", borderBottomWidth: 2, borderBottomColor: ACCENT, paddingBottom: 14, marginBottom: 18 },
   company: { fontSize: 18, fontWeight: 700, color: ACCENT, lineHeight: "23pt", marginBottom: 2 },
   small: { fontSize: 8.5, color: MUTED, lineHeight: "12pt" },
@@ -133,6 +135,8 @@ export function pictureNotes(pictures: readonly AirflowPicture[]): PictureNotes 
 const PICTURE_MAX_HEIGHT_PT = 160;
 /** The figures printed beside an option's "after" picture. */
 const BESIDE_WIDTH_PT = 190;
+/** Notes kept in one block with their picture; more flow after it. */
+const PICTURE_NOTES_KEPT = 8;
 const pictureWidthPt = (picture: AirflowPicture) => Math.min(CONTENT_WIDTH_PT, (PICTURE_MAX_HEIGHT_PT * picture.viewBox.widthFt) / picture.viewBox.heightFt);
 
 /** The pictures in the order the document prints them. */
@@ -144,10 +148,16 @@ function Picture({ space, heading, sectionTitle, notes, beside }: { space: Snaps
   if (!space.picture) return null;
   const own = notes.get(space.picture) ?? { captions: [], legend: [] };
   const svg = <AirflowSvg picture={space.picture} widthPt={beside ? Math.min(pictureWidthPt(space.picture), CONTENT_WIDTH_PT - BESIDE_WIDTH_PT - 12) : pictureWidthPt(space.picture)} />;
+  // The notes printed right under the picture, in one block with it; on a crowded attic the rest
+  // follow as running text (a block taller than a page could not move to the next one whole).
+  const notesText = [...own.captions, ...own.legend];
+  const kept = notesText.slice(0, PICTURE_NOTES_KEPT);
+  const flowing = notesText.slice(PICTURE_NOTES_KEPT);
   return (
-    // One block, the full width of the page: a page never starts with a picture's notes cut off from
-    // it, and a section's title that opens with the picture never ends a page alone.
-    <View style={{ marginBottom: 6, width: CONTENT_WIDTH_PT }} wrap={false}>
+    <>
+    {/* One block, the full width of the page: a page never starts with a picture's notes cut off
+        from it, and a section's title that opens with the picture never ends a page alone. */}
+    <View style={{ marginBottom: flowing.length ? 0 : 6, width: CONTENT_WIDTH_PT }} wrap={false}>
       {sectionTitle ? <Text style={s.h2}>{sectionTitle}</Text> : null}
       <Text style={s.h3}>{heading}</Text>
       {beside ? (
@@ -158,13 +168,14 @@ function Picture({ space, heading, sectionTitle, notes, beside }: { space: Snaps
       ) : (
         svg
       )}
-      {own.captions.map((c, i) => (
-        <Text key={`c${i}`} style={s.caption}>{c}</Text>
-      ))}
-      {own.legend.map((l, i) => (
-        <Text key={`l${i}`} style={s.caption}>{l}</Text>
+      {kept.map((c, i) => (
+        <Text key={i} style={s.caption}>{c}</Text>
       ))}
     </View>
+    {flowing.map((c, i) => (
+      <Text key={i} style={[s.caption, i === flowing.length - 1 ? { marginBottom: 6 } : {}]}>{c}</Text>
+    ))}
+    </>
   );
 }
 
@@ -188,7 +199,7 @@ function AtAGlance({ snapshot }: { snapshot: ProposalSnapshot }) {
       {snapshot.options.map((o, i) => {
         const fixes = optionFixes(snapshot.before, o);
         return (
-          <View key={o.id} style={s.glance} wrap={false}>
+          <View key={o.id} style={s.glance} wrap={!isShort(o.name, fixes.fixed.join("; "), fixes.left.join("; "))}>
             <View style={{ flexDirection: "row", justifyContent: "space-between", gap: 12 }}>
               <Text style={[s.body, { fontWeight: 700, flex: 1 }]}>Option {i + 1}: {o.name}</Text>
               <Text style={[s.body, { fontWeight: 700 }]}>{o.price ? formatCents(o.price.totalCents) : "Price to be confirmed"}</Text>
@@ -204,16 +215,29 @@ function AtAGlance({ snapshot }: { snapshot: ProposalSnapshot }) {
   );
 }
 
+/** Text short enough (about 15 lines of body type) to keep as one block that moves to the next page whole. */
+const isShort = (...texts: string[]) => texts.reduce((n, t) => n + t.length, 0) <= 1_400;
+
+/**
+ * Whether an option's heading, notes, scope and price surely fit on one page: at most about 30
+ * printed lines of scope and notes (a line holds about 95 characters of body type) besides the price.
+ */
+function fitsOnAPage(option: SnapshotOption): boolean {
+  const lines = [homeownerNotes(option.notes) ?? "", ...unique(option.scope)].reduce((n, text) => n + Math.max(1, Math.ceil(text.length / 95)), 0);
+  return lines <= 30;
+}
+
 function OptionSection({ option, index, notes }: { option: SnapshotOption; index: number; notes: PictureNotes }) {
   const price = option.price;
   return (
     // Options follow on from each other: an option starts a page only when its heading, scope and
-    // price don't fit on the one before (they move as one block), so two options fit in 5 pages.
+    // price don't fit on the one before (they move as one block), so two options fit in 5 pages. A
+    // block longer than a page can't move whole: a long scope flows, its heading kept with it.
     // (A fragment, not a View: react-pdf 4 fails on a View whose first child, unbreakable, moves to
     // the next page with a picture in it: "unsupported number: Infinity".)
     <>
-      <View wrap={false} style={{ marginTop: 6 }}>
-      <Text style={s.h2}>Option {index + 1}: {option.name}</Text>
+      <View wrap={!fitsOnAPage(option)} style={{ marginTop: 6 }}>
+      <Text style={s.h2} minPresenceAhead={90}>Option {index + 1}: {option.name}</Text>
       {homeownerNotes(option.notes) ? <Text style={s.para}>{homeownerNotes(option.notes)}</Text> : null}
       <Text style={s.h3}>What we would do</Text>
       <Bullets items={unique(option.scope)} />
@@ -276,8 +300,8 @@ function SpaceNotes({ space, seen }: { space: SnapshotSpace; seen: Set<string> }
     <View style={{ marginTop: 6 }}>
       <Text style={s.h3} minPresenceAhead={40}>The rules and the arithmetic</Text>
       {reasons.map((r, i) => <Text key={`r${i}`} style={s.note}>{r}</Text>)}
-      {details.map((f) => (
-        <Text key={f.code} style={s.note}>
+      {details.map((f, i) => (
+        <Text key={`${f.code}-${i}`} style={s.note}>
           <Text style={{ fontWeight: 600 }}>{f.title}. </Text>
           {f.detail}
         </Text>
@@ -316,11 +340,12 @@ export interface SignedPart {
 }
 
 /** The whole proposal; with `signed`, the homeowner's signature and a signing certificate page. */
-export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed }: {
+export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed, verifyUrl }: {
   snapshot: ProposalSnapshot;
   logoDataUrl: string | null;
   photoDataUrls: Record<string, string>;
   signed?: SignedPart;
+  verifyUrl: string;
 }) {
   const c = snapshot.company;
   const footerLeft = `${c.name} · Proposal ${snapshot.proposalId.slice(0, 8)} rev. ${snapshot.revision}`;
@@ -334,7 +359,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
     <Document title={`Proposal for ${snapshot.customer.name}`} author={c.name} subject="Attic ventilation proposal" creator="Eavesight" producer="Eavesight">
       <Page size="LETTER" style={s.page}>
         <View style={s.footer} fixed>
-          <Text style={s.body}>{footerLeft}</Text>
+          <Text style={s.footerLeft}>{footerLeft} · check a copy at {verifyUrl}</Text>
           <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
         </View>
 
@@ -381,7 +406,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
         <Text style={s.h2} minPresenceAhead={90}>What we found</Text>
         {snapshot.explanation[0] ? <Text style={s.para}>{snapshot.explanation[0]}</Text> : null}
         {findings.map((f, i) => (
-          <View key={i} style={[s.finding, { borderLeftColor: severityColour[f.severity] }]} wrap={false}>
+          <View key={i} style={[s.finding, { borderLeftColor: severityColour[f.severity] }]} wrap={!isShort(f.title, f.spaces.join(", "), f.plain ?? "")}>
             <Text style={[s.body, { fontWeight: 600 }]}>{f.title}{snapshot.before.length > 1 ? ` (${f.spaces.join(", ")})` : ""}</Text>
             {f.plain ? <Text style={s.body}>{f.plain}</Text> : null}
           </View>
@@ -480,7 +505,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
       {signed ? (
         <Page size="LETTER" style={s.page}>
           <View style={s.footer} fixed>
-            <Text style={s.body}>{footerLeft} · signing certificate</Text>
+            <Text style={s.footerLeft}>{footerLeft} · signing certificate · check a copy at {verifyUrl}</Text>
             <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
           </View>
           <Text style={s.title}>Signing certificate</Text>
@@ -507,7 +532,7 @@ export function ProposalDocument({ snapshot, logoDataUrl, photoDataUrls, signed 
               <Text style={s.cell}>{e.at}{e.ip ? ` · ${e.ip}` : ""}</Text>
             </View>
           ))}
-          <Text style={[s.small, { marginTop: 10 }]}>The fingerprint of this signed PDF is recorded when it is made; verify a copy at the verification page of {c.name}'s proposal service.</Text>
+          <Text style={[s.para, { marginTop: 10 }]}>Check a copy of this signed PDF at {verifyUrl}: choose the file there and the page says whether it is this signed original, unchanged. The fingerprint of this PDF is recorded when it is made.</Text>
         </Page>
       ) : null}
     </Document>

@@ -10,6 +10,8 @@ export interface RenderInput {
   logoDataUrl: string | null;
   photoDataUrls: Record<string, string>;
   signed?: SignedPart;
+  /** The public check's address (from APP_ORIGIN), printed in every footer and on the certificate. */
+  verifyUrl: string;
 }
 
 /** The proposal as PDF bytes. CPU work of a second or so: only ever called from a job worker. */

@@ -1,4 +1,5 @@
 import { useQuery } from "@tanstack/react-query";
+import { PROPOSAL_LIMITS } from "@shared/proposals/limits";
 import { useState, type FormEvent } from "react";
 import { EstimateConditionsSchema, SEASONS, type EstimateConditions, type Season } from "@shared/airflow-model/index";
 import type { CompanyProfilePatch } from "@shared/proposals/schemas";
@@ -331,6 +332,7 @@ function ProfileForm({ company }: { company: CompanyProfile }) {
             hint="Copied into each new proposal, where it can be changed: payment schedule, warranty, what is not included."
             rows={6}
             isOptional
+            maxLength={PROPOSAL_LIMITS.maxTermsChars}
             error={errors.defaultTerms}
             {...text("defaultTerms")}
           />

@@ -2,7 +2,7 @@ import { Button } from "@/components/ui/button";
 import { InfoIcon, WarningIcon } from "@/components/ui/icons";
 import { PublicHeader } from "./public-header";
 
-export type LinkProblemKind = "superseded" | "expired" | "not-found" | "rate-limited" | "unreachable";
+export type LinkProblemKind = "superseded" | "revoked" | "replaced" | "expired" | "not-found" | "rate-limited" | "unreachable";
 
 const WORDS: Record<LinkProblemKind, { title: string; body: string[] }> = {
   superseded: {
@@ -10,6 +10,20 @@ const WORDS: Record<LinkProblemKind, { title: string; body: string[] }> = {
     body: [
       "The company updated the proposal after sending this link, so this copy is no longer the one to sign.",
       "Look for a newer e-mail from them, or ask them for the new link.",
+    ],
+  },
+  revoked: {
+    title: "This link was withdrawn",
+    body: [
+      "The company that sent it has withdrawn this link, so it no longer opens the proposal.",
+      "If you still need it, contact them: they can send you a new link. Anything you already signed stays as it was.",
+    ],
+  },
+  replaced: {
+    title: "This link was replaced by a new one",
+    body: [
+      "The company sent you a new link by e-mail, so this one no longer opens the proposal.",
+      "Use the link in their newest e-mail, or contact them. Anything you already signed stays as it was.",
     ],
   },
   expired: {
@@ -33,7 +47,7 @@ const WORDS: Record<LinkProblemKind, { title: string; body: string[] }> = {
 /** A friendly page for a link that doesn't open a proposal: why, and what to do next. */
 export function LinkProblem({ kind, onRetry }: { kind: LinkProblemKind; onRetry?: () => void }) {
   const words = WORDS[kind];
-  const Icon = kind === "superseded" ? InfoIcon : WarningIcon;
+  const Icon = kind === "superseded" || kind === "replaced" ? InfoIcon : WarningIcon;
   return (
     <div className="min-h-dvh bg-ink-25">
       <PublicHeader companyName={null} />

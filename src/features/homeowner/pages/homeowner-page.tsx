@@ -3,6 +3,7 @@ import { useQuery } from "@tanstack/react-query";
 import { AirflowPicture } from "@/components/airflow/airflow-picture";
 import { Alert } from "@/components/ui/alert";
 import { LoadingBlock } from "@/components/ui/spinner";
+import { paths } from "@/config/paths";
 import { isApiError } from "@/lib/api-client";
 import { formatDate } from "@/lib/format-date";
 import { publicLogoSrc } from "../api/get-public-proposal";
@@ -24,7 +25,12 @@ export type { RenderDeposit };
 
 function problemOf(error: unknown): LinkProblemKind {
   if (!isApiError(error)) return "unreachable";
-  if (error.status === 410) return error.code === "superseded" ? "superseded" : "expired";
+  if (error.status === 410) {
+    if (error.code === "superseded") return "superseded";
+    if (error.code === "link-revoked") return "revoked";
+    if (error.code === "link-replaced") return "replaced";
+    return "expired";
+  }
   if (error.status === 404) return "not-found";
   if (error.status === 429) return "rate-limited";
   return "unreachable";
@@ -219,6 +225,12 @@ export function HomeownerPage({ token, renderDeposit }: { token: string; renderD
           </p>
           {view.company.licenseNumber ? <p>Licence {view.company.licenseNumber}</p> : null}
           <p className="text-sm text-ink-600">Revision {view.proposal.revision}{view.proposal.sentAt ? ` · sent ${formatDate(view.proposal.sentAt)}` : ""}</p>
+          <p className="text-sm text-ink-600">
+            Holding a copy of the PDF?{" "}
+            <a className="inline-flex min-h-touch items-center underline underline-offset-4" href={paths.publicVerify.getHref()}>
+              Check that it is the original
+            </a>
+          </p>
         </div>
       </footer>
     </div>

@@ -1,4 +1,5 @@
 import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { OPTION_NOTES_MAX_CHARS } from "@shared/proposals/limits";
 import { useCallback, useMemo, useState } from "react";
 import { Link } from "react-router";
 import { catalogLaborHours } from "@shared/design/index";
@@ -188,7 +189,7 @@ function Editor({ projectId, optionId, unitSystem, canEdit, detail, option, cata
                   checked={draft.isKept}
                   onChange={(e) => patch({ isKept: e.target.checked })}
                 />
-                <TextArea label="Notes" isOptional rows={3} value={draft.notes} onChange={(e) => patch({ notes: e.target.value })} />
+                <TextArea label="Notes" isOptional rows={3} maxLength={OPTION_NOTES_MAX_CHARS} value={draft.notes} onChange={(e) => patch({ notes: e.target.value })} />
               </fieldset>
               {option.rationale.length > 0 ? (
                 <details className="rounded-md border border-ink-200 bg-ink-25 px-3 py-1">

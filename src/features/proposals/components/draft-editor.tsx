@@ -1,5 +1,6 @@
 import { useMemo, useState, type ReactNode } from "react";
 import type { ProposalPatch } from "@shared/proposals/schemas";
+import { PROPOSAL_LIMITS } from "@shared/proposals/limits";
 import { formatCents } from "@shared/pricing/index";
 import { Button } from "@/components/ui/button";
 import { Card, CardBody, CardDescription, CardHeader, CardTitle } from "@/components/ui/card";
@@ -79,6 +80,15 @@ export interface DraftEditorProps {
   onReload: () => void;
 }
 
+/** What is wrong with a scope's text against the limits the server checks, in words; undefined when it is fine. */
+export function scopeProblem(text: string): string | undefined {
+  const lines = text.split("\n").map((l) => l.trim()).filter(Boolean);
+  if (lines.length > PROPOSAL_LIMITS.maxScopeLines) return `${lines.length} lines: keep it to ${PROPOSAL_LIMITS.maxScopeLines} (join related lines).`;
+  const long = lines.findIndex((l) => l.length > PROPOSAL_LIMITS.maxScopeLineChars);
+  if (long >= 0) return `Line ${long + 1} has ${lines[long]!.length} characters: keep each line to ${PROPOSAL_LIMITS.maxScopeLineChars} (split it in two).`;
+  return undefined;
+}
+
 /** Everything a draft proposal says, saved as you type (with the version it was based on, like the survey). */
 export function DraftEditor({ proposal, project, options, analysis, onSaved, renderAside, onReload }: DraftEditorProps) {
   const [server, setServer] = useState(proposal);
@@ -144,11 +154,13 @@ export function DraftEditor({ proposal, project, options, analysis, onSaved, ren
                 label={o.name}
                 description={total !== undefined ? `Total ${formatCents(total)}` : (o.priceIssue ?? "No price yet")}
                 checked={isIn}
+                disabled={!isIn && draft.optionIds.length >= PROPOSAL_LIMITS.maxOptions}
                 onChange={(e) => set("optionIds", toggle(draft.optionIds, o.id, e.target.checked))}
               />
             );
           })}
           {draft.optionIds.length === 0 ? <Hint className="text-warning-800">Choose at least one option.</Hint> : null}
+          {options.length > PROPOSAL_LIMITS.maxOptions ? <Hint>At most {PROPOSAL_LIMITS.maxOptions} options in one proposal.</Hint> : null}
         </CardBody>
       </Card>
 
@@ -161,7 +173,8 @@ export function DraftEditor({ proposal, project, options, analysis, onSaved, ren
             label="Cover note"
             isOptional
             rows={4}
-            hint={`A few friendly lines to ${project.customer?.name ?? "the homeowner"}, shown first.`}
+            maxLength={PROPOSAL_LIMITS.maxCoverNoteChars}
+            hint={`A few friendly lines to ${project.customer?.name ?? "the homeowner"}, shown first (at most ${PROPOSAL_LIMITS.maxCoverNoteChars.toLocaleString("en-US")} characters).`}
             value={draft.coverNote}
             onChange={(e) => set("coverNote", e.target.value)}
           />
@@ -193,6 +206,8 @@ export function DraftEditor({ proposal, project, options, analysis, onSaved, ren
               <TextArea
                 label={`Scope of work for ${option?.name ?? "this option"}`}
                 rows={Math.min(12, Math.max(4, scopeText(id).split("\n").length + 1))}
+                hint={`At most ${PROPOSAL_LIMITS.maxScopeLines} lines of ${PROPOSAL_LIMITS.maxScopeLineChars} characters.`}
+                error={scopeProblem(scopeText(id))}
                 value={scopeText(id)}
                 onChange={(e) => setDraft((d) => ({ ...d, editedScopes: { ...d.editedScopes, [id]: e.target.value } }))}
               />
@@ -310,7 +325,15 @@ export function DraftEditor({ proposal, project, options, analysis, onSaved, ren
           <CardDescription>Copied from the company profile; change them for this proposal if needed.</CardDescription>
         </CardHeader>
         <CardBody>
-          <TextArea label="Terms of this proposal" isOptional rows={6} value={draft.terms} onChange={(e) => set("terms", e.target.value)} />
+          <TextArea
+            label="Terms of this proposal"
+            isOptional
+            rows={6}
+            maxLength={PROPOSAL_LIMITS.maxTermsChars}
+            hint={`At most ${PROPOSAL_LIMITS.maxTermsChars.toLocaleString("en-US")} characters.`}
+            value={draft.terms}
+            onChange={(e) => set("terms", e.target.value)}
+          />
         </CardBody>
       </Card>
 

@@ -2,6 +2,7 @@ import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Link, useNavigate } from "react-router";
 import { formatCents } from "@shared/pricing/index";
+import { PROPOSAL_LIMITS } from "@shared/proposals/limits";
 import { Alert } from "@/components/ui/alert";
 import { Button, buttonStyles } from "@/components/ui/button";
 import { Card, CardBody, CardDescription, CardFooter, CardHeader, CardTitle } from "@/components/ui/card";
@@ -28,7 +29,9 @@ function NewProposalCard({ projectId }: { projectId: string }) {
   const [validUntil, setValidUntil] = useState(() => inDays(30));
   if (options.isPending) return <LoadingBlock label="Loading the design options…" />;
   if (options.isError) return <Alert severity="critical">{options.error.message}</Alert>;
-  const ids = chosen ?? options.data.map((o) => o.id);
+  // At first, the first options up to the limit a proposal holds.
+  const ids = chosen ?? options.data.slice(0, PROPOSAL_LIMITS.maxOptions).map((o) => o.id);
+  const isFull = ids.length >= PROPOSAL_LIMITS.maxOptions;
 
   if (options.data.length === 0) {
     return (
@@ -54,12 +57,16 @@ function NewProposalCard({ projectId }: { projectId: string }) {
       <CardBody className="space-y-4">
         <fieldset>
           <legend className="text-base font-semibold text-ink-900">Options to include</legend>
+          {options.data.length > PROPOSAL_LIMITS.maxOptions ? (
+            <p className="mb-2 text-sm text-ink-700">A proposal offers at most {PROPOSAL_LIMITS.maxOptions} options: a homeowner compares a few more easily than many.</p>
+          ) : null}
           {options.data.map((o) => (
             <Checkbox
               key={o.id}
               label={o.name}
               description={o.price ? `Total ${formatCents(o.price.totalCents)}` : (o.priceIssue ?? "No price yet")}
               checked={ids.includes(o.id)}
+              disabled={isFull && !ids.includes(o.id)}
               onChange={(e) => setChosen(e.target.checked ? [...ids, o.id] : ids.filter((x) => x !== o.id))}
             />
           ))}

@@ -198,7 +198,7 @@ export function ProposalPage({ projectId, proposalId, canSend, userName, deposit
             <CardTitle id="pp-link">Homeowner's link</CardTitle>
           </CardHeader>
           <CardBody>
-            <LinkPanel proposal={proposal} justSentLink={justSentLink} canSend={canSend} />
+            <LinkPanel proposal={proposal} justSentLink={justSentLink} canSend={canSend} customerEmail={customer?.email ?? null} />
           </CardBody>
         </Card>
       )}

@@ -1,0 +1,1 @@
+export { VerifyPage } from "./pages/verify-page";
