@@ -102,7 +102,8 @@ try {
     const payments = await startLocalPayments({ appPort: testPort, quiet: true, isTest: true });
     const server = await startServer({ ...env, ...payments.env, PORT: String(testPort), APP_ORIGIN: `http://127.0.0.1:${testPort}`, LOG_LEVEL: "error", CLIENT_DIR: clientDir });
     try {
-      await vitest("e2e", ["e2e"], { ...env, ...payments.env, E2E_BASE_URL: `http://127.0.0.1:${testPort}` });
+      // E2E_CLIENT_DIR: the field-mode test publishes a "new version" of the service worker there.
+      await vitest("e2e", ["e2e"], { ...env, ...payments.env, E2E_BASE_URL: `http://127.0.0.1:${testPort}`, E2E_CLIENT_DIR: clientDir });
     } finally {
       await stopChild(server);
       await payments.close();

@@ -17,6 +17,11 @@ import expressStaticGzip from "express-static-gzip";
 
 export const HASHED_ASSET_CACHE = "public, max-age=31536000, immutable";
 export const PAGE_CACHE = "no-cache";
+/**
+ * Files with fixed names that announce a release: the page, the service worker (a stale copy would
+ * keep the old release installed for an hour) and the app manifest.
+ */
+const REVALIDATED_FILES = new Set(["index.html", "sw.js", "manifest.webmanifest"]);
 
 /** Compresses answers the browser accepts compressed (JSON, HTML, CSV), skipping those under 1 kB. */
 export function compressAnswers(): RequestHandler {
@@ -36,7 +41,7 @@ export function clientRoutes(dir: string): Router {
         maxAge: "1h",
         setHeaders: (res, file) => {
           if (file.includes(`${path.sep}assets${path.sep}`)) res.setHeader("Cache-Control", HASHED_ASSET_CACHE);
-          else if (path.basename(file).startsWith("index.html")) res.setHeader("Cache-Control", PAGE_CACHE);
+          else if (REVALIDATED_FILES.has(path.basename(file).replace(/\.(br|gz)$/, ""))) res.setHeader("Cache-Control", PAGE_CACHE);
         },
       },
     }),

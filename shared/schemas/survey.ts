@@ -40,7 +40,12 @@ export const SpaceSurveySchema = z.object({
   notes: z.string().max(5_000, "Notes must be at most 5,000 characters.").nullable().default(null),
 });
 
-export const SpaceCreateSchema = SpaceSurveySchema.partial({ roof: true, sections: true, vents: true, site: true, notes: true }).strict();
+/** An id made on the device (field mode): the same creation sent again lands once. */
+const deviceMadeId = (what: string) => z.string().uuid(`The ${what} id made on this device must be a UUID.`);
+
+export const SpaceCreateSchema = SpaceSurveySchema.partial({ roof: true, sections: true, vents: true, site: true, notes: true })
+  .extend({ id: deviceMadeId("attic space").optional() })
+  .strict();
 /** A full save of a space, with the version it was based on (409 when stale). */
 export const SpaceSaveSchema = SpaceSurveySchema.extend({ version: versionField("attic space") }).strict();
 
@@ -58,6 +63,7 @@ export const PhotoCaptionSchema = z.string({ error: "Caption must be text." }).t
 
 /** The text fields sent beside a photo upload (multipart field "file" carries the bytes). */
 export const PhotoFieldsSchema = z.object({
+  id: blankIsAbsent(deviceMadeId("photo")),
   spaceId: blankIsAbsent(z.string().uuid("Choose one of this project's attic spaces.")),
   ventId: blankIsAbsent(z.string().trim().min(1).max(100, "Vent ids are at most 100 characters.")),
   /** A finding or checklist code in kebab-case, e.g. "soffits-blocked". */

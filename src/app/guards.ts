@@ -1,7 +1,9 @@
+import { onlineManager } from "@tanstack/react-query";
 import { data, redirect, type LoaderFunctionArgs } from "react-router";
 import { paths, safeNextPath } from "@/config/paths";
 import { authQueries } from "@/features/auth/api/queries";
 import { canAccess, type Area } from "@/lib/authorization";
+import { ensureDeviceCopy } from "@/lib/field/device-copy";
 import { queryClient } from "@/lib/query-client";
 import type { Session } from "@/lib/session";
 
@@ -10,8 +12,29 @@ function currentPath(request: Request): string {
   return `${url.pathname}${url.search}`;
 }
 
+/**
+ * The session, from memory or the device copy when there is one (so the app opens with no signal;
+ * it is checked again with the server in the background), else from the server.
+ */
+export async function currentSession(): Promise<Session | null> {
+  await ensureDeviceCopy(queryClient);
+  // Once per page load, online, ask the server as before (a name or role may have changed); the
+  // device copy stands in only when there is no signal or no answer.
+  if (!isSessionChecked && onlineManager.isOnline()) {
+    try {
+      const session = await queryClient.fetchQuery({ ...authQueries.me(), staleTime: 0, retry: false });
+      isSessionChecked = true;
+      return session;
+    } catch {
+      // no answer: fall through to the copy on this device
+    }
+  }
+  return queryClient.ensureQueryData({ ...authQueries.me(), revalidateIfStale: true });
+}
+let isSessionChecked = false;
+
 async function sessionOrRedirect(request: Request): Promise<Session> {
-  const session = await queryClient.ensureQueryData(authQueries.me());
+  const session = await currentSession();
   if (!session) throw redirect(paths.auth.signIn.getHref(currentPath(request)));
   return session;
 }
@@ -37,7 +60,7 @@ export function requireArea(area: Area) {
 export async function redirectIfSignedIn({ request }: LoaderFunctionArgs) {
   let session: Session | null = null;
   try {
-    session = await queryClient.ensureQueryData(authQueries.me());
+    session = await currentSession();
   } catch {
     // Server unreachable: still show the form; signing in will report the problem.
   }

@@ -1,7 +1,9 @@
+import { onlineManager } from "@tanstack/react-query";
 import { createBrowserRouter, redirect, type RouteObject } from "react-router";
 import { paths } from "@/config/paths";
 import { redirectIfSignedIn, requireArea, requireSession } from "./guards";
 import { surveyQueries } from "@/features/survey/api/queries";
+import { ensureDeviceCopy } from "@/lib/field/device-copy";
 import { queryClient } from "@/lib/query-client";
 import { authQueries } from "@/features/auth/api/queries";
 import { canAccess } from "@/lib/authorization";
@@ -38,9 +40,13 @@ const appRoutes: RouteObject[] = [
     path: paths.app.project.path,
     // The project is asked for together with the page's code and the session, not after the code runs.
     loader: async (args) => {
-      const project = queryClient.prefetchQuery(surveyQueries.project(args.params.projectId ?? ""));
+      await ensureDeviceCopy(queryClient);
+      const options = surveyQueries.project(args.params.projectId ?? "");
+      // Online, the workspace starts from the server's copy (the device's may be behind, and edits
+      // based on it would meet a conflict); with no signal, or none reaching the server, from the device's.
+      const fresh = onlineManager.isOnline() ? queryClient.fetchQuery({ ...options, staleTime: 0, retry: false }).catch(() => undefined) : undefined;
       await requireArea("projects")(args);
-      await project;
+      await fresh;
       return null;
     },
     lazy: () => import("./routes/projects-detail"),

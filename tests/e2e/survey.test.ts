@@ -104,7 +104,7 @@ async function surveyFlow(page: Page, tag: string, isPhone: boolean) {
   await page.locator('input[type="file"][aria-label="Photo file"]').setInputFiles({ name: "gable-fan.png", mimeType: "image/png", buffer: await smallPng() });
   await page.getByLabel("Attach to").selectOption({ label: "Vent: Vent 2 (powered gable fan)" });
   await page.getByLabel("Caption").fill("Gable fan, north end");
-  await page.getByRole("button", { name: "Upload photo" }).click();
+  await page.getByRole("button", { name: "Add photo" }).click();
   await page.getByRole("img", { name: "Gable fan, north end" }).waitFor();
   await waitForSaved(page);
   await shot(page, `survey-${tag}`, true);
@@ -156,7 +156,7 @@ async function offlineAndConflict(page: Page, projectUrl: string) {
   await conflict.waitFor();
   await conflict.getByText(/Main attic \(office copy\)/).waitFor();
   await shot(page, "conflict-wide");
-  await conflict.getByRole("button", { name: "Keep mine (overwrite)" }).click();
+  await conflict.getByRole("button", { name: "All of mine" }).click();
   await waitForSaved(page);
   const after = (await (await page.request.get(`/api/projects/${projectId}`)).json()) as { spaces: { name: string; roof: { ridgeLengthFt: number } }[] };
   expect(after.spaces[0]!.name).toBe("Main attic");

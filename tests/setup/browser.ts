@@ -23,8 +23,19 @@ export async function launchBrowser(): Promise<{ browser: Browser; close: () => 
   };
 }
 
-export async function newPage(browser: Browser, opts: { width?: number; height?: number } = {}): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await browser.newContext({ baseURL: BASE_URL, viewport: { width: opts.width ?? 1280, height: opts.height ?? 900 } });
+/**
+ * A fresh context. The service worker (field mode) is blocked unless a test asks for it: it would
+ * precache the whole client in every context and slow every other test for nothing.
+ */
+export async function newPage(
+  browser: Browser,
+  opts: { width?: number; height?: number; serviceWorkers?: "allow" | "block" } = {},
+): Promise<{ context: BrowserContext; page: Page }> {
+  const context = await browser.newContext({
+    baseURL: BASE_URL,
+    viewport: { width: opts.width ?? 1280, height: opts.height ?? 900 },
+    serviceWorkers: opts.serviceWorkers ?? "block",
+  });
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
   return { context, page };

@@ -18,9 +18,10 @@ export function createPhotosRepository(db: Database) {
       const [row] = await db.select(photoColumns).from(photos).where(scoped(photos, actor, eq(photos.id, id))).limit(1);
       return row ?? null;
     },
+    /** Null when a photo with this id exists already (a parallel copy of the same upload, or anyone else's). */
     async insert(actor: Actor, row: Omit<typeof photos.$inferInsert, "companyId">) {
-      const [created] = await db.insert(photos).values({ ...row, companyId: actor.companyId }).returning(photoColumns);
-      return created!;
+      const [created] = await db.insert(photos).values({ ...row, companyId: actor.companyId }).onConflictDoNothing({ target: photos.id }).returning(photoColumns);
+      return created ?? null;
     },
     async updateCaption(actor: Actor, id: string, caption: string | null) {
       const [row] = await db.update(photos).set({ caption }).where(scoped(photos, actor, eq(photos.id, id))).returning(photoColumns);

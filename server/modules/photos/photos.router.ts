@@ -50,7 +50,8 @@ export function photosRouter(service: PhotosService) {
         await service.requireProject(actor, projectId);
         await receiveFile(req, res);
         const fields = parse(PhotoFieldsSchema, { ...(req.body as object) });
-        res.status(201).json({ photo: await service.upload(actor, projectId, req.file, fields) });
+        const { photo, isNew } = await service.upload(actor, projectId, req.file, fields);
+        res.status(isNew ? 201 : 200).json({ photo });
       },
     },
     {

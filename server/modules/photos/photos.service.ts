@@ -1,3 +1,4 @@
+import { idTaken } from "../spaces/spaces.service.ts";
 import { randomUUID } from "node:crypto";
 import { AppError, notFound } from "../../lib/errors.ts";
 import type { Storage } from "../../lib/storage/index.ts";
@@ -38,9 +39,20 @@ export function createPhotosService(deps: { repo: PhotosRepository; storage: Sto
       return (await repo.listForProject(actor, projectId)).map(photoView);
     },
 
-    async upload(actor: Actor, projectId: string, file: { buffer: Buffer } | undefined, fields: PhotoFields): Promise<PhotoView> {
+    /**
+     * Stores a photo. With an id made on the device (field mode), an upload sent again answers the
+     * photo already stored (`isNew: false`) and stores nothing; an id used elsewhere answers 409.
+     */
+    async upload(actor: Actor, projectId: string, file: { buffer: Buffer } | undefined, fields: PhotoFields): Promise<{ photo: PhotoView; isNew: boolean }> {
       await requireProject(actor, projectId);
       if (!file) throw fieldError("file", "Attach the photo in the form field named file.");
+      const sameUpload = async () => {
+        const existing = fields.id ? await repo.find(actor, fields.id) : null;
+        if (existing && existing.projectId !== projectId) throw idTaken("photo");
+        return existing ? { photo: photoView(existing), isNew: false } : null;
+      };
+      const earlier = await sameUpload();
+      if (earlier) return earlier;
       if (fields.ventId && !fields.spaceId) throw fieldError("spaceId", "Choose the attic space the vent belongs to.");
       if (fields.spaceId) {
         const space = await deps.spaces.find(actor, projectId, fields.spaceId);
@@ -50,22 +62,33 @@ export function createPhotosService(deps: { repo: PhotosRepository; storage: Sto
 
       const processed = await processPhoto(file.buffer);
       // Server-made names only: the uploaded file name never reaches storage or the database.
-      const id = randomUUID();
+      const id = fields.id ?? randomUUID();
       const storageKey = `photos/${actor.companyId}/${id}.${processed.main.ext}`;
       const thumbKey = `photos/${actor.companyId}/${id}-thumb.${processed.thumb.ext}`;
       await storage.put(storageKey, processed.main.bytes, processed.main.contentType);
       await storage.put(thumbKey, processed.thumb.bytes, processed.thumb.contentType);
+      const dropFiles = () => Promise.allSettled([storage.delete(storageKey), storage.delete(thumbKey)]);
+      let row;
       try {
-        const row = await repo.insert(actor, {
+        row = await repo.insert(actor, {
           id, projectId, spaceId: fields.spaceId ?? null, ventId: fields.ventId ?? null, findingCode: fields.findingCode ?? null,
           caption: fields.caption || null, storageKey, thumbKey, contentType: processed.main.contentType,
           sizeBytes: processed.main.bytes.byteLength, width: processed.main.width, height: processed.main.height, uploadedBy: actor.userId,
         });
-        return photoView(row);
       } catch (err) {
-        await Promise.allSettled([storage.delete(storageKey), storage.delete(thumbKey)]);
+        await dropFiles();
         throw err;
       }
+      if (row) return { photo: photoView(row), isNew: true };
+      // A parallel copy of this upload won (its row names these very files: keep them), or the id
+      // is another company's (nothing of ours names these files: drop them).
+      const winner = await sameUpload().catch(async (err: unknown) => {
+        await dropFiles();
+        throw err;
+      });
+      if (winner) return winner;
+      await dropFiles();
+      throw idTaken("photo");
     },
 
     /** The bytes of a photo or its thumbnail, for the caller's company only. */

@@ -29,15 +29,29 @@ export function createSpacesRepository(db: Database) {
       return row ?? null;
     },
 
-    /** Adds the space at the end of the project's list. */
-    insert: (actor: Actor, projectId: string, survey: SpaceSurvey) =>
+    /** Any space of the caller's company by id, whatever its project. */
+    async findById(actor: Actor, spaceId: string) {
+      const [row] = await db.select(spaceColumns).from(atticSpaces).where(scoped(atticSpaces, actor, eq(atticSpaces.id, spaceId))).limit(1);
+      return row ?? null;
+    },
+
+    /**
+     * Adds the space at the end of the project's list. With an id given, null when a row with that
+     * id exists already (a parallel copy of this creation, or anyone else's): the caller decides.
+     */
+    insert: (actor: Actor, projectId: string, survey: SpaceSurvey, id?: string) =>
       db.transaction(async (tx) => {
         const [{ next } = { next: 0 }] = await tx
           .select({ next: sql<number>`coalesce(max(${atticSpaces.position}) + 1, 0)::int` })
           .from(atticSpaces).where(scoped(atticSpaces, actor, eq(atticSpaces.projectId, projectId)));
-        const [row] = await tx.insert(atticSpaces).values({ ...survey, companyId: actor.companyId, projectId, position: next }).returning(spaceColumns);
+        const [row] = await tx
+          .insert(atticSpaces)
+          .values({ ...survey, ...(id ? { id } : {}), companyId: actor.companyId, projectId, position: next })
+          .onConflictDoNothing({ target: atticSpaces.id })
+          .returning(spaceColumns);
+        if (!row) return null;
         await touchProject(tx, actor, projectId);
-        return row!;
+        return row;
       }),
 
     /** Saves the whole survey only if the stored version is the one the editor saw (one statement). */

@@ -13,7 +13,8 @@ export function spacesRouter(service: SpacesService) {
       method: "post", path: "/projects/:id/spaces", access: "projects:edit", idParams: ["id"], creates: true,
       handler: async (req, res) => {
         const projectId = idParam(req, "id", "That project");
-        res.status(201).json({ space: await service.create(actorOf(req), projectId, parse(SpaceCreateSchema, req.body)) });
+        const { space, isNew } = await service.create(actorOf(req), projectId, parse(SpaceCreateSchema, req.body));
+        res.status(isNew ? 201 : 200).json({ space });
       },
     },
     {

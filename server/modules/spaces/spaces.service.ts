@@ -41,6 +41,15 @@ export function copyOfVent(vent: Vent): Vent {
   return { ...rest, id: randomUUID() };
 }
 
+/** An id made on a device that some other record already has: said without naming that record. */
+export const idTaken = (what: string) =>
+  new AppError("id-taken", `This ${what} id is already used by something else. Create it again to get a new id.`, 409);
+
+function sameProjectOrTaken(space: SpaceRow, projectId: string): SpaceRow {
+  if (space.projectId !== projectId) throw idTaken("attic space");
+  return space;
+}
+
 export function createSpacesService(deps: { repo: SpacesRepository; projects: ProjectsRepository }) {
   const { repo } = deps;
 
@@ -58,8 +67,16 @@ export function createSpacesService(deps: { repo: SpacesRepository; projects: Pr
   return {
     requireSpace,
 
-    async create(actor: Actor, projectId: string, input: Partial<SpaceSurvey> & { name: string }): Promise<SpaceRow> {
+    /**
+     * Adds a space. With an id made on the device, the same creation sent again answers the space
+     * already made (`isNew: false`) instead of a second one; an id used elsewhere answers 409.
+     */
+    async create(actor: Actor, projectId: string, input: Partial<SpaceSurvey> & { name: string; id?: string }): Promise<{ space: SpaceRow; isNew: boolean }> {
       await requireProject(actor, projectId);
+      if (input.id) {
+        const existing = await repo.findById(actor, input.id);
+        if (existing) return { space: sameProjectOrTaken(existing, projectId), isNew: false };
+      }
       if ((await repo.listForProject(actor, projectId)).length >= LIMITS.maxSpacesPerProject) {
         throw new AppError("invalid-input", `A project has at most ${LIMITS.maxSpacesPerProject} attic spaces.`, 400, { name: `At most ${LIMITS.maxSpacesPerProject} attic spaces in one project.` });
       }
@@ -72,7 +89,12 @@ export function createSpacesService(deps: { repo: SpacesRepository; projects: Pr
         notes: input.notes ?? null,
       };
       assertConsistent(survey);
-      return repo.insert(actor, projectId, survey);
+      const inserted = await repo.insert(actor, projectId, survey, input.id);
+      if (inserted) return { space: inserted, isNew: true };
+      // Another copy of this creation committed first, or the id is another company's.
+      const existing = input.id ? await repo.findById(actor, input.id) : null;
+      if (!existing) throw idTaken("attic space");
+      return { space: sameProjectOrTaken(existing, projectId), isNew: false };
     },
 
     async save(actor: Actor, projectId: string, spaceId: string, input: SpaceSurvey & { version: number }): Promise<SpaceRow> {

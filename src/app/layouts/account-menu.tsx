@@ -10,6 +10,9 @@ import { useSignOut } from "@/features/auth/api/sign-out";
 import { useSignOutEverywhere } from "@/features/auth/api/sign-out-everywhere";
 import { ROLE_LABELS } from "@/lib/authorization";
 import { cn } from "@/lib/cn";
+import { useOutbox } from "@/lib/field/use-outbox";
+import { useUnsentDraftCount } from "@/lib/field/use-unsent-drafts";
+import { waitingSummary } from "@/lib/field/waiting";
 import { useSession } from "@/lib/session";
 
 function initials(name: string, email: string): string {
@@ -55,10 +58,21 @@ export function AccountMenu() {
     };
   }, [isOpen]);
 
-  const onSignOut = () =>
+  const { items } = useOutbox();
+  const draftCount = useUnsentDraftCount();
+  const waiting = waitingSummary(draftCount + items.filter((i) => i.group === "change").length, items.filter((i) => i.group === "photo").length);
+  const [isConfirmingLoss, setIsConfirmingLoss] = useState(false);
+  const signOutNow = () =>
     signOut.mutate(undefined, {
       onError: (error) => toast.error("Couldn't sign out", { description: error.message }),
     });
+  // Signing out deletes the device copy: say so first when work on it has not been sent.
+  const onSignOut = () => {
+    if (waiting) {
+      setIsOpen(false);
+      setIsConfirmingLoss(true);
+    } else signOutNow();
+  };
 
   return (
     <div ref={rootRef} className="relative">
@@ -121,6 +135,16 @@ export function AccountMenu() {
         </div>
       </div>
 
+      <ConfirmDialog
+        open={isConfirmingLoss}
+        onOpenChange={setIsConfirmingLoss}
+        title="Sign out and delete unsent work?"
+        description={`${waiting ?? "Nothing"} on this device, not sent yet. Signing out deletes it from this device. Wait for a signal to send it first, unless you mean to throw it away.`}
+        confirmLabel="Sign out and delete it"
+        confirmVariant="danger"
+        isPending={signOut.isPending}
+        onConfirm={signOutNow}
+      />
       <ConfirmDialog
         open={isConfirmingEverywhere}
         onOpenChange={setIsConfirmingEverywhere}

@@ -9,6 +9,8 @@ import { authQueries } from "@/features/auth/api/queries";
 import { cn } from "@/lib/cn";
 import { SessionProvider, type Session } from "@/lib/session";
 import { AccountMenu } from "./account-menu";
+import { FieldStatus } from "./field-status";
+import { UpdatePrompt } from "./update-prompt";
 import { MAIN_NAV, navFor } from "./nav-items";
 
 function NavigationProgress() {
@@ -132,7 +134,8 @@ export function AppLayout() {
               </span>
             </Link>
             <DesktopNav session={session} />
-            <div className="ml-auto">
+            <div className="ml-auto flex items-center gap-2">
+              <FieldStatus />
               <AccountMenu />
             </div>
           </div>
@@ -144,6 +147,7 @@ export function AppLayout() {
         </main>
       </div>
       <BottomNav session={session} />
+      <UpdatePrompt />
     </SessionProvider>
   );
 }

@@ -11,10 +11,10 @@ export function useSignOutEverywhere() {
   return useMutation({
     mutationFn: signOutEverywhere,
     meta: { isAuthProbe: true },
-    onSuccess: () => leaveToSignIn("signed-out-everywhere"),
+    onSuccess: () => void leaveToSignIn("signed-out-everywhere"),
     // Already signed out (session expired or ended elsewhere): the result the user wanted.
     onError: (error) => {
-      if (isApiError(error) && error.status === 401) leaveToSignIn("signed-out-everywhere");
+      if (isApiError(error) && error.status === 401) void leaveToSignIn("signed-out-everywhere");
     },
   });
 }

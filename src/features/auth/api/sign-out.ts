@@ -11,10 +11,10 @@ export function useSignOut() {
   return useMutation({
     mutationFn: signOut,
     meta: { isAuthProbe: true },
-    onSuccess: () => leaveToSignIn("signed-out"),
+    onSuccess: () => void leaveToSignIn("signed-out"),
     // Already signed out (session expired or ended elsewhere): the result the user wanted.
     onError: (error) => {
-      if (isApiError(error) && error.status === 401) leaveToSignIn("signed-out");
+      if (isApiError(error) && error.status === 401) void leaveToSignIn("signed-out");
     },
   });
 }

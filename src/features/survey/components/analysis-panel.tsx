@@ -2,7 +2,7 @@ import { lazy, memo, Suspense } from "react";
 import { FindingsList } from "@/components/findings/findings-list";
 import type { UnitSystem } from "@shared/units/format";
 import { formatAirflowCfm, formatAreaSqFt, formatNfaSqIn } from "@shared/units/format";
-import { sortFindings, type AtticInput, type TryAnalyzeResult } from "@shared/ventilation/index";
+import { sortFindings, type AtticAnalysis, type AtticInput, type TryAnalyzeResult } from "@shared/ventilation/index";
 import { SeverityBadge } from "@/components/ui/badge";
 import { WarningIcon } from "@/components/ui/icons";
 import type { Problem } from "../lib/drafts";
@@ -99,7 +99,8 @@ export const AnalysisPanel = memo(function AnalysisPanel({ spaceName, input, res
   const a = result.analysis;
   const findings = sortFindings(a.findings);
   return (
-    <div className="space-y-6">
+    // The figures shown, exact, for checks that compare this page with the server's analysis.
+    <div className="space-y-6" data-analysis-figures={analysisFigures(a)}>
       <div className="space-y-2">
         <h2 className="text-xl font-semibold text-ink-900">Analysis · {spaceName}</h2>
         <div className="flex flex-wrap items-center gap-2">
@@ -244,3 +245,16 @@ export const AnalysisPanel = memo(function AnalysisPanel({ spaceName, input, res
     </div>
   );
 });
+
+/** The verdict and the figures that decide it, unrounded, as one JSON text (see `data-analysis-figures`). */
+export function analysisFigures(a: AtticAnalysis): string {
+  return JSON.stringify({
+    compliant: a.compliant,
+    floorAreaSqFt: a.floorAreaSqFt,
+    ratio: a.requirement.ratio,
+    requiredSqIn: a.requirement.totalSqIn,
+    intakeSqIn: a.provided.intakeSqIn,
+    exhaustSqIn: a.provided.exhaustSqIn,
+    findings: a.findings.map((f) => f.code).sort(),
+  });
+}

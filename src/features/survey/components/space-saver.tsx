@@ -3,12 +3,13 @@ import { memo, useEffect, useMemo, useState } from "react";
 import type { SpaceRoof } from "@shared/schemas/survey";
 import type { UnitSystem } from "@shared/units/format";
 import type { Section, Vent } from "@shared/ventilation/index";
-import { surveyQueries } from "../api/queries";
+import { surveyKeys, surveyQueries } from "../api/queries";
 import { saveSpace } from "../api/save-space";
-import type { SpaceRecord } from "../api/types";
+import type { ProjectDetail, SpaceRecord } from "../api/types";
 import { useAutosave, type SaveState } from "@/lib/use-autosave";
 import { buildSpace, fingerprint, spaceFromServer, type Problem, type SpaceDraft } from "../lib/drafts";
 import { clearDraft, spaceDraftKey, writeDraft } from "../lib/local-drafts";
+import { mergeSpace, spaceDifferences, type Side } from "../lib/merge-space";
 import { ConflictDialog } from "./conflict-dialog";
 
 export interface SpaceSaverInit {
@@ -48,7 +49,13 @@ export const SpaceSaver = memo(function SpaceSaver({ projectId, draft, init, uni
     startInConflict: init.startInConflict,
     send: (survey, version) => saveSpace(projectId, draft.id, survey, version),
     versionOf: (space: SpaceRecord) => space.version,
-    onSaved: (space) => setLastSaved({ sections: space.sections, vents: space.vents, roof: space.roof }),
+    onSaved: (space) => {
+      setLastSaved({ sections: space.sections, vents: space.vents, roof: space.roof });
+      // The device copy then opens on what was saved, also after a reload with no signal.
+      queryClient.setQueryData<ProjectDetail>(surveyKeys.detail(projectId), (old) =>
+        old ? { ...old, spaces: old.spaces.some((s) => s.id === space.id) ? old.spaces.map((s) => (s.id === space.id ? space : s)) : [...old.spaces, space] } : old,
+      );
+    },
   });
   const { state, isDirty, saveNow, resolve, getVersion } = autosave;
 
@@ -70,6 +77,7 @@ export const SpaceSaver = memo(function SpaceSaver({ projectId, draft, init, uni
   const [theirs, setTheirs] = useState<SpaceRecord | null | "gone">(null);
   // Closed without choosing at request n; the status line's button raises the request to reopen it.
   const [dismissedAt, setDismissedAt] = useState<number | null>(null);
+  const [choices, setChoices] = useState<Record<string, Side>>({});
   const isDialogOpen = dismissedAt === null || resolveRequest > dismissedAt;
   const isConflict = state.kind === "conflict";
   useEffect(() => {
@@ -88,6 +96,7 @@ export const SpaceSaver = memo(function SpaceSaver({ projectId, draft, init, uni
 
   if (!isConflict) return null;
   const server = theirs && theirs !== "gone" ? theirs : null;
+  const differences = server ? spaceDifferences(draft, server, unitSystem) : [];
   return (
     <ConflictDialog
       open={isDialogOpen}
@@ -112,6 +121,20 @@ export const SpaceSaver = memo(function SpaceSaver({ projectId, draft, init, uni
         if (!server) return;
         resolve("mine", server.version, fingerprint(buildSpace(spaceFromServer(server, unitSystem)).survey));
         setTheirs(null);
+      }}
+      parts={{
+        differences,
+        choices,
+        onChoose: (key, side) => setChoices((c) => ({ ...c, [key]: side })),
+        onSave: () => {
+          if (!server) return;
+          // The chosen parts become this device's draft, saved over their version.
+          onReplaceDraft(mergeSpace(draft, server, choices, unitSystem));
+          setLastSaved({ sections: server.sections, vents: server.vents, roof: server.roof });
+          resolve("mine", server.version, fingerprint(buildSpace(spaceFromServer(server, unitSystem)).survey));
+          setTheirs(null);
+          setChoices({});
+        },
       }}
     />
   );

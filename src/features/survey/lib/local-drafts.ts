@@ -3,7 +3,11 @@
  * closed tab or a dead battery never loses what was typed in the attic. Each entry records the
  * server version the edits were based on, to tell "mine, not sent yet" from "someone saved since".
  */
-const PREFIX = "eavesight:unsent:";
+import { DRAFTS_CHANGED_EVENT, UNSENT_DRAFT_PREFIX } from "@/lib/field/waiting";
+
+const PREFIX = UNSENT_DRAFT_PREFIX;
+/** The waiting indicator counts unsent drafts; tell it when one comes or goes. */
+const announce = () => window.dispatchEvent(new Event(DRAFTS_CHANGED_EVENT));
 
 export interface StoredDraft<T> {
   baseVersion: number;
@@ -28,7 +32,9 @@ export function readDraft<T>(key: string): StoredDraft<T> | null {
 
 export function writeDraft<T>(key: string, baseVersion: number, draft: T): void {
   try {
+    const isNew = window.localStorage.getItem(key) === null;
     window.localStorage.setItem(key, JSON.stringify({ baseVersion, draft, savedAt: new Date().toISOString() }));
+    if (isNew) announce();
   } catch {
     // Storage full or disabled (private mode): the edit still lives in the page until it is sent.
   }
@@ -36,7 +42,9 @@ export function writeDraft<T>(key: string, baseVersion: number, draft: T): void 
 
 export function clearDraft(key: string): void {
   try {
+    if (window.localStorage.getItem(key) === null) return;
     window.localStorage.removeItem(key);
+    announce();
   } catch {
     // ignore: nothing to clear
   }

@@ -18,7 +18,7 @@ import { toast } from "@/components/ui/toaster";
 import { paths } from "@/config/paths";
 import { isApiError } from "@/lib/api-client";
 import { cn } from "@/lib/cn";
-import { useCreateSpace } from "../api/create-space";
+import { pendingSpaces, useQueueNewSpace } from "../api/create-space";
 import { useDeleteSpace } from "../api/delete-space";
 import { surveyKeys, surveyQueries } from "../api/queries";
 import type { PhotoRecord, ProjectDetail, ProjectRecord, SpaceRecord } from "../api/types";
@@ -30,7 +30,7 @@ import { combineStates } from "../lib/save-states";
 import { SpaceEditor } from "../components/space-editor";
 import { SpaceSaver, type SpaceSaverInit } from "../components/space-saver";
 import type { SaveState } from "@/lib/use-autosave";
-import { useIsOnline } from "../hooks/use-is-online";
+import { useIsOnline } from "@/lib/use-is-online";
 import { useMediaQuery } from "../hooks/use-media-query";
 import { useStableJson } from "../hooks/use-stable-json";
 import {
@@ -71,8 +71,23 @@ export interface ProjectWorkspacePageProps {
 /** The estimator's workspace for one project: details, attic spaces, photos and the live analysis. */
 export function ProjectWorkspacePage(props: ProjectWorkspacePageProps) {
   const query = useQuery(surveyQueries.project(props.projectId));
+  if (query.isPending && query.fetchStatus === "paused") {
+    return (
+      <EmptyState
+        icon={<ClipboardIcon />}
+        title="This project isn't on this device yet"
+        description="With no signal, only projects opened here before can be read. Open it once with a connection, and it stays available offline."
+        action={
+          <Link to={paths.app.projects.getHref()} className="font-semibold text-ember-700 underline underline-offset-4">
+            Back to projects
+          </Link>
+        }
+      />
+    );
+  }
   if (query.isPending) return <LoadingBlock label="Opening the project…" />;
-  if (query.isError) {
+  // A failed refresh keeps the copy already shown (or kept on this device).
+  if (query.isError && query.data === undefined) {
     const isMissing = isApiError(query.error) && query.error.status === 404;
     return (
       <EmptyState
@@ -87,7 +102,7 @@ export function ProjectWorkspacePage(props: ProjectWorkspacePageProps) {
       />
     );
   }
-  return <Workspace key={props.projectId} detail={query.data} {...props} />;
+  return <Workspace key={props.projectId} detail={query.data!} {...props} />;
 }
 
 interface SpaceEntry {
@@ -126,21 +141,23 @@ function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: Pr
   const isOnline = useIsOnline();
   const [projectStart] = useState(() => initProject(detail.project));
   const [fields, setFields] = useState(projectStart.fields);
-  const [entries, setEntries] = useState<SpaceEntry[]>(() => detail.spaces.map((s) => initSpace(s, unitSystem)));
-  const [activeId, setActiveId] = useState<string | null>(() => detail.spaces[0]?.id ?? null);
+  // The server's spaces, then those created on this device that are still waiting to be sent.
+  const [startSpaces] = useState(() => [...detail.spaces, ...pendingSpaces(projectId).filter((p) => !detail.spaces.some((s) => s.id === p.id))]);
+  const [entries, setEntries] = useState<SpaceEntry[]>(() => startSpaces.map((s) => initSpace(s, unitSystem)));
+  const [activeId, setActiveId] = useState<string | null>(() => startSpaces[0]?.id ?? null);
   const [phoneTab, setPhoneTab] = useState<"survey" | "analysis">("survey");
   // Tailwind's lg: from there up the analysis stands beside the form, below it only on its tab.
   const isSideBySide = useMediaQuery("(min-width: 64rem)");
   const [typical, setTypical] = useState<Record<string, string[]>>(() =>
-    Object.fromEntries(detail.spaces.map((s) => [s.id, readTypicalVents(s.id)])),
+    Object.fromEntries(startSpaces.map((s) => [s.id, readTypicalVents(s.id)])),
   );
   const [states, setStates] = useState<Record<string, { state: SaveState; problems: Problem[]; retry: () => void }>>({});
   const [resolveRequest, setResolveRequest] = useState(0);
-  const [isDetailsOpen, setIsDetailsOpen] = useState(detail.spaces.length === 0);
+  const [isDetailsOpen, setIsDetailsOpen] = useState(startSpaces.length === 0);
   const [isAdding, setIsAdding] = useState(false);
   const [newName, setNewName] = useState("");
   const [toDelete, setToDelete] = useState<SpaceEntry | null>(null);
-  const createSpace = useCreateSpace();
+  const createSpace = useQueueNewSpace();
   const deleteSpace = useDeleteSpace();
   const photosQuery = useQuery(surveyQueries.project(projectId));
   const photos: PhotoRecord[] = photosQuery.data?.photos ?? detail.photos;
@@ -206,11 +223,11 @@ function Workspace({ detail, projectId, unitSystem, canEdit, renderDetails }: Pr
           setActiveId(space.id);
           setIsAdding(false);
           setNewName("");
-          toast.success(`${space.name} added`);
+          toast.success(`${space.name} added`, isOnline ? undefined : { description: "Kept on this device; it is sent when the signal returns." });
         },
         onError: (error) =>
           toast.error("Space not added", {
-            description: isApiError(error) && error.isNetworkError ? "Adding a space needs a connection. Your other edits are kept." : error.message,
+            description: `${error.message} This device couldn't keep it (storage full or turned off).`,
           }),
       },
     );
