@@ -7,7 +7,7 @@ import type { AirflowResult } from "../airflow-model/simulate-airflow";
 import type { AtticAnalysis, AtticInput } from "../ventilation";
 import { applyFlowWidths } from "./flow-widths";
 import { joinPlaces } from "./describe-airflow-picture";
-import { flowPaths } from "./flow-paths";
+import { flowPaths, HOUSE_FAN_BLOCKED_ID } from "./flow-paths";
 import { boxesOverlap, emptyBounds, includePoint, includePrimitive, textBoxFt, textWidthFt, tidy } from "./geometry";
 import { placeVents } from "./place-vents";
 import { deckYAt, roofFrame, type RoofFrame } from "./roof-frame";
@@ -151,7 +151,8 @@ function viewBoxOf(shapes: PictureShape[], arrows: AirflowArrow[], texts: Pictur
 function legendFor(arrows: AirflowArrow[]): LegendEntry[] {
   const legend: LegendEntry[] = [];
   if (arrows.some((a) => a.style === "intended")) {
-    legend.push({ style: "intended", line: "solid", head: "filled-triangle", words: "Intended airflow (solid line, filled arrowhead): in low at the eaves, up under the roof, out at the top." });
+    const houseFan = arrows.some((a) => a.kind === "house-fan-path") ? " While the whole-house fan runs, house air rises through it and leaves by the vents." : "";
+    legend.push({ style: "intended", line: "solid", head: "filled-triangle", words: `Intended airflow (solid line, filled arrowhead): in low at the eaves, up under the roof, out at the top.${houseFan}` });
   }
   if (arrows.some((a) => a.style === "short-circuit")) {
     legend.push({ style: "short-circuit", line: "dashed", head: "open-chevron", words: "Short-circuit (dashed line, open arrowhead): air taking a shortcut that skips the eaves. Letters match the notes." });
@@ -162,7 +163,7 @@ function legendFor(arrows: AirflowArrow[]): LegendEntry[] {
   return legend;
 }
 
-function captionsFor(arrows: AirflowArrow[], notes: string[]): PictureCaption[] {
+function captionsFor(arrows: AirflowArrow[], notes: string[], houseFanCaption: string | null): PictureCaption[] {
   const captions: PictureCaption[] = [];
   const intended = arrows.filter((a) => a.style === "intended");
   if (intended.length > 0) {
@@ -172,10 +173,14 @@ function captionsFor(arrows: AirflowArrow[], notes: string[]): PictureCaption[] 
   }
   const blockedSeen = new Set<string>();
   for (const arrow of arrows) {
-    if (arrow.kind === "blocked-path" && !blockedSeen.has(arrow.caption)) {
+    if (arrow.kind === "blocked-path" && arrow.id !== HOUSE_FAN_BLOCKED_ID && !blockedSeen.has(arrow.caption)) {
       blockedSeen.add(arrow.caption);
       captions.push({ id: `caption-${arrow.id}`, style: "blocked", ...(arrow.findingCode ? { findingCode: arrow.findingCode } : {}), text: arrow.caption });
     }
+  }
+  if (houseFanCaption) {
+    const isBlocked = arrows.some((a) => a.id === HOUSE_FAN_BLOCKED_ID);
+    captions.push({ id: "caption-house-fan", style: isBlocked ? "blocked" : "intended", text: houseFanCaption });
   }
   for (const arrow of arrows) {
     if (arrow.kind === "short-circuit-path") {
@@ -276,7 +281,7 @@ export function buildAirflowPicture(input: AtticInput, analysis: AtticAnalysis, 
       ...(a.kind === "short-circuit-path" ? { tagAtFt: tidyPoint(a.tagAtFt, u) } : {}),
     })),
     texts: texts.map((t) => ({ ...t, atFt: tidyPoint(t.atFt, u), fontSizeFt: tidy(t.fontSizeFt, u) })),
-    captions: captionsFor(arrows, notes),
+    captions: captionsFor(arrows, notes, flows.houseFanCaption),
     legend: legendFor(arrows),
     notes,
   };

@@ -15,7 +15,10 @@ export const MAX_FLOW_WIDTH_UNITS = 0.75;
 /** Arrows carrying at least this share of the largest flow are labelled with their cfm. */
 export const LABEL_SHARE_OF_LARGEST = 0.2;
 
-const isFromHouse = (arrow: AirflowArrow) => arrow.fromPlace === "the rooms below";
+/** A short-circuit up through the ceiling: the estimate's ceiling flow. */
+const isFromHouse = (arrow: AirflowArrow) => arrow.kind === "short-circuit-path" && arrow.fromPlace === "the rooms below";
+/** Arrows the estimate says nothing about: blocked air, a loop, a whole-house fan (not modelled). */
+const isUnmodelled = (arrow: AirflowArrow) => arrow.kind === "blocked-path" || arrow.kind === "house-fan-path" || arrow.fromPlace === arrow.toPlace;
 
 /** The air each arrow stands for, cfm, or null when the estimate says nothing about it. */
 export function arrowCfm(arrows: readonly AirflowArrow[], airflow: AirflowResult): Array<number | null> {
@@ -23,14 +26,14 @@ export function arrowCfm(arrows: readonly AirflowArrow[], airflow: AirflowResult
   // A vent drawn at both eaves (one survey entry) feeds two arrows: each gets its share.
   const users = new Map<string, number>();
   const sources = arrows.map((arrow) => {
-    if (arrow.kind === "blocked-path" || isFromHouse(arrow) || arrow.fromPlace === arrow.toPlace) return [];
+    if (isUnmodelled(arrow) || isFromHouse(arrow)) return [];
     return arrow.ventIds.filter((id) => (cfmById.get(id) ?? 0) > 0);
   });
   for (const ids of sources) for (const id of ids) users.set(id, (users.get(id) ?? 0) + 1);
   return arrows.map((arrow, i) => {
     if (isFromHouse(arrow)) return Math.max(0, cfmById.get("ceiling") ?? 0);
     const ids = sources[i]!;
-    if (ids.length === 0) return arrow.kind === "blocked-path" || arrow.fromPlace === arrow.toPlace ? null : 0;
+    if (ids.length === 0) return isUnmodelled(arrow) ? null : 0;
     return ids.reduce((sum, id) => sum + (cfmById.get(id) ?? 0) / (users.get(id) ?? 1), 0);
   });
 }

@@ -4,21 +4,23 @@
  * - ridge vents as a cap over the apex;
  * - box, turbine, off-ridge, cupola and roof-mounted fans on a slope at their drop below the ridge;
  * - gable louvers and gable-mounted fans on the gable end wall (the wall behind the cut), as a
- *   vertical slot or a round fan near the top.
+ *   vertical slot or a round fan near the top;
+ * - a whole-house fan in the ceiling, its housing in the attic and its shutter in the room below.
  */
 import type { AtticAnalysis, AtticInput, Vent, VentKind } from "../ventilation";
-import { EAVE_KINDS, formatNumber, isMechanicalKind, isPoweredKind, VENT_KIND_LABELS } from "../ventilation";
+import { EAVE_KINDS, formatNumber, isMechanicalKind, isPoweredKind, isWholeHouseFanKind, VENT_KIND_LABELS } from "../ventilation";
 import { add, clamp, placeLocal, scale } from "./geometry";
 import { deckYAt, type RoofFrame, type SlopeSide, slopeLengthFt, slopePoint } from "./roof-frame";
 import type { DrawPointFt, PictureShape, PictureText, Primitive } from "./types";
 
-export type Placement = "eave" | "apex" | "slope" | "gable-wall";
+export type Placement = "eave" | "apex" | "slope" | "gable-wall" | "ceiling";
 
 export interface PlacedVent {
   shapeId: string;
   ventIds: string[];
   kind: VentKind;
-  role: "intake" | "exhaust";
+  /** "house-supply": a whole-house fan, which blows house air INTO the attic. */
+  role: "intake" | "exhaust" | "house-supply";
   isFan: boolean;
   placement: Placement;
   side: SlopeSide | null;
@@ -216,9 +218,6 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
   const elsewhere = input.vents.length - inSection.length;
   if (elsewhere > 0) notes.push(`${elsewhere} vent${elsewhere === 1 ? "" : "s"} serving other sections ${elsewhere === 1 ? "is" : "are"} not drawn.`);
   const isSoffitBlocked = input.site?.soffitsBlocked === true;
-  if (inSection.some((v) => v.kind === "whole-house-fan")) {
-    notes.push("The whole-house fan sits in the ceiling: it blows house air up into the attic, and every vent — ridge and soffits alike — lets that air out. It runs with windows open.");
-  }
   if (input.assembly === "unvented") {
     notes.push("Sealed (unvented) attic: the insulation is at the roof line and no outside air is meant to pass through it (IRC R806.5).");
   }
@@ -341,7 +340,7 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
   }
 
   // Slope vents.
-  const slopeVents = inSection.filter((v) => !EAVE_KINDS.has(v.kind) && v.kind !== "ridge" && !isGableMounted(v));
+  const slopeVents = inSection.filter((v) => !EAVE_KINDS.has(v.kind) && v.kind !== "ridge" && !isWholeHouseFanKind(v.kind) && !isGableMounted(v));
   const bySide: Record<SlopeSide, Array<{ vent: Vent; fraction: number }>> = { left: [], right: [] };
   const unplacedSlope: string[] = [];
   slopeVents.forEach((vent, i) => {
@@ -492,7 +491,66 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
     });
   }
   if (unplacedGable.length > 0) notes.push(`Not drawn, for lack of room on the gable wall: ${unplacedGable.join(", ")}.`);
+
+  const houseFans = inSection.filter((v) => isWholeHouseFanKind(v.kind));
+  if (houseFans.length > 0) placed.push(placeWholeHouseFan(ctx, analysis, houseFans));
   if (frame.roofForm === "hip" && gableVents.length > 0) notes.push("A hip roof has no gable walls; the gable vents are drawn on the end wall as recorded.");
 
   return { vents: placed, shapes: ctx.shapes, texts: ctx.texts, notes, eaveIntakeSqIn, isSoffitBlocked };
+}
+
+/**
+ * Every whole-house fan of the section as one fan in the ceiling, left of the middle (under the
+ * slope, clear of the "Rooms below" words): its housing stands in the insulation, its shutter shows
+ * in the room below, and its name sits to its right, low in the attic.
+ */
+function placeWholeHouseFan(ctx: Ctx, analysis: AtticAnalysis, fans: Vent[]): PlacedVent {
+  const { frame, u } = ctx;
+  const x = frame.spanFt * (frame.roofForm === "shed" ? 0.4 : 0.3);
+  const ceilingY = frame.ceilingYFt;
+  const topY = ceilingY - frame.insulationFt - 0.8 * u;
+  const halfWidthFt = 1.7 * u;
+  const shutterY = ceilingY + 0.55 * u;
+  const parts: Primitive[] = [
+    { type: "polygon", pointsFt: [[x - halfWidthFt, topY], [x + halfWidthFt, topY], [x + halfWidthFt, ceilingY], [x - halfWidthFt, ceilingY]], isFilled: true },
+    // The blades seen edge-on, on their hub.
+    { type: "polyline", pointsFt: [[x - halfWidthFt * 0.75, (topY + ceilingY) / 2], [x + halfWidthFt * 0.75, (topY + ceilingY) / 2]] },
+    { type: "circle", centerFt: [x, (topY + ceilingY) / 2], radiusFt: 0.25 * u, isFilled: true },
+    // The louvered shutter in the room's ceiling.
+    { type: "polygon", pointsFt: [[x - halfWidthFt - 0.2 * u, ceilingY], [x + halfWidthFt + 0.2 * u, ceilingY], [x + halfWidthFt + 0.2 * u, shutterY], [x - halfWidthFt - 0.2 * u, shutterY]], isFilled: true },
+  ];
+  for (let i = 1; i <= 4; i++) {
+    const sx = x - halfWidthFt + (2 * halfWidthFt * i) / 5;
+    parts.push({ type: "polyline", pointsFt: [[sx - 0.2 * u, ceilingY + 0.08 * u], [sx + 0.2 * u, shutterY - 0.08 * u]] });
+  }
+  const { airflowCfm, quantity } = ventFigures(analysis, fans);
+  const id = `vent-${fans[0]!.id}`;
+  const figure = `${formatNumber(airflowCfm)} cfm`;
+  ctx.shapes.push({
+    id,
+    kind: "vent",
+    ventKind: "whole-house-fan",
+    ventIds: fans.map((v) => v.id),
+    style: "fan",
+    label: `${fans.length === 1 && fans[0]!.label ? fans[0]!.label : "Whole-house fan"}${quantity > 1 ? ` ×${formatNumber(quantity)}` : ""} in the ceiling: ${figure}`,
+    parts,
+    strokeWidthFt: 0.18 * u,
+  });
+  pushText(ctx, id, [shortName("whole-house-fan", quantity), figure], [x + halfWidthFt + 0.8 * u, topY - 1.6 * u], "start", "fan");
+  return {
+    shapeId: id,
+    ventIds: fans.map((v) => v.id),
+    kind: "whole-house-fan",
+    role: "house-supply",
+    isFan: true,
+    placement: "ceiling",
+    side: x <= frame.spanFt / 2 ? "left" : "right",
+    innerFt: [x, topY - 0.6 * u],
+    outerFt: [x, frame.houseBottomYFt - 0.6 * u],
+    outwardFt: [0, 1],
+    ridgewardFt: [0, 0],
+    radiusFt: halfWidthFt,
+    place: quantity > 1 ? "the whole-house fans" : "the whole-house fan",
+    fraction: 1,
+  };
 }
