@@ -165,7 +165,7 @@ function legendFor(arrows: AirflowArrow[]): LegendEntry[] {
 
 function captionsFor(arrows: AirflowArrow[], notes: string[], houseFanCaption: string | null): PictureCaption[] {
   const captions: PictureCaption[] = [];
-  const intended = arrows.filter((a) => a.style === "intended");
+  const intended = arrows.filter((a) => a.kind === "intended-path");
   if (intended.length > 0) {
     const from = joinPlaces([...new Set(intended.map((a) => a.fromPlace))]);
     const to = joinPlaces([...new Set(intended.map((a) => a.toPlace))]);
@@ -243,7 +243,8 @@ export function buildAirflowPicture(input: AtticInput, analysis: AtticAnalysis, 
       id: "house-text",
       forId: "house",
       text: "Rooms below",
-      atFt: [frame.roofForm === "shed" ? frame.spanFt * 0.3 : frame.spanFt / 2, frame.ceilingYFt + 2 * u],
+      // Beside a whole-house fan's shutter, whose air rises through the middle.
+      atFt: [placed.vents.some((v) => v.placement === "ceiling") ? frame.spanFt * 0.75 : frame.roofForm === "shed" ? frame.spanFt * 0.3 : frame.spanFt / 2, frame.ceilingYFt + 2 * u],
       anchor: "middle",
       fontSizeFt: 1.3 * u,
       style: "house",

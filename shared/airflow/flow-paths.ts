@@ -463,7 +463,9 @@ function houseFanPaths(frame: RoofFrame, analysis: AtticAnalysis, fan: PlacedVen
     if (outlet.placement === "eave") {
       const side = outlet.side ?? "left";
       const channelX = sideX(frame, side, 0.9 * u);
-      out = [[channelX, (deckYAt(frame, channelX) + frame.ceilingYFt - frame.insulationFt) / 2], outlet.innerFt, outlet.outerFt];
+      // Arching up through the attic, clear of the insulation, then down and out at the eave.
+      const arch = underDeckPoint(frame, (x + channelX) / 2, 2.6 * u);
+      out = [arch, [channelX, (deckYAt(frame, channelX) + frame.ceilingYFt - frame.insulationFt) / 2], outlet.innerFt, outlet.outerFt];
     } else {
       out = exitThrough(frame, outlet, from, null);
     }

@@ -493,20 +493,22 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
   if (unplacedGable.length > 0) notes.push(`Not drawn, for lack of room on the gable wall: ${unplacedGable.join(", ")}.`);
 
   const houseFans = inSection.filter((v) => isWholeHouseFanKind(v.kind));
-  if (houseFans.length > 0) placed.push(placeWholeHouseFan(ctx, analysis, houseFans));
+  if (houseFans.length > 0) placed.push(placeWholeHouseFan(ctx, analysis, houseFans, placed));
   if (frame.roofForm === "hip" && gableVents.length > 0) notes.push("A hip roof has no gable walls; the gable vents are drawn on the end wall as recorded.");
 
   return { vents: placed, shapes: ctx.shapes, texts: ctx.texts, notes, eaveIntakeSqIn, isSoffitBlocked };
 }
 
 /**
- * Every whole-house fan of the section as one fan in the ceiling, left of the middle (under the
- * slope, clear of the "Rooms below" words): its housing stands in the insulation, its shutter shows
- * in the room below, and its name sits to its right, low in the attic.
+ * Every whole-house fan of the section as one fan in the ceiling: under the ridge, where its air
+ * rises straight to the top (beside the middle when a gable-wall vent hangs there). Its housing
+ * stands in the insulation and its shutter shows in the room below, with its name beside it.
  */
-function placeWholeHouseFan(ctx: Ctx, analysis: AtticAnalysis, fans: Vent[]): PlacedVent {
+function placeWholeHouseFan(ctx: Ctx, analysis: AtticAnalysis, fans: Vent[], others: readonly PlacedVent[]): PlacedVent {
   const { frame, u } = ctx;
-  const x = frame.spanFt * (frame.roofForm === "shed" ? 0.4 : 0.3);
+  const middleX = frame.roofForm === "shed" ? frame.spanFt * 0.45 : frame.spanFt / 2;
+  const isMiddleTaken = others.some((v) => v.placement === "gable-wall" && Math.abs(v.innerFt[0] - middleX) < v.radiusFt + 2.5 * u);
+  const x = isMiddleTaken ? frame.spanFt * 0.3 : middleX;
   const ceilingY = frame.ceilingYFt;
   const topY = ceilingY - frame.insulationFt - 0.8 * u;
   const halfWidthFt = 1.7 * u;
@@ -536,7 +538,14 @@ function placeWholeHouseFan(ctx: Ctx, analysis: AtticAnalysis, fans: Vent[]): Pl
     parts,
     strokeWidthFt: 0.18 * u,
   });
-  pushText(ctx, id, [shortName("whole-house-fan", quantity), figure], [x + halfWidthFt + 0.8 * u, topY - 1.6 * u], "start", "fan");
+
+  // Name and figure in the room, beside the shutter: the attic above is the air's, and under a
+  // shallow roof has no room for words clear of it. The room's own words move right (build step).
+  const fontSizeFt = 1.2 * u;
+  const textX = x - halfWidthFt - 0.7 * u;
+  [shortName("whole-house-fan", quantity), figure].forEach((text, i) => {
+    ctx.texts.push({ id: `${id}-text-${i}`, forId: id, text, atFt: [textX, ceilingY + 1.3 * u + i * 1.25 * u], anchor: "end", fontSizeFt, style: "fan", isBold: i === 0 });
+  });
   return {
     shapeId: id,
     ventIds: fans.map((v) => v.id),
