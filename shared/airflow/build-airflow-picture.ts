@@ -8,7 +8,7 @@ import type { AtticAnalysis, AtticInput } from "../ventilation";
 import { applyFlowWidths } from "./flow-widths";
 import { joinPlaces } from "./describe-airflow-picture";
 import { flowPaths, HOUSE_FAN_BLOCKED_ID } from "./flow-paths";
-import { boxesOverlap, emptyBounds, includePoint, includePrimitive, textBoxFt, textWidthFt, tidy } from "./geometry";
+import { boxesOverlap, emptyBounds, lineCrossesBox, includePoint, includePrimitive, textBoxFt, textWidthFt, tidy } from "./geometry";
 import { placeVents } from "./place-vents";
 import { deckYAt, roofFrame, type RoofFrame } from "./roof-frame";
 import type { AirflowArrow, AirflowPicture, DrawPointFt, LegendEntry, PictureCaption, PictureShape, PictureText, Primitive, ViewBoxFt } from "./types";
@@ -250,12 +250,17 @@ export function buildAirflowPicture(input: AtticInput, analysis: AtticAnalysis, 
       style: "house",
       isBold: false,
     },
-    insulationText(frame, u, placed.texts),
+    insulationText(frame, u, placed.texts, flows.arrows),
   ];
   const notes = [...frame.notes, ...placed.notes, ...flows.notes];
   let arrows = flows.arrows;
   if (opts.airflow) {
-    const widths = applyFlowWidths(arrows, texts, opts.airflow, u);
+    const glyphsFt = shapes.filter((s) => s.kind === "vent" || s.kind === "eave-intake").map((s) => {
+      const b = emptyBounds();
+      for (const part of s.parts) includePrimitive(b, part, s.strokeWidthFt / 2);
+      return b;
+    });
+    const widths = applyFlowWidths(arrows, texts, opts.airflow, u, glyphsFt);
     arrows = widths.arrows;
     texts.push(...widths.texts);
     notes.push(widths.note);
@@ -290,14 +295,15 @@ export function buildAirflowPicture(input: AtticInput, analysis: AtticAnalysis, 
 
 /**
  * The "Insulation" word on the attic floor, at the first spot along it where it covers no vent's
- * label (a gable fan's name hangs down to the floor on small attics).
+ * label (a gable fan's name hangs down to the floor on small attics) and no airflow line.
  */
-function insulationText(frame: RoofFrame, u: number, others: readonly PictureText[]): PictureText {
+function insulationText(frame: RoofFrame, u: number, others: readonly PictureText[], arrows: readonly AirflowArrow[]): PictureText {
   const spots = frame.roofForm === "shed" ? [0.62, 0.3, 0.45] : [0.75, 0.25, 0.6, 0.4];
   const at = (share: number): DrawPointFt => [frame.spanFt * share, frame.ceilingYFt - frame.insulationFt - 0.45 * u];
   const candidate = (share: number): PictureText => ({
     id: "insulation-text", forId: "insulation", text: "Insulation", atFt: at(share), anchor: "middle", fontSizeFt: 1.2 * u, style: "insulation", isBold: false,
   });
-  const clear = spots.map(candidate).find((t) => others.every((o) => !boxesOverlap(textBoxFt(t), textBoxFt(o))));
-  return clear ?? candidate(spots[0]!);
+  const isClear = (t: PictureText) => others.every((o) => !boxesOverlap(textBoxFt(t), textBoxFt(o))) && arrows.every((a) => !lineCrossesBox(a.pointsFt, textBoxFt(t), a.strokeWidthFt / 2, u));
+  const all = spots.map(candidate);
+  return all.find(isClear) ?? all.find((t) => others.every((o) => !boxesOverlap(textBoxFt(t), textBoxFt(o)))) ?? all[0]!;
 }

@@ -48,6 +48,9 @@ function line(raw: DrawPointFt[], style: FlowStyle, u: number): Line {
   return { pointsFt, head, strokeWidthFt: STROKE_UNITS[style] * u, dashFt: DASH_UNITS[style].map((d) => d * u) };
 }
 
+/** "the gable louvers", "the box vents": several vents under one name take a plural verb. */
+const isPluralPlace = (place: string) => place.endsWith("s");
+
 const cap = (text: string) => `${text[0]?.toUpperCase() ?? ""}${text.slice(1)}`;
 
 /** The edge of a round vent (a gable-wall item) facing `from`. */
@@ -251,12 +254,16 @@ export function flowPaths(frame: RoofFrame, analysis: AtticAnalysis, vents: Plac
   const fromHouse = (sink: PlacedVent): DrawPointFt[] => {
     // Beside the sink, toward the middle, clear of the sink's own label.
     // An apex sink takes it from the left, where no slope vent is drawn first.
-    const offset = sink.placement === "apex" ? -6 : sink.innerFt[0] <= frame.spanFt / 2 ? 6 : -6;
-    const x = Math.min(frame.spanFt - 5 * u, Math.max(5 * u, sink.innerFt[0] + offset * u));
+    // A vent on the gable wall has its name hanging under it: the air rises beside the name and
+    // comes in level at the vent's height.
+    const isOnWall = sink.placement === "gable-wall";
+    const side = sink.placement === "apex" ? -1 : sink.innerFt[0] <= frame.spanFt / 2 ? 1 : -1;
+    const x = Math.min(frame.spanFt - 5 * u, Math.max(5 * u, sink.innerFt[0] + side * (isOnWall ? sink.radiusFt + 5.5 * u : 6 * u)));
     const start: DrawPointFt[] = [
       [x, frame.houseBottomYFt - 0.5 * u],
       [x, frame.ceilingYFt],
       [x, frame.ceilingYFt - frame.insulationFt - 1.2 * u],
+      ...(isOnWall ? [[x, sink.innerFt[1] + 0.6 * u] as DrawPointFt] : []),
     ];
     return [...start, ...exitThrough(frame, sink, start[start.length - 1]!, null)];
   };
@@ -346,8 +353,8 @@ export function flowPaths(frame: RoofFrame, analysis: AtticAnalysis, vents: Plac
         houseFinding.code === "fan-intake-short"
           ? `${cap(sink.place)} gets too little air from the soffits, so it pulls air up from the rooms below through gaps in the ceiling.`
           : houseFinding.code === "no-intake"
-            ? `With no intake at the eaves, ${sink.place} draws its air up from the rooms below through gaps in the ceiling.`
-            : `With more exhaust than intake, ${sink.place} also pulls air up from the rooms below through gaps in the ceiling.`;
+            ? `With no intake at the eaves, ${sink.place} ${isPluralPlace(sink.place) ? "draw their" : "draws its"} air up from the rooms below through gaps in the ceiling.`
+            : `With more exhaust than intake, ${sink.place} also ${isPluralPlace(sink.place) ? "pull" : "pulls"} air up from the rooms below through gaps in the ceiling.`;
       plans.push({
         code: houseFinding.code,
         title: houseFinding.title,

@@ -6,7 +6,7 @@
  */
 import type { AirflowResult } from "../airflow-model/simulate-airflow";
 import { formatNumber } from "../units/format";
-import { boxesOverlap, midpoint, textBoxFt } from "./geometry";
+import { boxesOverlap, type BoxFt, lineCrossesBox, midpoint, textBoxFt } from "./geometry";
 import type { AirflowArrow, PictureText } from "./types";
 
 /** Thinnest and widest flow lines, in drawing units (the head is 1.43 units across). */
@@ -44,7 +44,10 @@ export interface FlowWidths {
   note: string;
 }
 
-export function applyFlowWidths(arrows: readonly AirflowArrow[], texts: readonly PictureText[], airflow: AirflowResult, unitFt: number): FlowWidths {
+/**
+ * @param avoidFt boxes the cfm figures must keep clear of besides words and lines: the vents' glyphs.
+ */
+export function applyFlowWidths(arrows: readonly AirflowArrow[], texts: readonly PictureText[], airflow: AirflowResult, unitFt: number, avoidFt: readonly BoxFt[] = []): FlowWidths {
   const flows = arrowCfm(arrows, airflow);
   const largest = Math.max(0, ...flows.map((f) => f ?? 0));
   const placed = [...texts];
@@ -56,13 +59,20 @@ export function applyFlowWidths(arrows: readonly AirflowArrow[], texts: readonly
     if (cfm >= LABEL_SHARE_OF_LARGEST * largest && cfm >= 5) {
       // No "≈": the PDF's embedded font subsets lack it; the note says these are estimates.
       const text = `${formatNumber(Math.round(cfm))} cfm`;
-      const candidates = [0.3, 0.7, 0.45, 0.15, 0.85].map((at) => {
+      // Beside the line at a few spots along it, above then below (a sloping line runs through a
+      // label set just above its midpoint).
+      const candidates = [0.3, 0.7, 0.45, 0.15, 0.85].flatMap((at) => {
         const [x, y] = midpoint(arrow.pointsFt, at);
-        return { id: `cfm-${arrow.id}`, forId: arrow.id, text, atFt: [x, y - 0.9 * unitFt] as const, anchor: "middle" as const, fontSizeFt: 1.1 * unitFt, style: arrow.style, isBold: true };
+        return [-0.9, -1.9, 2.0, -2.9].map((dy) => ({ id: `cfm-${arrow.id}`, forId: arrow.id, text, atFt: [x, y + dy * unitFt] as const, anchor: "middle" as const, fontSizeFt: 1.1 * unitFt, style: arrow.style, isBold: true }));
       });
-      // Where every spot would cover another word, the label is left out: the arrow's own name still
-      // carries its cfm for screen readers, and a number printed over a vent's name helps nobody.
-      const label = candidates.find((c) => placed.every((t) => !boxesOverlap(textBoxFt(c), textBoxFt(t))));
+      // Where every spot would cover another word, a vent or a line, the label is left out: the
+      // arrow's own name still carries its cfm for screen readers, and a number printed over a
+      // vent's name helps nobody.
+      const isClear = (c: PictureText) => {
+        const box = textBoxFt(c);
+        return placed.every((t) => !boxesOverlap(box, textBoxFt(t))) && avoidFt.every((b) => !boxesOverlap(box, b)) && arrows.every((a) => !lineCrossesBox(a.pointsFt, box, (MAX_FLOW_WIDTH_UNITS * unitFt) / 2, unitFt));
+      };
+      const label = candidates.find(isClear);
       if (label) {
         placed.push(label);
         labels.push(label);

@@ -423,8 +423,12 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
 
   // Gable wall: louvers to the left of centre, fans to the right, near the top.
   const gableVents = inSection.filter(isGableMounted);
-  const louvers = gableVents.filter((v) => !isPoweredKind(v.kind));
-  const fans = gableVents.filter((v) => isPoweredKind(v.kind));
+  // Several louver records (one per gable end, say) are drawn as one pair under one name: the
+  // cross-section shows a single wall, and names of look-alike vents side by side only collide.
+  const louverRecords = gableVents.filter((v) => !isPoweredKind(v.kind));
+  const louvers: Vent[][] = louverRecords.length > 0 ? [louverRecords] : [];
+  const fans: Vent[][] = gableVents.filter((v) => isPoweredKind(v.kind)).map((v) => [v]);
+  const gableGroups = [...louvers, ...fans];
   const centreX = frame.roofForm === "shed" ? frame.spanFt * 0.72 : frame.spanFt / 2;
   const isAlone = louvers.length === 0 || fans.length === 0;
   // Alone: centre, then right, left, …; both kinds: louvers step left of centre, fans right.
@@ -434,48 +438,53 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
   const sideX = (i: number, direction: -1 | 1) => centreX + direction * (3 + 3.4 * i) * u;
   const half = MAX_ON_GABLE_WALL / 2;
   const gableItems = isAlone
-    ? gableVents.slice(0, MAX_ON_GABLE_WALL).map((vent, i) => ({ vent, x: aloneX(i) }))
-    : [...louvers.slice(0, half).map((vent, i) => ({ vent, x: sideX(i, -1) })), ...fans.slice(0, half).map((vent, i) => ({ vent, x: sideX(i, 1) }))];
-  const unplacedGable = gableVents.filter((v) => !gableItems.some((g) => g.vent === v)).map((v) => v.id);
-  for (const [itemIndex, { vent, x }] of gableItems.entries()) {
+    ? gableGroups.slice(0, MAX_ON_GABLE_WALL).map((group, i) => ({ group, x: aloneX(i) }))
+    : [...louvers.slice(0, half).map((group, i) => ({ group, x: sideX(i, -1) })), ...fans.slice(0, half).map((group, i) => ({ group, x: sideX(i, 1) }))];
+  const unplacedGable = gableVents.filter((v) => !gableItems.some((g) => g.group.includes(v))).map((v) => v.id);
+  for (const [itemIndex, { group, x }] of gableItems.entries()) {
+    const vent = group[0]!;
+    const isPair = group.length > 1;
     const isFan = isMechanicalKind(vent.kind);
-    const radiusFt = isFan ? 1.25 * u : 1.5 * u;
+    const halfHeightFt = isFan ? 1.25 * u : 1.5 * u;
+    // How far from the centre arrows stop: a pair is wider than it is tall.
+    const radiusFt = isPair ? 2.2 * u : halfHeightFt;
     const fallback = vent.location === "lower" ? DEFAULT_LOWER_FRACTION : 0.5;
     const { fraction } = slopeFraction(frame, vent, fallback);
     // Low enough that the whole vent sits inside the wall, clear of the deck.
-    const minY = Math.max(deckYAt(frame, x - 1.2 * u), deckYAt(frame, x + 1.2 * u)) + radiusFt + 0.6 * u;
-    const maxY = frame.ceilingYFt - frame.insulationFt - radiusFt - 0.4 * u;
+    const halfWidthFt = isPair ? 1.8 * u : 1.2 * u;
+    const minY = Math.max(deckYAt(frame, x - halfWidthFt), deckYAt(frame, x + halfWidthFt)) + halfHeightFt + 0.6 * u;
+    const maxY = frame.ceilingYFt - frame.insulationFt - halfHeightFt - 0.4 * u;
     if (minY > maxY) {
       unplacedGable.push(vent.id);
       continue;
     }
     const y = clamp(frame.riseFt * clamp(fraction, 0.3, 0.85), minY, maxY);
     const center: DrawPointFt = [x, y];
-    const { nfaSqIn, airflowCfm } = ventFigures(analysis, [vent]);
-    const quantity = vent.quantity ?? 1;
-    const id = `vent-${vent.id}`;
-    const role = vent.location === "lower" ? "intake" : "exhaust";
+    const { nfaSqIn, airflowCfm, quantity } = ventFigures(analysis, group);
+    const id = isPair ? "vent-gable-louvers" : `vent-${vent.id}`;
+    const role = group.every((v) => v.location === "lower") ? "intake" : "exhaust";
+    const ownName = isPair ? SHORT_NAMES[vent.kind][1] : (vent.label ?? `${VENT_KIND_LABELS[vent.kind][0]!.toUpperCase()}${VENT_KIND_LABELS[vent.kind].slice(1)}`);
     ctx.shapes.push({
       id,
       kind: "vent",
       ventKind: vent.kind,
-      ventIds: [vent.id],
+      ventIds: group.map((v) => v.id),
       style: isFan ? "fan" : role === "intake" ? "intake-vent" : "exhaust-vent",
-      label: `${vent.label ?? `${VENT_KIND_LABELS[vent.kind][0]!.toUpperCase()}${VENT_KIND_LABELS[vent.kind].slice(1)}`} on the gable wall${quantity > 1 ? ` ×${formatNumber(quantity)}` : ""}: ${figureText(vent, nfaSqIn, airflowCfm)}`,
-      parts: isFan ? fanGlyph(center, u) : louverGlyph(center, u),
+      label: `${ownName} on the gable wall${quantity > 1 ? ` ×${formatNumber(quantity)}` : ""}: ${figureText(vent, nfaSqIn, airflowCfm)}`,
+      parts: isFan ? fanGlyph(center, u) : isPair ? [...louverGlyph([x - 0.95 * u, y], u), ...louverGlyph([x + 0.95 * u, y], u)] : louverGlyph(center, u),
       strokeWidthFt: 0.18 * u,
     });
     const name = isFan && vent.kind !== "powered-gable" ? (vent.kind === "solar-powered" ? "Solar gable fan" : "Gable fan") : shortName(vent.kind, quantity);
     // Two lines when they fit above the insulation, else the name alone (the figure is in the label).
     // Side by side on the wall, names alone and staggered so neighbours' words don't collide.
     const isCrowded = gableItems.length > 1;
-    const roomFt = frame.ceilingYFt - frame.insulationFt - (y + radiusFt);
+    const roomFt = frame.ceilingYFt - frame.insulationFt - (y + halfHeightFt);
     const lines = !isCrowded && roomFt >= 3.6 * u ? [name, figureText(vent, nfaSqIn, airflowCfm)] : [name];
     const staggerFt = isCrowded && itemIndex % 2 === 1 ? 1.9 * u : 0;
-    pushText(ctx, id, lines, [x, y + radiusFt + 1.6 * u + staggerFt], "middle", isFan ? "fan" : role === "intake" ? "intake-vent" : "exhaust-vent");
+    pushText(ctx, id, lines, [x, y + halfHeightFt + 1.6 * u + staggerFt], "middle", isFan ? "fan" : role === "intake" ? "intake-vent" : "exhaust-vent");
     placed.push({
       shapeId: id,
-      ventIds: [vent.id],
+      ventIds: group.map((v) => v.id),
       kind: vent.kind,
       role,
       isFan,
