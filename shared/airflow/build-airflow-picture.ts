@@ -260,7 +260,10 @@ export function buildAirflowPicture(input: AtticInput, analysis: AtticAnalysis, 
       for (const part of s.parts) includePrimitive(b, part, s.strokeWidthFt / 2);
       return b;
     });
-    const widths = applyFlowWidths(arrows, texts, opts.airflow, u, glyphsFt);
+    const structureLinesFt = shapes
+      .filter((s) => s.kind === "roof-deck" || s.kind === "wall")
+      .flatMap((s) => s.parts.flatMap((part) => (part.type === "polyline" ? [{ pointsFt: part.pointsFt, padFt: s.strokeWidthFt / 2 }] : [])));
+    const widths = applyFlowWidths(arrows, texts, opts.airflow, u, { boxesFt: glyphsFt, linesFt: structureLinesFt });
     arrows = widths.arrows;
     texts.push(...widths.texts);
     notes.push(widths.note);

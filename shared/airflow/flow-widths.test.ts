@@ -3,7 +3,7 @@ import { simulateAirflow } from "../airflow-model";
 import { analyzeAttic, type AtticInput } from "../ventilation";
 import { buildAirflowPicture } from "./index";
 import { MAX_FLOW_WIDTH_UNITS, MIN_FLOW_WIDTH_UNITS } from "./flow-widths";
-import { boxesOverlap, emptyBounds, includePrimitive, textBoxFt } from "./geometry";
+import { boxesOverlap, emptyBounds, includePrimitive, lineCrossesBox, textBoxFt } from "./geometry";
 
 /** A 30 × 50 ft gable at 6/12 with soffits, a ridge vent and a roof fan beside it (Marrow Creek demo style). */
 const fanAndRidge: AtticInput = {
@@ -96,6 +96,27 @@ describe("crowded words on the gable wall", () => {
         const onLine = p.arrows.filter((a) => a.pointsFt.some(([x, y]) => x > box.minXFt && x < box.maxXFt && y > box.minYFt && y < box.maxYFt));
         expect(onLine.map((a) => a.id), t.text).toEqual([]);
       }
+    }
+  });
+});
+
+describe("cfm figures and the roof", () => {
+  it("when a garage with box vents on one slope is labelled, then no cfm figure crosses the roof deck", () => {
+    // The Farrowby garage after its box-vent option: soffits both sides, six box vents on one slope.
+    const input: AtticInput = {
+      ...fanAndRidge,
+      sections: [{ kind: "rect", lengthFt: 24, widthFt: 22, roofForm: "gable", pitchIn12: 6 }],
+      vents: [
+        { id: "soffit", kind: "soffit-individual", location: "lower", quantity: 12, nfaSqInPerUnit: 28 },
+        { id: "boxes", kind: "box", location: "upper", quantity: 6, nfaSqInPerUnit: 50, dropBelowRidgeFt: 1.5 },
+      ],
+    };
+    const p = buildAirflowPicture(input, analyzeAttic(input), { airflow: simulateAirflow(input, { outdoorTempF: 92, atticTempF: 130, houseTempF: 75 }) });
+    const deck = p.shapes.find((s) => s.id === "roof-deck")!;
+    const labels = p.texts.filter((t) => t.id.startsWith("cfm-"));
+    expect(labels.length).toBeGreaterThan(0);
+    for (const t of labels) {
+      for (const part of deck.parts) if (part.type === "polyline") expect(lineCrossesBox(part.pointsFt, textBoxFt(t), deck.strokeWidthFt / 2, p.unitFt), t.text).toBe(false);
     }
   });
 });

@@ -7,7 +7,7 @@
 import type { AirflowResult } from "../airflow-model/simulate-airflow";
 import { formatNumber } from "../units/format";
 import { boxesOverlap, type BoxFt, lineCrossesBox, midpoint, textBoxFt } from "./geometry";
-import type { AirflowArrow, PictureText } from "./types";
+import type { AirflowArrow, DrawPointFt, PictureText } from "./types";
 
 /** Thinnest and widest flow lines, in drawing units (the head is 1.43 units across). */
 export const MIN_FLOW_WIDTH_UNITS = 0.14;
@@ -44,10 +44,15 @@ export interface FlowWidths {
   note: string;
 }
 
-/**
- * @param avoidFt boxes the cfm figures must keep clear of besides words and lines: the vents' glyphs.
- */
-export function applyFlowWidths(arrows: readonly AirflowArrow[], texts: readonly PictureText[], airflow: AirflowResult, unitFt: number, avoidFt: readonly BoxFt[] = []): FlowWidths {
+/** What the cfm figures keep clear of besides words and airflow lines. */
+export interface FlowLabelObstacles {
+  /** The vents' glyphs. */
+  boxesFt: readonly BoxFt[];
+  /** Drawn lines such as the roof deck, with half their stroke. */
+  linesFt: ReadonlyArray<{ pointsFt: readonly DrawPointFt[]; padFt: number }>;
+}
+
+export function applyFlowWidths(arrows: readonly AirflowArrow[], texts: readonly PictureText[], airflow: AirflowResult, unitFt: number, avoid: FlowLabelObstacles = { boxesFt: [], linesFt: [] }): FlowWidths {
   const flows = arrowCfm(arrows, airflow);
   const largest = Math.max(0, ...flows.map((f) => f ?? 0));
   const placed = [...texts];
@@ -70,7 +75,7 @@ export function applyFlowWidths(arrows: readonly AirflowArrow[], texts: readonly
       // vent's name helps nobody.
       const isClear = (c: PictureText) => {
         const box = textBoxFt(c);
-        return placed.every((t) => !boxesOverlap(box, textBoxFt(t))) && avoidFt.every((b) => !boxesOverlap(box, b)) && arrows.every((a) => !lineCrossesBox(a.pointsFt, box, (MAX_FLOW_WIDTH_UNITS * unitFt) / 2, unitFt));
+        return placed.every((t) => !boxesOverlap(box, textBoxFt(t))) && avoid.boxesFt.every((b) => !boxesOverlap(box, b)) && avoid.linesFt.every((l) => !lineCrossesBox(l.pointsFt, box, l.padFt, unitFt)) && arrows.every((a) => !lineCrossesBox(a.pointsFt, box, (MAX_FLOW_WIDTH_UNITS * unitFt) / 2, unitFt));
       };
       const label = candidates.find(isClear);
       if (label) {
