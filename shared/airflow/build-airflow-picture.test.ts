@@ -6,7 +6,7 @@ import { buildAirflowPicture } from "./build-airflow-picture";
 import { describeAirflowPicture } from "./describe-airflow-picture";
 import { DEMO_CASES } from "./demo-cases.test-helpers";
 import type { AirflowPicture, ShortCircuitArrow } from "./types";
-import { boxesOverlap, textBoxFt } from "./geometry";
+import { boxesOverlap, lineCrossesBox, textBoxFt } from "./geometry";
 
 const build = (input: AtticInput, sectionIndex?: number) => buildAirflowPicture(input, analyzeAttic(input), sectionIndex === undefined ? {} : { sectionIndex });
 const shortCircuits = (p: AirflowPicture) => p.arrows.filter((a): a is ShortCircuitArrow => a.kind === "short-circuit-path");
@@ -342,5 +342,18 @@ describe("the whole-house fan", () => {
     const mine = picture.texts.filter((t) => t.forId === "vent-whf");
     const others = picture.texts.filter((t) => t.forId !== "vent-whf");
     for (const t of mine) expect(others.filter((o) => boxesOverlap(textBoxFt(t), textBoxFt(o))).map((o) => o.text)).toEqual([]);
+  });
+});
+
+describe("the rooms' words", () => {
+  it("when air is drawn up from the rooms to box vents on one slope, then no line crosses \"Rooms below\" and the fan's name stays clear of it", () => {
+    // The Whitcombe rental as found: two box vents, no eave intake (the house feeds them).
+    const boxesOnly: AtticInput = { ...DEMO_CASES.balanced, sections: [{ kind: "rect", lengthFt: 40, widthFt: 22, roofForm: "gable", pitchIn12: 5 }], vents: [{ id: "boxes", kind: "box", location: "upper", quantity: 2, nfaSqInPerUnit: 50, dropBelowRidgeFt: 1 }] };
+    for (const input of [boxesOnly, DEMO_CASES.wholeHouseFan, DEMO_CASES.noIntake]) {
+      const picture = build(input);
+      const words = picture.texts.find((t) => t.id === "house-text")!;
+      expect(picture.arrows.filter((a) => lineCrossesBox(a.pointsFt, textBoxFt(words), a.strokeWidthFt / 2, picture.unitFt)).map((a) => a.id)).toEqual([]);
+      expect(picture.texts.filter((t) => t !== words && boxesOverlap(textBoxFt(t), textBoxFt(words))).map((t) => t.text)).toEqual([]);
+    }
   });
 });

@@ -239,17 +239,7 @@ export function buildAirflowPicture(input: AtticInput, analysis: AtticAnalysis, 
 
   const texts: PictureText[] = [
     ...placed.texts,
-    {
-      id: "house-text",
-      forId: "house",
-      text: "Rooms below",
-      // Beside a whole-house fan's shutter, whose air rises through the middle.
-      atFt: [placed.vents.some((v) => v.placement === "ceiling") ? frame.spanFt * 0.75 : frame.roofForm === "shed" ? frame.spanFt * 0.3 : frame.spanFt / 2, frame.ceilingYFt + 2 * u],
-      anchor: "middle",
-      fontSizeFt: 1.3 * u,
-      style: "house",
-      isBold: false,
-    },
+    roomsText(frame, u, flows.arrows, placed.texts),
     insulationText(frame, u, placed.texts, flows.arrows),
   ];
   const notes = [...frame.notes, ...placed.notes, ...flows.notes];
@@ -294,6 +284,20 @@ export function buildAirflowPicture(input: AtticInput, analysis: AtticAnalysis, 
     legend: legendFor(arrows),
     notes,
   };
+}
+
+/**
+ * "Rooms below" in the house, at the first spot no airflow line crosses (air drawn up from the
+ * rooms, or a whole-house fan's, rises through the ceiling).
+ */
+function roomsText(frame: RoofFrame, u: number, arrows: readonly AirflowArrow[], others: readonly PictureText[]): PictureText {
+  const spots = frame.roofForm === "shed" ? [0.3, 0.7, 0.5] : [0.5, 0.75, 0.25];
+  const all = spots.map((share): PictureText => ({
+    id: "house-text", forId: "house", text: "Rooms below", atFt: [frame.spanFt * share, frame.ceilingYFt + 2 * u], anchor: "middle", fontSizeFt: 1.3 * u, style: "house", isBold: false,
+  }));
+  const isClear = (t: PictureText) =>
+    others.every((o) => !boxesOverlap(textBoxFt(t), textBoxFt(o))) && arrows.every((a) => !lineCrossesBox(a.pointsFt, textBoxFt(t), a.strokeWidthFt / 2 + 0.2 * u, u));
+  return all.find(isClear) ?? all[0]!;
 }
 
 /**
