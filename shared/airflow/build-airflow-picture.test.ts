@@ -334,6 +334,8 @@ describe("the whole-house fan", () => {
     const blocked = picture.arrows.filter((a) => a.kind === "blocked-path" && a.ventIds.includes("whf"));
     expect(blocked).toHaveLength(1);
     expect(picture.captions.find((c) => c.id === "caption-house-fan")!.text).toMatch(/no vent to let/);
+    // No eave is blocked here, so the legend promises no X mark.
+    expect(picture.legend.find((l) => l.style === "blocked")!.words).not.toContain("X");
     expectWellFormed(picture);
   });
 

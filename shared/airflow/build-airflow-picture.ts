@@ -158,7 +158,8 @@ function legendFor(arrows: AirflowArrow[]): LegendEntry[] {
     legend.push({ style: "short-circuit", line: "dashed", head: "open-chevron", words: "Short-circuit (dashed line, open arrowhead): air taking a shortcut that skips the eaves. Letters match the notes." });
   }
   if (arrows.some((a) => a.style === "blocked")) {
-    legend.push({ style: "blocked", line: "dotted", head: "stop-bar", words: "Blocked (dotted line ending in a bar, an X at the blocked eave): air that cannot get through." });
+    const hasX = arrows.some((a) => a.kind === "blocked-path" && a.findingCode === "soffits-blocked");
+    legend.push({ style: "blocked", line: "dotted", head: "stop-bar", words: `Blocked (dotted line ending in a bar${hasX ? ", an X at the blocked eave" : ""}): air that cannot get through.` });
   }
   return legend;
 }
