@@ -351,11 +351,15 @@ describe("the rooms' words", () => {
   it("when air is drawn up from the rooms to box vents on one slope, then no line crosses \"Rooms below\" and the fan's name stays clear of it", () => {
     // The Whitcombe rental as found: two box vents, no eave intake (the house feeds them).
     const boxesOnly: AtticInput = { ...DEMO_CASES.balanced, sections: [{ kind: "rect", lengthFt: 40, widthFt: 22, roofForm: "gable", pitchIn12: 5 }], vents: [{ id: "boxes", kind: "box", location: "upper", quantity: 2, nfaSqInPerUnit: 50, dropBelowRidgeFt: 1 }] };
-    for (const input of [boxesOnly, DEMO_CASES.wholeHouseFan, DEMO_CASES.noIntake]) {
+    // A whole-house fan with too little intake: air from the rooms also rises to the ridge.
+    const fanShortIntake: AtticInput = { ...DEMO_CASES.wholeHouseFan, vents: DEMO_CASES.wholeHouseFan.vents.map((v) => (v.id === "soffit" ? { ...v, lengthFt: 30 } : v)) };
+    for (const input of [boxesOnly, DEMO_CASES.wholeHouseFan, DEMO_CASES.noIntake, fanShortIntake]) {
       const picture = build(input);
       const words = picture.texts.find((t) => t.id === "house-text")!;
       expect(picture.arrows.filter((a) => lineCrossesBox(a.pointsFt, textBoxFt(words), a.strokeWidthFt / 2, picture.unitFt)).map((a) => a.id)).toEqual([]);
       expect(picture.texts.filter((t) => t !== words && boxesOverlap(textBoxFt(t), textBoxFt(words))).map((t) => t.text)).toEqual([]);
+      const fanWords = picture.texts.filter((t) => t.forId === "vent-whf");
+      for (const t of fanWords) expect(picture.arrows.filter((a) => lineCrossesBox(a.pointsFt, textBoxFt(t), a.strokeWidthFt / 2, picture.unitFt)).map((a) => a.id)).toEqual([]);
     }
   });
 });

@@ -292,7 +292,7 @@ export function buildAirflowPicture(input: AtticInput, analysis: AtticAnalysis, 
  * rooms, or a whole-house fan's, rises through the ceiling).
  */
 function roomsText(frame: RoofFrame, u: number, arrows: readonly AirflowArrow[], others: readonly PictureText[]): PictureText {
-  const spots = frame.roofForm === "shed" ? [0.3, 0.7, 0.5] : [0.5, 0.75, 0.25];
+  const spots = frame.roofForm === "shed" ? [0.3, 0.7, 0.5, 0.15] : [0.5, 0.75, 0.25, 0.84, 0.16];
   const all = spots.map((share): PictureText => ({
     id: "house-text", forId: "house", text: "Rooms below", atFt: [frame.spanFt * share, frame.ceilingYFt + 2 * u], anchor: "middle", fontSizeFt: 1.3 * u, style: "house", isBold: false,
   }));

@@ -253,11 +253,12 @@ export function flowPaths(frame: RoofFrame, analysis: AtticAnalysis, vents: Plac
   };
   const fromHouse = (sink: PlacedVent): DrawPointFt[] => {
     // Beside the sink, toward the middle, clear of the sink's own label.
-    // An apex sink takes it from the left, where no slope vent is drawn first.
     // A vent on the gable wall has its name hanging under it: the air rises beside the name and
     // comes in level at the vent's height.
     const isOnWall = sink.placement === "gable-wall";
-    const side = sink.placement === "apex" ? -1 : sink.innerFt[0] <= frame.spanFt / 2 ? 1 : -1;
+    // Over the ridge, from the left, where no slope vent is drawn first; right of a whole-house fan,
+    // whose name is on its left.
+    const side = sink.placement === "apex" ? (houseFan ? 1 : -1) : sink.innerFt[0] <= frame.spanFt / 2 ? 1 : -1;
     const x = Math.min(frame.spanFt - 5 * u, Math.max(5 * u, sink.innerFt[0] + side * (isOnWall ? sink.radiusFt + 5.5 * u : 6 * u)));
     const start: DrawPointFt[] = [
       [x, frame.houseBottomYFt - 0.5 * u],
