@@ -3,9 +3,10 @@ import { describe, expect, it } from "vitest";
 import { analyzeAttic, type AtticInput } from "../ventilation";
 import { atticArb } from "../ventilation/arbitraries.test-helpers";
 import { buildAirflowPicture } from "./build-airflow-picture";
+import { describeAirflowPicture } from "./describe-airflow-picture";
 import { DEMO_CASES } from "./demo-cases.test-helpers";
 import type { AirflowPicture, ShortCircuitArrow } from "./types";
-import { boxesOverlap, textBoxFt } from "./geometry";
+import { boxesOverlap, lineCrossesBox, textBoxFt } from "./geometry";
 
 const build = (input: AtticInput, sectionIndex?: number) => buildAirflowPicture(input, analyzeAttic(input), sectionIndex === undefined ? {} : { sectionIndex });
 const shortCircuits = (p: AirflowPicture) => p.arrows.filter((a): a is ShortCircuitArrow => a.kind === "short-circuit-path");
@@ -245,5 +246,120 @@ describe("the insulation word", () => {
     const picture = build(DEMO_CASES.balanced); // a 30 ft wide gable attic
     const word = picture.texts.find((t) => t.id === "insulation-text")!;
     expect(word.atFt[0]).toBeCloseTo(22.5, 6);
+  });
+});
+
+describe("the whole-house fan", () => {
+  // A whole-house fan sits in the ceiling and blows house air up into the attic; the attic's vents
+  // let it out (California Energy Code §150.1(c)12(B): 1 sq ft of attic NFA per 750 cfm [SOURCES.md S33]).
+  const houseFanPaths = (p: AirflowPicture) => p.arrows.filter((a) => a.kind === "house-fan-path");
+  const yRange = (s: ReturnType<typeof shape>) => {
+    const ys = s!.parts.flatMap((p) => (p.type === "circle" ? [p.centerFt[1] - p.radiusFt, p.centerFt[1] + p.radiusFt] : p.pointsFt.map((q) => q[1])));
+    return [Math.min(...ys), Math.max(...ys)] as const;
+  };
+  const ceilingYOf = (p: AirflowPicture) => {
+    const part = shape(p, "ceiling")!.parts[0]!;
+    if (part.type !== "polyline") throw new Error("ceiling is a line");
+    return part.pointsFt[0]![1];
+  };
+
+  it("when a whole-house fan is recorded, then it is drawn in the ceiling, not on the roof, with its name and cfm", () => {
+    const picture = build(DEMO_CASES.wholeHouseFan);
+    const fan = shape(picture, "vent-whf")!;
+    expect(fan.ventKind).toBe("whole-house-fan");
+    expect(fan.style).toBe("fan");
+    const [top, bottom] = yRange(fan);
+    const ceilingY = ceilingYOf(picture);
+    expect(top).toBeLessThan(ceilingY); // reaches up into the attic…
+    expect(bottom).toBeGreaterThan(ceilingY); // …and its shutter shows in the room below
+    expect(top).toBeGreaterThan(picture.riseFt * 0.5); // nowhere near the roof deck
+    expect(fan.label).toBe("Whole-house fan in the ceiling: 4,500 cfm");
+    expect(picture.texts.filter((t) => t.forId === "vent-whf").map((t) => t.text)).toEqual(["Whole-house fan", "4,500 cfm"]);
+    expectWellFormed(picture);
+  });
+
+  it("when it shares the attic with soffits and a ridge vent, then house air rises through the fan into the attic and out at the ridge, and the soffit paths still end at the ridge", () => {
+    const picture = build(DEMO_CASES.wholeHouseFan);
+    const paths = houseFanPaths(picture);
+    expect(paths.map((a) => [a.fromPlace, a.toPlace])).toEqual([["the rooms below", "the ridge vent"]]);
+    const path = paths[0]!;
+    const ceilingY = ceilingYOf(picture);
+    expect(path.pointsFt[0]![1]).toBeGreaterThan(ceilingY); // starts in the rooms
+    expect(path.head.pointsFt[1]![1]).toBeLessThan(0); // leaves above the ridge
+    expect(path.ventIds).toEqual(["whf", "ridge"]);
+    expect(path.style).toBe("intended");
+    // It passes through the fan: some point of the line lies within the fan's width.
+    const fan = shape(picture, "vent-whf")!;
+    const xs = fan.parts.flatMap((p) => (p.type === "circle" ? [p.centerFt[0]] : p.pointsFt.map((q) => q[0])));
+    const crossing = path.pointsFt.find((p) => Math.abs(p[1] - ceilingY) < picture.unitFt * 1.5)!;
+    expect(crossing[0]).toBeGreaterThanOrEqual(Math.min(...xs));
+    expect(crossing[0]).toBeLessThanOrEqual(Math.max(...xs));
+    // The fan is not an exhaust the soffits feed, nor an attic fan short-circuiting the ridge.
+    expect(intended(picture).map((a) => a.toPlace)).toEqual(["the ridge vent", "the ridge vent"]);
+    expect(shortCircuits(picture)).toEqual([]);
+  });
+
+  it("when it is drawn, then the caption and the description say what it does, that it needs attic exhaust area, windows open, and the gas-appliance caution with local codes", () => {
+    const picture = build(DEMO_CASES.wholeHouseFan);
+    const caption = picture.captions.find((c) => c.id === "caption-house-fan")!;
+    expect(caption.style).toBe("intended");
+    for (const words of [/whole-house fan/i, /up into the attic/, /ridge vent/, /750 cfm/, /windows open/, /gas or oil appliances/, /local codes/]) {
+      expect(caption.text).toMatch(words);
+    }
+    const description = describeAirflowPicture(picture);
+    expect(description).toContain(caption.text);
+    expect(description).not.toContain("There is no exhaust vent");
+    expect(picture.legend.find((l) => l.style === "intended")!.words).toMatch(/whole-house fan/);
+  });
+
+  it("when it is recorded as an upper vent, then it is still drawn in the ceiling and never becomes the soffits' exhaust", () => {
+    const input: AtticInput = { ...DEMO_CASES.wholeHouseFan, vents: DEMO_CASES.wholeHouseFan.vents.map((v) => (v.id === "whf" ? { ...v, location: "upper" as const } : v)) };
+    const picture = build(input);
+    expect(houseFanPaths(picture)).toHaveLength(1);
+    expect(intended(picture).every((a) => a.toPlace === "the ridge vent")).toBe(true);
+  });
+
+  it("when the attic has soffits but no upper vent, then the fan's air is drawn leaving through the soffits", () => {
+    const input: AtticInput = { ...DEMO_CASES.wholeHouseFan, vents: DEMO_CASES.wholeHouseFan.vents.filter((v) => v.id !== "ridge") };
+    const picture = build(input);
+    const paths = houseFanPaths(picture);
+    expect(paths.map((a) => a.toPlace)).toEqual(["the left soffit", "the right soffit"]);
+    for (const p of paths) expect(p.head.pointsFt[1]![1]).toBeGreaterThan(picture.riseFt); // out below the eaves
+    expectWellFormed(picture);
+  });
+
+  it("when the attic has no vent at all, then the fan's air is drawn blocked under the roof and the caption says it has no way out", () => {
+    const input: AtticInput = { ...DEMO_CASES.wholeHouseFan, vents: DEMO_CASES.wholeHouseFan.vents.filter((v) => v.id === "whf") };
+    const picture = build(input);
+    const blocked = picture.arrows.filter((a) => a.kind === "blocked-path" && a.ventIds.includes("whf"));
+    expect(blocked).toHaveLength(1);
+    expect(picture.captions.find((c) => c.id === "caption-house-fan")!.text).toMatch(/no vent to let/);
+    // No eave is blocked here, so the legend promises no X mark.
+    expect(picture.legend.find((l) => l.style === "blocked")!.words).not.toContain("X");
+    expectWellFormed(picture);
+  });
+
+  it("when a gable roof is drawn with a whole-house fan, then its texts overlap none of the others", () => {
+    const picture = build(DEMO_CASES.wholeHouseFan);
+    const mine = picture.texts.filter((t) => t.forId === "vent-whf");
+    const others = picture.texts.filter((t) => t.forId !== "vent-whf");
+    for (const t of mine) expect(others.filter((o) => boxesOverlap(textBoxFt(t), textBoxFt(o))).map((o) => o.text)).toEqual([]);
+  });
+});
+
+describe("the rooms' words", () => {
+  it("when air is drawn up from the rooms to box vents on one slope, then no line crosses \"Rooms below\" and the fan's name stays clear of it", () => {
+    // The Whitcombe rental as found: two box vents, no eave intake (the house feeds them).
+    const boxesOnly: AtticInput = { ...DEMO_CASES.balanced, sections: [{ kind: "rect", lengthFt: 40, widthFt: 22, roofForm: "gable", pitchIn12: 5 }], vents: [{ id: "boxes", kind: "box", location: "upper", quantity: 2, nfaSqInPerUnit: 50, dropBelowRidgeFt: 1 }] };
+    // A whole-house fan with too little intake: air from the rooms also rises to the ridge.
+    const fanShortIntake: AtticInput = { ...DEMO_CASES.wholeHouseFan, vents: DEMO_CASES.wholeHouseFan.vents.map((v) => (v.id === "soffit" ? { ...v, lengthFt: 30 } : v)) };
+    for (const input of [boxesOnly, DEMO_CASES.wholeHouseFan, DEMO_CASES.noIntake, fanShortIntake]) {
+      const picture = build(input);
+      const words = picture.texts.find((t) => t.id === "house-text")!;
+      expect(picture.arrows.filter((a) => lineCrossesBox(a.pointsFt, textBoxFt(words), a.strokeWidthFt / 2, picture.unitFt)).map((a) => a.id)).toEqual([]);
+      expect(picture.texts.filter((t) => t !== words && boxesOverlap(textBoxFt(t), textBoxFt(words))).map((t) => t.text)).toEqual([]);
+      const fanWords = picture.texts.filter((t) => t.forId === "vent-whf");
+      for (const t of fanWords) expect(picture.arrows.filter((a) => lineCrossesBox(a.pointsFt, textBoxFt(t), a.strokeWidthFt / 2, picture.unitFt)).map((a) => a.id)).toEqual([]);
+    }
   });
 });

@@ -7,8 +7,8 @@ import type { AirflowResult } from "../airflow-model/simulate-airflow";
 import type { AtticAnalysis, AtticInput } from "../ventilation";
 import { applyFlowWidths } from "./flow-widths";
 import { joinPlaces } from "./describe-airflow-picture";
-import { flowPaths } from "./flow-paths";
-import { boxesOverlap, emptyBounds, includePoint, includePrimitive, textBoxFt, textWidthFt, tidy } from "./geometry";
+import { flowPaths, HOUSE_FAN_BLOCKED_ID } from "./flow-paths";
+import { boxesOverlap, emptyBounds, lineCrossesBox, includePoint, includePrimitive, textBoxFt, textWidthFt, tidy } from "./geometry";
 import { placeVents } from "./place-vents";
 import { deckYAt, roofFrame, type RoofFrame } from "./roof-frame";
 import type { AirflowArrow, AirflowPicture, DrawPointFt, LegendEntry, PictureCaption, PictureShape, PictureText, Primitive, ViewBoxFt } from "./types";
@@ -151,20 +151,22 @@ function viewBoxOf(shapes: PictureShape[], arrows: AirflowArrow[], texts: Pictur
 function legendFor(arrows: AirflowArrow[]): LegendEntry[] {
   const legend: LegendEntry[] = [];
   if (arrows.some((a) => a.style === "intended")) {
-    legend.push({ style: "intended", line: "solid", head: "filled-triangle", words: "Intended airflow (solid line, filled arrowhead): in low at the eaves, up under the roof, out at the top." });
+    const houseFan = arrows.some((a) => a.kind === "house-fan-path") ? " While the whole-house fan runs, house air rises through it and leaves by the vents." : "";
+    legend.push({ style: "intended", line: "solid", head: "filled-triangle", words: `Intended airflow (solid line, filled arrowhead): in low at the eaves, up under the roof, out at the top.${houseFan}` });
   }
   if (arrows.some((a) => a.style === "short-circuit")) {
     legend.push({ style: "short-circuit", line: "dashed", head: "open-chevron", words: "Short-circuit (dashed line, open arrowhead): air taking a shortcut that skips the eaves. Letters match the notes." });
   }
   if (arrows.some((a) => a.style === "blocked")) {
-    legend.push({ style: "blocked", line: "dotted", head: "stop-bar", words: "Blocked (dotted line ending in a bar, an X at the blocked eave): air that cannot get through." });
+    const hasX = arrows.some((a) => a.kind === "blocked-path" && a.findingCode === "soffits-blocked");
+    legend.push({ style: "blocked", line: "dotted", head: "stop-bar", words: `Blocked (dotted line ending in a bar${hasX ? ", an X at the blocked eave" : ""}): air that cannot get through.` });
   }
   return legend;
 }
 
-function captionsFor(arrows: AirflowArrow[], notes: string[]): PictureCaption[] {
+function captionsFor(arrows: AirflowArrow[], notes: string[], houseFanCaption: string | null): PictureCaption[] {
   const captions: PictureCaption[] = [];
-  const intended = arrows.filter((a) => a.style === "intended");
+  const intended = arrows.filter((a) => a.kind === "intended-path");
   if (intended.length > 0) {
     const from = joinPlaces([...new Set(intended.map((a) => a.fromPlace))]);
     const to = joinPlaces([...new Set(intended.map((a) => a.toPlace))]);
@@ -172,10 +174,14 @@ function captionsFor(arrows: AirflowArrow[], notes: string[]): PictureCaption[] 
   }
   const blockedSeen = new Set<string>();
   for (const arrow of arrows) {
-    if (arrow.kind === "blocked-path" && !blockedSeen.has(arrow.caption)) {
+    if (arrow.kind === "blocked-path" && arrow.id !== HOUSE_FAN_BLOCKED_ID && !blockedSeen.has(arrow.caption)) {
       blockedSeen.add(arrow.caption);
       captions.push({ id: `caption-${arrow.id}`, style: "blocked", ...(arrow.findingCode ? { findingCode: arrow.findingCode } : {}), text: arrow.caption });
     }
+  }
+  if (houseFanCaption) {
+    const isBlocked = arrows.some((a) => a.id === HOUSE_FAN_BLOCKED_ID);
+    captions.push({ id: "caption-house-fan", style: isBlocked ? "blocked" : "intended", text: houseFanCaption });
   }
   for (const arrow of arrows) {
     if (arrow.kind === "short-circuit-path") {
@@ -234,22 +240,21 @@ export function buildAirflowPicture(input: AtticInput, analysis: AtticAnalysis, 
 
   const texts: PictureText[] = [
     ...placed.texts,
-    {
-      id: "house-text",
-      forId: "house",
-      text: "Rooms below",
-      atFt: [frame.roofForm === "shed" ? frame.spanFt * 0.3 : frame.spanFt / 2, frame.ceilingYFt + 2 * u],
-      anchor: "middle",
-      fontSizeFt: 1.3 * u,
-      style: "house",
-      isBold: false,
-    },
-    insulationText(frame, u, placed.texts),
+    roomsText(frame, u, flows.arrows, placed.texts),
+    insulationText(frame, u, placed.texts, flows.arrows),
   ];
   const notes = [...frame.notes, ...placed.notes, ...flows.notes];
   let arrows = flows.arrows;
   if (opts.airflow) {
-    const widths = applyFlowWidths(arrows, texts, opts.airflow, u);
+    const glyphsFt = shapes.filter((s) => s.kind === "vent" || s.kind === "eave-intake").map((s) => {
+      const b = emptyBounds();
+      for (const part of s.parts) includePrimitive(b, part, s.strokeWidthFt / 2);
+      return b;
+    });
+    const structureLinesFt = shapes
+      .filter((s) => s.kind === "roof-deck" || s.kind === "wall")
+      .flatMap((s) => s.parts.flatMap((part) => (part.type === "polyline" ? [{ pointsFt: part.pointsFt, padFt: s.strokeWidthFt / 2 }] : [])));
+    const widths = applyFlowWidths(arrows, texts, opts.airflow, u, { boxesFt: glyphsFt, linesFt: structureLinesFt });
     arrows = widths.arrows;
     texts.push(...widths.texts);
     notes.push(widths.note);
@@ -276,22 +281,37 @@ export function buildAirflowPicture(input: AtticInput, analysis: AtticAnalysis, 
       ...(a.kind === "short-circuit-path" ? { tagAtFt: tidyPoint(a.tagAtFt, u) } : {}),
     })),
     texts: texts.map((t) => ({ ...t, atFt: tidyPoint(t.atFt, u), fontSizeFt: tidy(t.fontSizeFt, u) })),
-    captions: captionsFor(arrows, notes),
+    captions: captionsFor(arrows, notes, flows.houseFanCaption),
     legend: legendFor(arrows),
     notes,
   };
 }
 
 /**
- * The "Insulation" word on the attic floor, at the first spot along it where it covers no vent's
- * label (a gable fan's name hangs down to the floor on small attics).
+ * "Rooms below" in the house, at the first spot no airflow line crosses (air drawn up from the
+ * rooms, or a whole-house fan's, rises through the ceiling).
  */
-function insulationText(frame: RoofFrame, u: number, others: readonly PictureText[]): PictureText {
+function roomsText(frame: RoofFrame, u: number, arrows: readonly AirflowArrow[], others: readonly PictureText[]): PictureText {
+  const spots = frame.roofForm === "shed" ? [0.3, 0.7, 0.5, 0.15] : [0.5, 0.75, 0.25, 0.84, 0.16];
+  const all = spots.map((share): PictureText => ({
+    id: "house-text", forId: "house", text: "Rooms below", atFt: [frame.spanFt * share, frame.ceilingYFt + 2 * u], anchor: "middle", fontSizeFt: 1.3 * u, style: "house", isBold: false,
+  }));
+  const isClear = (t: PictureText) =>
+    others.every((o) => !boxesOverlap(textBoxFt(t), textBoxFt(o))) && arrows.every((a) => !lineCrossesBox(a.pointsFt, textBoxFt(t), a.strokeWidthFt / 2 + 0.2 * u, u));
+  return all.find(isClear) ?? all[0]!;
+}
+
+/**
+ * The "Insulation" word on the attic floor, at the first spot along it where it covers no vent's
+ * label (a gable fan's name hangs down to the floor on small attics) and no airflow line.
+ */
+function insulationText(frame: RoofFrame, u: number, others: readonly PictureText[], arrows: readonly AirflowArrow[]): PictureText {
   const spots = frame.roofForm === "shed" ? [0.62, 0.3, 0.45] : [0.75, 0.25, 0.6, 0.4];
   const at = (share: number): DrawPointFt => [frame.spanFt * share, frame.ceilingYFt - frame.insulationFt - 0.45 * u];
   const candidate = (share: number): PictureText => ({
     id: "insulation-text", forId: "insulation", text: "Insulation", atFt: at(share), anchor: "middle", fontSizeFt: 1.2 * u, style: "insulation", isBold: false,
   });
-  const clear = spots.map(candidate).find((t) => others.every((o) => !boxesOverlap(textBoxFt(t), textBoxFt(o))));
-  return clear ?? candidate(spots[0]!);
+  const isClear = (t: PictureText) => others.every((o) => !boxesOverlap(textBoxFt(t), textBoxFt(o))) && arrows.every((a) => !lineCrossesBox(a.pointsFt, textBoxFt(t), a.strokeWidthFt / 2, u));
+  const all = spots.map(candidate);
+  return all.find(isClear) ?? all.find((t) => others.every((o) => !boxesOverlap(textBoxFt(t), textBoxFt(o)))) ?? all[0]!;
 }

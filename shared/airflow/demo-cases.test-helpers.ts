@@ -10,7 +10,7 @@ const base = {
 
 const mainSection = { kind: "rect", lengthFt: 40, widthFt: 30, roofForm: "gable", pitchIn12: 6 } as const;
 
-export const DEMO_CASES: Record<"balanced" | "gableFanRidge" | "mixedExhaust" | "noIntake" | "blockedSoffits", AtticInput> = {
+export const DEMO_CASES: Record<"balanced" | "gableFanRidge" | "mixedExhaust" | "noIntake" | "blockedSoffits" | "wholeHouseFan", AtticInput> = {
   balanced: {
     ...base,
     sections: [mainSection],
@@ -50,5 +50,14 @@ export const DEMO_CASES: Record<"balanced" | "gableFanRidge" | "mixedExhaust" | 
       { id: "ridge", kind: "ridge", location: "upper", lengthFt: 36, nfaSqInPerFt: 18 },
     ],
     site: { soffitsBlocked: true },
+  },
+  wholeHouseFan: {
+    ...base,
+    sections: [mainSection],
+    vents: [
+      { id: "soffit", kind: "soffit-continuous", location: "lower", lengthFt: 80, nfaSqInPerFt: 9 },
+      { id: "ridge", kind: "ridge", location: "upper", lengthFt: 36, nfaSqInPerFt: 18 },
+      { id: "whf", kind: "whole-house-fan", location: "lower", cfm: 4500 },
+    ],
   },
 };

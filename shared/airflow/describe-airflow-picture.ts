@@ -43,10 +43,12 @@ export function describeAirflowPicture(picture: AirflowPicture): string {
   }
   const hasEaveIntake = picture.shapes.some((s) => s.kind === "eave-intake");
   if (!hasEaveIntake) sentences.push("There is no intake at the eaves.");
-  const hasExhaust = picture.shapes.some((s) => s.kind === "vent" && (s.style === "exhaust-vent" || s.style === "fan"));
+  const hasExhaust = picture.shapes.some((s) => s.kind === "vent" && s.ventKind !== "whole-house-fan" && (s.style === "exhaust-vent" || s.style === "fan"));
   if (!hasExhaust) sentences.push("There is no exhaust vent or fan high on the roof.");
 
-  const seen = new Set<string>();
+  const houseFan = picture.captions.find((c) => c.id === "caption-house-fan");
+  if (houseFan) sentences.push(houseFan.text);
+  const seen = new Set<string>([houseFan?.text ?? ""]);
   for (const arrow of picture.arrows) {
     if (arrow.kind === "blocked-path" && !seen.has(arrow.caption)) {
       seen.add(arrow.caption);

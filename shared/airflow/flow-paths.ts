@@ -6,8 +6,13 @@
 import type { AtticAnalysis, Finding, FindingCode } from "../ventilation";
 import { add, arrowHead, lerp, midpoint, scale, smoothPolyline, sub, trimEnd, unit } from "./geometry";
 import type { PlacedVent } from "./place-vents";
+import { formatNumber } from "../units/format";
+import { joinPlaces } from "./describe-airflow-picture";
 import { deckYAt, type RoofFrame, type SlopeSide, sideX, underDeckPoint } from "./roof-frame";
-import type { AirflowArrow, ArrowHead, BlockedArrow, DrawPointFt, FlowStyle, IntendedArrow, ShortCircuitArrow } from "./types";
+import type { AirflowArrow, ArrowHead, BlockedArrow, DrawPointFt, FlowStyle, HouseFanArrow, IntendedArrow, ShortCircuitArrow } from "./types";
+
+/** Id of the arrow drawn when a whole-house fan's air has no vent to leave by. */
+export const HOUSE_FAN_BLOCKED_ID = "blocked-house-fan";
 
 /** At most this many short-circuit arrows; more would hide the roof. The rest go in the notes. */
 export const MAX_SHORT_CIRCUITS = 6;
@@ -42,6 +47,9 @@ function line(raw: DrawPointFt[], style: FlowStyle, u: number): Line {
   const pointsFt = style === "intended" ? trimEnd(smooth, headLengthFt * 0.7) : smooth;
   return { pointsFt, head, strokeWidthFt: STROKE_UNITS[style] * u, dashFt: DASH_UNITS[style].map((d) => d * u) };
 }
+
+/** "the gable louvers", "the box vents": several vents under one name take a plural verb. */
+const isPluralPlace = (place: string) => place.endsWith("s");
 
 const cap = (text: string) => `${text[0]?.toUpperCase() ?? ""}${text.slice(1)}`;
 
@@ -124,6 +132,8 @@ export interface FlowResult {
   notes: string[];
   /** Where insulation blocks an eave: X marks go here. */
   blockedAtFt: DrawPointFt[];
+  /** What a whole-house fan does and needs, in words, when the section has one. */
+  houseFanCaption: string | null;
 }
 
 interface ShortCircuitPlan {
@@ -156,6 +166,7 @@ export function flowPaths(frame: RoofFrame, analysis: AtticAnalysis, vents: Plac
   const sinks = primaryExhausts(vents);
   const eaves = vents.filter((v) => v.placement === "eave");
   const otherIntakes = vents.filter((v) => v.role === "intake" && v.placement !== "eave");
+  const houseFan = vents.find((v) => v.role === "house-supply");
   const finding = (code: FindingCode): Finding | undefined => analysis.findings.find((f) => f.code === code);
 
   // Intended path from each eave with intake (or blocked at the insulation).
@@ -242,13 +253,18 @@ export function flowPaths(frame: RoofFrame, analysis: AtticAnalysis, vents: Plac
   };
   const fromHouse = (sink: PlacedVent): DrawPointFt[] => {
     // Beside the sink, toward the middle, clear of the sink's own label.
-    // An apex sink takes it from the left, where no slope vent is drawn first.
-    const offset = sink.placement === "apex" ? -6 : sink.innerFt[0] <= frame.spanFt / 2 ? 6 : -6;
-    const x = Math.min(frame.spanFt - 5 * u, Math.max(5 * u, sink.innerFt[0] + offset * u));
+    // A vent on the gable wall has its name hanging under it: the air rises beside the name and
+    // comes in level at the vent's height.
+    const isOnWall = sink.placement === "gable-wall";
+    // Over the ridge, from the left, where no slope vent is drawn first; right of a whole-house fan,
+    // whose name is on its left.
+    const side = sink.placement === "apex" ? (houseFan ? 1 : -1) : sink.innerFt[0] <= frame.spanFt / 2 ? 1 : -1;
+    const x = Math.min(frame.spanFt - 5 * u, Math.max(5 * u, sink.innerFt[0] + side * (isOnWall ? sink.radiusFt + 5.5 * u : 6 * u)));
     const start: DrawPointFt[] = [
       [x, frame.houseBottomYFt - 0.5 * u],
       [x, frame.ceilingYFt],
       [x, frame.ceilingYFt - frame.insulationFt - 1.2 * u],
+      ...(isOnWall ? [[x, sink.innerFt[1] + 0.6 * u] as DrawPointFt] : []),
     ];
     return [...start, ...exitThrough(frame, sink, start[start.length - 1]!, null)];
   };
@@ -256,7 +272,7 @@ export function flowPaths(frame: RoofFrame, analysis: AtticAnalysis, vents: Plac
   const pwp = finding("powered-with-passive-exhaust");
   if (pwp) {
     const involved = placedFor(pwp.ventIds);
-    const fan = involved.find((v) => v.isFan);
+    const fan = involved.find((v) => v.isFan && v.role === "exhaust");
     if (fan) {
       for (const source of involved.filter((v) => !v.isFan && v.placement !== "eave")) {
         plans.push({
@@ -332,14 +348,14 @@ export function flowPaths(frame: RoofFrame, analysis: AtticAnalysis, vents: Plac
   }
   const houseFinding = finding("fan-intake-short") ?? finding("no-intake") ?? finding("exhaust-exceeds-intake");
   if (houseFinding) {
-    const sink = houseFinding.code === "fan-intake-short" ? vents.find((v) => v.isFan) : sinks[0];
+    const sink = houseFinding.code === "fan-intake-short" ? vents.find((v) => v.isFan && v.role === "exhaust") : sinks[0];
     if (sink) {
       const sentence =
         houseFinding.code === "fan-intake-short"
           ? `${cap(sink.place)} gets too little air from the soffits, so it pulls air up from the rooms below through gaps in the ceiling.`
           : houseFinding.code === "no-intake"
-            ? `With no intake at the eaves, ${sink.place} draws its air up from the rooms below through gaps in the ceiling.`
-            : `With more exhaust than intake, ${sink.place} also pulls air up from the rooms below through gaps in the ceiling.`;
+            ? `With no intake at the eaves, ${sink.place} ${isPluralPlace(sink.place) ? "draw their" : "draws its"} air up from the rooms below through gaps in the ceiling.`
+            : `With more exhaust than intake, ${sink.place} also ${isPluralPlace(sink.place) ? "pull" : "pulls"} air up from the rooms below through gaps in the ceiling.`;
       plans.push({
         code: houseFinding.code,
         title: houseFinding.title,
@@ -404,6 +420,76 @@ export function flowPaths(frame: RoofFrame, analysis: AtticAnalysis, vents: Plac
     arrows.push(arrow);
   });
 
-  return { arrows, notes, blockedAtFt };
+  const houseFanFlow = houseFan ? houseFanPaths(frame, analysis, houseFan, vents, isSoffitBlocked) : null;
+  if (houseFanFlow) arrows.push(...houseFanFlow.arrows);
+  return { arrows, notes, blockedAtFt, houseFanCaption: houseFanFlow?.caption ?? null };
+}
+
+/** At most this many outlets are drawn for a whole-house fan; the caption says every vent lets air out. */
+const MAX_HOUSE_FAN_OUTLETS = 3;
+
+/**
+ * A whole-house fan's air while it runs: up from the rooms through the fan, into the attic and out
+ * through the upper vents (or the soffits when there are none). Every vent lets its air out, so
+ * the caption says so, with the outlet area it needs (California Energy Code §150.1(c)12(B),
+ * 1 sq ft per 750 cfm [SOURCES.md S33]) and the windows-open and flue-gas cautions [common practice].
+ */
+function houseFanPaths(frame: RoofFrame, analysis: AtticAnalysis, fan: PlacedVent, vents: PlacedVent[], isSoffitBlocked: boolean): { arrows: AirflowArrow[]; caption: string } {
+  const u = frame.unitFt;
+  const [x] = fan.innerFt;
+  const rise: DrawPointFt[] = [fan.outerFt, [x, frame.ceilingYFt], fan.innerFt];
+  const upper = vents.filter((v) => v.role === "exhaust" && !v.isFan).sort((a, b) => a.fraction - b.fraction);
+  const eaves = isSoffitBlocked ? [] : vents.filter((v) => v.placement === "eave");
+  const outlets = (upper.length > 0 ? upper : eaves).slice(0, MAX_HOUSE_FAN_OUTLETS);
+  const cfm = analysis.provided.perVent.filter((p) => fan.ventIds.includes(p.ventId)).reduce((sum, p) => sum + p.airflowCfm, 0);
+  const isShort = analysis.findings.some((f) => f.code === "whole-house-fan-outlet-short");
+  const runs = `When ${fan.place} runs (${formatNumber(cfm)} cfm, windows open), it blows house air up into the attic`;
+  const needs = `The attic needs at least 1 sq ft of vent net free area per 750 cfm of fan (California Energy Code §150.1(c)12(B))${isShort ? "; this attic has less (see the findings)" : ""}.`;
+  const caution = "Run it only with windows open: with them shut it can pull flue gases back down from gas or oil appliances. Follow local codes and the fan maker's instructions.";
+
+  if (outlets.length === 0) {
+    const top = underDeckPoint(frame, x + (frame.apexFt[0] - x) * 0.5, 1.8 * u);
+    const blocked: BlockedArrow = {
+      id: HOUSE_FAN_BLOCKED_ID,
+      kind: "blocked-path",
+      style: "blocked",
+      ...(isShort ? { findingCode: "whole-house-fan-outlet-short" as const } : {}),
+      label: `Air from ${fan.place} has no vent to leave the attic by`,
+      ...line([...rise, [x, fan.innerFt[1] - 2 * u], top], "blocked", u),
+      fromPlace: "the rooms below",
+      toPlace: "the top of the attic",
+      ventIds: fan.ventIds,
+      caption: "",
+    };
+    const caption = `${runs}, but the attic has no vent to let that air out, so the fan pushes hot attic air back into the house. ${needs} ${caution}`;
+    return { arrows: [{ ...blocked, caption }], caption };
+  }
+
+  const arrows = outlets.map((outlet): HouseFanArrow => {
+    const from = fan.innerFt;
+    let out: DrawPointFt[];
+    if (outlet.placement === "eave") {
+      const side = outlet.side ?? "left";
+      const channelX = sideX(frame, side, 0.9 * u);
+      // Arching up through the attic, clear of the insulation, then down and out at the eave.
+      const arch = underDeckPoint(frame, (x + channelX) / 2, 2.6 * u);
+      out = [arch, [channelX, (deckYAt(frame, channelX) + frame.ceilingYFt - frame.insulationFt) / 2], outlet.innerFt, outlet.outerFt];
+    } else {
+      out = exitThrough(frame, outlet, from, null);
+    }
+    return {
+      id: `house-fan-${outlet.shapeId}`,
+      kind: "house-fan-path",
+      style: "intended",
+      label: `When ${fan.place} runs: house air up into the attic, out at ${outlet.place}`,
+      ...line([...rise, ...out], "intended", u),
+      fromPlace: "the rooms below",
+      toPlace: outlet.place,
+      ventIds: [...fan.ventIds, ...outlet.ventIds],
+    };
+  });
+  const places = [...new Set(outlets.map((o) => o.place))];
+  const caption = `${runs}, and the air leaves through ${joinPlaces(places)}${outlets[0]!.placement === "eave" ? "" : " and every other vent, soffits included"}. ${needs} ${caution}`;
+  return { arrows, caption };
 }
 

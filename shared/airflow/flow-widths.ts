@@ -6,8 +6,8 @@
  */
 import type { AirflowResult } from "../airflow-model/simulate-airflow";
 import { formatNumber } from "../units/format";
-import { boxesOverlap, midpoint, textBoxFt } from "./geometry";
-import type { AirflowArrow, PictureText } from "./types";
+import { boxesOverlap, type BoxFt, lineCrossesBox, midpoint, textBoxFt } from "./geometry";
+import type { AirflowArrow, DrawPointFt, PictureText } from "./types";
 
 /** Thinnest and widest flow lines, in drawing units (the head is 1.43 units across). */
 export const MIN_FLOW_WIDTH_UNITS = 0.14;
@@ -15,7 +15,10 @@ export const MAX_FLOW_WIDTH_UNITS = 0.75;
 /** Arrows carrying at least this share of the largest flow are labelled with their cfm. */
 export const LABEL_SHARE_OF_LARGEST = 0.2;
 
-const isFromHouse = (arrow: AirflowArrow) => arrow.fromPlace === "the rooms below";
+/** A short-circuit up through the ceiling: the estimate's ceiling flow. */
+const isFromHouse = (arrow: AirflowArrow) => arrow.kind === "short-circuit-path" && arrow.fromPlace === "the rooms below";
+/** Arrows the estimate says nothing about: blocked air, a loop, a whole-house fan (not modelled). */
+const isUnmodelled = (arrow: AirflowArrow) => arrow.kind === "blocked-path" || arrow.kind === "house-fan-path" || arrow.fromPlace === arrow.toPlace;
 
 /** The air each arrow stands for, cfm, or null when the estimate says nothing about it. */
 export function arrowCfm(arrows: readonly AirflowArrow[], airflow: AirflowResult): Array<number | null> {
@@ -23,14 +26,14 @@ export function arrowCfm(arrows: readonly AirflowArrow[], airflow: AirflowResult
   // A vent drawn at both eaves (one survey entry) feeds two arrows: each gets its share.
   const users = new Map<string, number>();
   const sources = arrows.map((arrow) => {
-    if (arrow.kind === "blocked-path" || isFromHouse(arrow) || arrow.fromPlace === arrow.toPlace) return [];
+    if (isUnmodelled(arrow) || isFromHouse(arrow)) return [];
     return arrow.ventIds.filter((id) => (cfmById.get(id) ?? 0) > 0);
   });
   for (const ids of sources) for (const id of ids) users.set(id, (users.get(id) ?? 0) + 1);
   return arrows.map((arrow, i) => {
     if (isFromHouse(arrow)) return Math.max(0, cfmById.get("ceiling") ?? 0);
     const ids = sources[i]!;
-    if (ids.length === 0) return arrow.kind === "blocked-path" || arrow.fromPlace === arrow.toPlace ? null : 0;
+    if (ids.length === 0) return isUnmodelled(arrow) ? null : 0;
     return ids.reduce((sum, id) => sum + (cfmById.get(id) ?? 0) / (users.get(id) ?? 1), 0);
   });
 }
@@ -41,7 +44,15 @@ export interface FlowWidths {
   note: string;
 }
 
-export function applyFlowWidths(arrows: readonly AirflowArrow[], texts: readonly PictureText[], airflow: AirflowResult, unitFt: number): FlowWidths {
+/** What the cfm figures keep clear of besides words and airflow lines. */
+export interface FlowLabelObstacles {
+  /** The vents' glyphs. */
+  boxesFt: readonly BoxFt[];
+  /** Drawn lines such as the roof deck, with half their stroke. */
+  linesFt: ReadonlyArray<{ pointsFt: readonly DrawPointFt[]; padFt: number }>;
+}
+
+export function applyFlowWidths(arrows: readonly AirflowArrow[], texts: readonly PictureText[], airflow: AirflowResult, unitFt: number, avoid: FlowLabelObstacles = { boxesFt: [], linesFt: [] }): FlowWidths {
   const flows = arrowCfm(arrows, airflow);
   const largest = Math.max(0, ...flows.map((f) => f ?? 0));
   const placed = [...texts];
@@ -53,13 +64,20 @@ export function applyFlowWidths(arrows: readonly AirflowArrow[], texts: readonly
     if (cfm >= LABEL_SHARE_OF_LARGEST * largest && cfm >= 5) {
       // No "≈": the PDF's embedded font subsets lack it; the note says these are estimates.
       const text = `${formatNumber(Math.round(cfm))} cfm`;
-      const candidates = [0.3, 0.7, 0.45, 0.15, 0.85].map((at) => {
+      // Beside the line at a few spots along it, above then below (a sloping line runs through a
+      // label set just above its midpoint).
+      const candidates = [0.3, 0.7, 0.45, 0.15, 0.85].flatMap((at) => {
         const [x, y] = midpoint(arrow.pointsFt, at);
-        return { id: `cfm-${arrow.id}`, forId: arrow.id, text, atFt: [x, y - 0.9 * unitFt] as const, anchor: "middle" as const, fontSizeFt: 1.1 * unitFt, style: arrow.style, isBold: true };
+        return [-0.9, -1.9, 2.0, -2.9].map((dy) => ({ id: `cfm-${arrow.id}`, forId: arrow.id, text, atFt: [x, y + dy * unitFt] as const, anchor: "middle" as const, fontSizeFt: 1.1 * unitFt, style: arrow.style, isBold: true }));
       });
-      // Where every spot would cover another word, the label is left out: the arrow's own name still
-      // carries its cfm for screen readers, and a number printed over a vent's name helps nobody.
-      const label = candidates.find((c) => placed.every((t) => !boxesOverlap(textBoxFt(c), textBoxFt(t))));
+      // Where every spot would cover another word, a vent or a line, the label is left out: the
+      // arrow's own name still carries its cfm for screen readers, and a number printed over a
+      // vent's name helps nobody.
+      const isClear = (c: PictureText) => {
+        const box = textBoxFt(c);
+        return placed.every((t) => !boxesOverlap(box, textBoxFt(t))) && avoid.boxesFt.every((b) => !boxesOverlap(box, b)) && avoid.linesFt.every((l) => !lineCrossesBox(l.pointsFt, box, l.padFt, unitFt)) && arrows.every((a) => !lineCrossesBox(a.pointsFt, box, (MAX_FLOW_WIDTH_UNITS * unitFt) / 2, unitFt));
+      };
+      const label = candidates.find(isClear);
       if (label) {
         placed.push(label);
         labels.push(label);

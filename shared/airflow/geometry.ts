@@ -151,3 +151,15 @@ export function textBoxFt(t: { text: string; atFt: DrawPointFt; anchor: "start" 
 
 export const boxesOverlap = (a: BoxFt, b: BoxFt): boolean =>
   a.minXFt < b.maxXFt && b.minXFt < a.maxXFt && a.minYFt < b.maxYFt && b.minYFt < a.maxYFt;
+
+/** Whether a line (drawn `padFt` wide each side) passes through a box, checked every 0.4 units along it. */
+export function lineCrossesBox(points: readonly DrawPointFt[], box: BoxFt, padFt: number, unitFt: number): boolean {
+  const inside = ([x, y]: DrawPointFt) => x > box.minXFt - padFt && x < box.maxXFt + padFt && y > box.minYFt - padFt && y < box.maxYFt + padFt;
+  for (let i = 1; i < points.length; i++) {
+    const a = points[i - 1]!;
+    const b = points[i]!;
+    const steps = Math.max(1, Math.ceil(Math.hypot(b[0] - a[0], b[1] - a[1]) / (0.4 * unitFt)));
+    for (let k = 0; k <= steps; k++) if (inside([a[0] + ((b[0] - a[0]) * k) / steps, a[1] + ((b[1] - a[1]) * k) / steps])) return true;
+  }
+  return false;
+}

@@ -14,6 +14,7 @@ export type {
   BlockedArrow,
   DrawPointFt,
   FlowStyle,
+  HouseFanArrow,
   IntendedArrow,
   LegendEntry,
   LegendLine,

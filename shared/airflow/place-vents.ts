@@ -4,21 +4,23 @@
  * - ridge vents as a cap over the apex;
  * - box, turbine, off-ridge, cupola and roof-mounted fans on a slope at their drop below the ridge;
  * - gable louvers and gable-mounted fans on the gable end wall (the wall behind the cut), as a
- *   vertical slot or a round fan near the top.
+ *   vertical slot or a round fan near the top;
+ * - a whole-house fan in the ceiling, its housing in the attic and its shutter in the room below.
  */
 import type { AtticAnalysis, AtticInput, Vent, VentKind } from "../ventilation";
-import { EAVE_KINDS, formatNumber, isMechanicalKind, isPoweredKind, VENT_KIND_LABELS } from "../ventilation";
+import { EAVE_KINDS, formatNumber, isMechanicalKind, isPoweredKind, isWholeHouseFanKind, VENT_KIND_LABELS } from "../ventilation";
 import { add, clamp, placeLocal, scale } from "./geometry";
 import { deckYAt, type RoofFrame, type SlopeSide, slopeLengthFt, slopePoint } from "./roof-frame";
 import type { DrawPointFt, PictureShape, PictureText, Primitive } from "./types";
 
-export type Placement = "eave" | "apex" | "slope" | "gable-wall";
+export type Placement = "eave" | "apex" | "slope" | "gable-wall" | "ceiling";
 
 export interface PlacedVent {
   shapeId: string;
   ventIds: string[];
   kind: VentKind;
-  role: "intake" | "exhaust";
+  /** "house-supply": a whole-house fan, which blows house air INTO the attic. */
+  role: "intake" | "exhaust" | "house-supply";
   isFan: boolean;
   placement: Placement;
   side: SlopeSide | null;
@@ -216,9 +218,6 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
   const elsewhere = input.vents.length - inSection.length;
   if (elsewhere > 0) notes.push(`${elsewhere} vent${elsewhere === 1 ? "" : "s"} serving other sections ${elsewhere === 1 ? "is" : "are"} not drawn.`);
   const isSoffitBlocked = input.site?.soffitsBlocked === true;
-  if (inSection.some((v) => v.kind === "whole-house-fan")) {
-    notes.push("The whole-house fan sits in the ceiling: it blows house air up into the attic, and every vent — ridge and soffits alike — lets that air out. It runs with windows open.");
-  }
   if (input.assembly === "unvented") {
     notes.push("Sealed (unvented) attic: the insulation is at the roof line and no outside air is meant to pass through it (IRC R806.5).");
   }
@@ -341,7 +340,7 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
   }
 
   // Slope vents.
-  const slopeVents = inSection.filter((v) => !EAVE_KINDS.has(v.kind) && v.kind !== "ridge" && !isGableMounted(v));
+  const slopeVents = inSection.filter((v) => !EAVE_KINDS.has(v.kind) && v.kind !== "ridge" && !isWholeHouseFanKind(v.kind) && !isGableMounted(v));
   const bySide: Record<SlopeSide, Array<{ vent: Vent; fraction: number }>> = { left: [], right: [] };
   const unplacedSlope: string[] = [];
   slopeVents.forEach((vent, i) => {
@@ -424,8 +423,12 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
 
   // Gable wall: louvers to the left of centre, fans to the right, near the top.
   const gableVents = inSection.filter(isGableMounted);
-  const louvers = gableVents.filter((v) => !isPoweredKind(v.kind));
-  const fans = gableVents.filter((v) => isPoweredKind(v.kind));
+  // Several louver records (one per gable end, say) are drawn as one pair under one name: the
+  // cross-section shows a single wall, and names of look-alike vents side by side only collide.
+  const louverRecords = gableVents.filter((v) => !isPoweredKind(v.kind));
+  const louvers: Vent[][] = louverRecords.length > 0 ? [louverRecords] : [];
+  const fans: Vent[][] = gableVents.filter((v) => isPoweredKind(v.kind)).map((v) => [v]);
+  const gableGroups = [...louvers, ...fans];
   const centreX = frame.roofForm === "shed" ? frame.spanFt * 0.72 : frame.spanFt / 2;
   const isAlone = louvers.length === 0 || fans.length === 0;
   // Alone: centre, then right, left, …; both kinds: louvers step left of centre, fans right.
@@ -435,48 +438,53 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
   const sideX = (i: number, direction: -1 | 1) => centreX + direction * (3 + 3.4 * i) * u;
   const half = MAX_ON_GABLE_WALL / 2;
   const gableItems = isAlone
-    ? gableVents.slice(0, MAX_ON_GABLE_WALL).map((vent, i) => ({ vent, x: aloneX(i) }))
-    : [...louvers.slice(0, half).map((vent, i) => ({ vent, x: sideX(i, -1) })), ...fans.slice(0, half).map((vent, i) => ({ vent, x: sideX(i, 1) }))];
-  const unplacedGable = gableVents.filter((v) => !gableItems.some((g) => g.vent === v)).map((v) => v.id);
-  for (const [itemIndex, { vent, x }] of gableItems.entries()) {
+    ? gableGroups.slice(0, MAX_ON_GABLE_WALL).map((group, i) => ({ group, x: aloneX(i) }))
+    : [...louvers.slice(0, half).map((group, i) => ({ group, x: sideX(i, -1) })), ...fans.slice(0, half).map((group, i) => ({ group, x: sideX(i, 1) }))];
+  const unplacedGable = gableVents.filter((v) => !gableItems.some((g) => g.group.includes(v))).map((v) => v.id);
+  for (const [itemIndex, { group, x }] of gableItems.entries()) {
+    const vent = group[0]!;
+    const isPair = group.length > 1;
     const isFan = isMechanicalKind(vent.kind);
-    const radiusFt = isFan ? 1.25 * u : 1.5 * u;
+    const halfHeightFt = isFan ? 1.25 * u : 1.5 * u;
+    // How far from the centre arrows stop: a pair is wider than it is tall.
+    const radiusFt = isPair ? 2.2 * u : halfHeightFt;
     const fallback = vent.location === "lower" ? DEFAULT_LOWER_FRACTION : 0.5;
     const { fraction } = slopeFraction(frame, vent, fallback);
     // Low enough that the whole vent sits inside the wall, clear of the deck.
-    const minY = Math.max(deckYAt(frame, x - 1.2 * u), deckYAt(frame, x + 1.2 * u)) + radiusFt + 0.6 * u;
-    const maxY = frame.ceilingYFt - frame.insulationFt - radiusFt - 0.4 * u;
+    const halfWidthFt = isPair ? 1.8 * u : 1.2 * u;
+    const minY = Math.max(deckYAt(frame, x - halfWidthFt), deckYAt(frame, x + halfWidthFt)) + halfHeightFt + 0.6 * u;
+    const maxY = frame.ceilingYFt - frame.insulationFt - halfHeightFt - 0.4 * u;
     if (minY > maxY) {
       unplacedGable.push(vent.id);
       continue;
     }
     const y = clamp(frame.riseFt * clamp(fraction, 0.3, 0.85), minY, maxY);
     const center: DrawPointFt = [x, y];
-    const { nfaSqIn, airflowCfm } = ventFigures(analysis, [vent]);
-    const quantity = vent.quantity ?? 1;
-    const id = `vent-${vent.id}`;
-    const role = vent.location === "lower" ? "intake" : "exhaust";
+    const { nfaSqIn, airflowCfm, quantity } = ventFigures(analysis, group);
+    const id = isPair ? "vent-gable-louvers" : `vent-${vent.id}`;
+    const role = group.every((v) => v.location === "lower") ? "intake" : "exhaust";
+    const ownName = isPair ? SHORT_NAMES[vent.kind][1] : (vent.label ?? `${VENT_KIND_LABELS[vent.kind][0]!.toUpperCase()}${VENT_KIND_LABELS[vent.kind].slice(1)}`);
     ctx.shapes.push({
       id,
       kind: "vent",
       ventKind: vent.kind,
-      ventIds: [vent.id],
+      ventIds: group.map((v) => v.id),
       style: isFan ? "fan" : role === "intake" ? "intake-vent" : "exhaust-vent",
-      label: `${vent.label ?? `${VENT_KIND_LABELS[vent.kind][0]!.toUpperCase()}${VENT_KIND_LABELS[vent.kind].slice(1)}`} on the gable wall${quantity > 1 ? ` ×${formatNumber(quantity)}` : ""}: ${figureText(vent, nfaSqIn, airflowCfm)}`,
-      parts: isFan ? fanGlyph(center, u) : louverGlyph(center, u),
+      label: `${ownName} on the gable wall${quantity > 1 ? ` ×${formatNumber(quantity)}` : ""}: ${figureText(vent, nfaSqIn, airflowCfm)}`,
+      parts: isFan ? fanGlyph(center, u) : isPair ? [...louverGlyph([x - 0.95 * u, y], u), ...louverGlyph([x + 0.95 * u, y], u)] : louverGlyph(center, u),
       strokeWidthFt: 0.18 * u,
     });
     const name = isFan && vent.kind !== "powered-gable" ? (vent.kind === "solar-powered" ? "Solar gable fan" : "Gable fan") : shortName(vent.kind, quantity);
     // Two lines when they fit above the insulation, else the name alone (the figure is in the label).
     // Side by side on the wall, names alone and staggered so neighbours' words don't collide.
     const isCrowded = gableItems.length > 1;
-    const roomFt = frame.ceilingYFt - frame.insulationFt - (y + radiusFt);
+    const roomFt = frame.ceilingYFt - frame.insulationFt - (y + halfHeightFt);
     const lines = !isCrowded && roomFt >= 3.6 * u ? [name, figureText(vent, nfaSqIn, airflowCfm)] : [name];
     const staggerFt = isCrowded && itemIndex % 2 === 1 ? 1.9 * u : 0;
-    pushText(ctx, id, lines, [x, y + radiusFt + 1.6 * u + staggerFt], "middle", isFan ? "fan" : role === "intake" ? "intake-vent" : "exhaust-vent");
+    pushText(ctx, id, lines, [x, y + halfHeightFt + 1.6 * u + staggerFt], "middle", isFan ? "fan" : role === "intake" ? "intake-vent" : "exhaust-vent");
     placed.push({
       shapeId: id,
-      ventIds: [vent.id],
+      ventIds: group.map((v) => v.id),
       kind: vent.kind,
       role,
       isFan,
@@ -492,7 +500,75 @@ export function placeVents(input: AtticInput, analysis: AtticAnalysis, frame: Ro
     });
   }
   if (unplacedGable.length > 0) notes.push(`Not drawn, for lack of room on the gable wall: ${unplacedGable.join(", ")}.`);
+
+  const houseFans = inSection.filter((v) => isWholeHouseFanKind(v.kind));
+  if (houseFans.length > 0) placed.push(placeWholeHouseFan(ctx, analysis, houseFans, placed));
   if (frame.roofForm === "hip" && gableVents.length > 0) notes.push("A hip roof has no gable walls; the gable vents are drawn on the end wall as recorded.");
 
   return { vents: placed, shapes: ctx.shapes, texts: ctx.texts, notes, eaveIntakeSqIn, isSoffitBlocked };
+}
+
+/**
+ * Every whole-house fan of the section as one fan in the ceiling: under the ridge, where its air
+ * rises straight to the top (beside the middle when a gable-wall vent hangs there). Its housing
+ * stands in the insulation and its shutter shows in the room below, with its name beside it.
+ */
+function placeWholeHouseFan(ctx: Ctx, analysis: AtticAnalysis, fans: Vent[], others: readonly PlacedVent[]): PlacedVent {
+  const { frame, u } = ctx;
+  const middleX = frame.roofForm === "shed" ? frame.spanFt * 0.45 : frame.spanFt / 2;
+  const isMiddleTaken = others.some((v) => v.placement === "gable-wall" && Math.abs(v.innerFt[0] - middleX) < v.radiusFt + 2.5 * u);
+  const x = isMiddleTaken ? frame.spanFt * 0.3 : middleX;
+  const ceilingY = frame.ceilingYFt;
+  const topY = ceilingY - frame.insulationFt - 0.8 * u;
+  const halfWidthFt = 1.7 * u;
+  const shutterY = ceilingY + 0.55 * u;
+  const parts: Primitive[] = [
+    { type: "polygon", pointsFt: [[x - halfWidthFt, topY], [x + halfWidthFt, topY], [x + halfWidthFt, ceilingY], [x - halfWidthFt, ceilingY]], isFilled: true },
+    // The blades seen edge-on, on their hub.
+    { type: "polyline", pointsFt: [[x - halfWidthFt * 0.75, (topY + ceilingY) / 2], [x + halfWidthFt * 0.75, (topY + ceilingY) / 2]] },
+    { type: "circle", centerFt: [x, (topY + ceilingY) / 2], radiusFt: 0.25 * u, isFilled: true },
+    // The louvered shutter in the room's ceiling.
+    { type: "polygon", pointsFt: [[x - halfWidthFt - 0.2 * u, ceilingY], [x + halfWidthFt + 0.2 * u, ceilingY], [x + halfWidthFt + 0.2 * u, shutterY], [x - halfWidthFt - 0.2 * u, shutterY]], isFilled: true },
+  ];
+  for (let i = 1; i <= 4; i++) {
+    const sx = x - halfWidthFt + (2 * halfWidthFt * i) / 5;
+    parts.push({ type: "polyline", pointsFt: [[sx - 0.2 * u, ceilingY + 0.08 * u], [sx + 0.2 * u, shutterY - 0.08 * u]] });
+  }
+  const { airflowCfm, quantity } = ventFigures(analysis, fans);
+  const id = `vent-${fans[0]!.id}`;
+  const figure = `${formatNumber(airflowCfm)} cfm`;
+  ctx.shapes.push({
+    id,
+    kind: "vent",
+    ventKind: "whole-house-fan",
+    ventIds: fans.map((v) => v.id),
+    style: "fan",
+    label: `${fans.length === 1 && fans[0]!.label ? fans[0]!.label : "Whole-house fan"}${quantity > 1 ? ` ×${formatNumber(quantity)}` : ""} in the ceiling: ${figure}`,
+    parts,
+    strokeWidthFt: 0.18 * u,
+  });
+
+  // Name and figure in the room, beside the shutter: the attic above is the air's, and under a
+  // shallow roof has no room for words clear of it. The room's own words move right (build step).
+  const fontSizeFt = 1.2 * u;
+  const textX = x - halfWidthFt - 0.7 * u;
+  [shortName("whole-house-fan", quantity), figure].forEach((text, i) => {
+    ctx.texts.push({ id: `${id}-text-${i}`, forId: id, text, atFt: [textX, ceilingY + 1.3 * u + i * 1.25 * u], anchor: "end", fontSizeFt, style: "fan", isBold: i === 0 });
+  });
+  return {
+    shapeId: id,
+    ventIds: fans.map((v) => v.id),
+    kind: "whole-house-fan",
+    role: "house-supply",
+    isFan: true,
+    placement: "ceiling",
+    side: x <= frame.spanFt / 2 ? "left" : "right",
+    innerFt: [x, topY - 0.6 * u],
+    outerFt: [x, frame.houseBottomYFt - 0.6 * u],
+    outwardFt: [0, 1],
+    ridgewardFt: [0, 0],
+    radiusFt: halfWidthFt,
+    place: quantity > 1 ? "the whole-house fans" : "the whole-house fan",
+    fraction: 1,
+  };
 }

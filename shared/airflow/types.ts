@@ -134,7 +134,17 @@ export interface ShortCircuitArrow extends ArrowBase {
   sentence: string;
 }
 
-export type AirflowArrow = IntendedArrow | BlockedArrow | ShortCircuitArrow;
+/**
+ * A whole-house fan's air while it runs (windows open): up from the rooms through the fan in the
+ * ceiling, into the attic and out through its vents. Drawn like intended airflow; its own kind so
+ * the soffit-to-ridge wording and the estimate's cfm stay apart from it.
+ */
+export interface HouseFanArrow extends ArrowBase {
+  kind: "house-fan-path";
+  style: "intended";
+}
+
+export type AirflowArrow = IntendedArrow | BlockedArrow | ShortCircuitArrow | HouseFanArrow;
 
 export interface PictureCaption {
   id: string;

@@ -58,6 +58,21 @@ export function AirflowSvg({ picture, widthPt }: { picture: AirflowPicture; widt
           ) : (
             <Polyline points={pts(arrow.head.pointsFt)} fill="none" stroke={STROKE[arrow.style]} strokeWidth={arrow.strokeWidthFt} />
           )}
+          {/* The letter the caption under the picture names ("Short-circuit A — …"), as on screen. */}
+          {arrow.kind === "short-circuit-path" ? (
+            <G>
+              <Circle cx={arrow.tagAtFt[0]} cy={arrow.tagAtFt[1]} r={picture.unitFt} fill="#ffffff" stroke={STROKE["short-circuit"]} strokeWidth={0.22 * picture.unitFt} />
+              <SvgText
+                x={arrow.tagAtFt[0]}
+                y={arrow.tagAtFt[1] + 0.42 * picture.unitFt}
+                textAnchor="middle"
+                fill={STROKE["short-circuit"]}
+                style={{ fontSize: 1.2 * picture.unitFt, fontFamily: PLEX_FAMILIES, fontWeight: 700 }}
+              >
+                {arrow.tag}
+              </SvgText>
+            </G>
+          ) : null}
         </G>
       ))}
       {picture.texts.map((text) => (
