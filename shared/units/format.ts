@@ -53,7 +53,7 @@ export function formatNumber(value: number, options?: FormatNumberOptions): stri
     const text = groupThousands(String(magnitude)) + (min > 0 ? `.${"0".repeat(min)}` : "");
     return isNegative ? (text === "0" ? "0" : `-${text}`) : text;
   }
-  const text = formatDecimal(magnitude, max, min);
+  const text = formatScaled(magnitude, max, min) ?? formatDecimal(magnitude, max, min);
   return isNegative ? (text === "0" ? "0" : `-${text}`) : text;
 }
 
@@ -65,6 +65,31 @@ function groupThousands(digits: string): string {
   let text = digits.slice(0, head);
   for (; head < length; head += 3) text += `,${digits.slice(head, head + 3)}`;
   return text;
+}
+
+const POWERS_OF_TEN = Array.from({ length: 21 }, (_, i) => 10 ** i);
+
+/**
+ * The quick way for most figures: scale by 10^max and round. It equals rounding the shortest decimal
+ * whenever the scaled value is clearly away from a half (the shortest decimal is within half an ulp
+ * of the double, far less than the margin kept here); near a half, or for large values, it declines
+ * (undefined) and the digit-string way decides.
+ */
+function formatScaled(magnitude: number, max: number, min: number): string | undefined {
+  const scaled = magnitude * POWERS_OF_TEN[max]!;
+  if (!(scaled < 1e15)) return undefined;
+  const rounded = Math.round(scaled);
+  if (Math.abs(scaled - rounded) > 0.5 - 1e-6) return undefined;
+  let digits = String(rounded);
+  let fractionLength = max;
+  while (fractionLength > min && digits.charCodeAt(digits.length - 1) === 48 && digits.length > 1) {
+    digits = digits.slice(0, -1);
+    fractionLength -= 1;
+  }
+  if (rounded === 0) return min > 0 ? `0.${"0".repeat(min)}` : "0";
+  if (fractionLength === 0) return groupThousands(digits);
+  if (digits.length <= fractionLength) return `0.${"0".repeat(fractionLength - digits.length)}${digits}`;
+  return `${groupThousands(digits.slice(0, digits.length - fractionLength))}.${digits.slice(digits.length - fractionLength)}`;
 }
 
 /**
@@ -79,7 +104,8 @@ function formatDecimal(magnitude: number, max: number, min: number): string {
   const dot = mantissa.indexOf(".");
   let digits = dot < 0 ? mantissa : mantissa.slice(0, dot) + mantissa.slice(dot + 1);
   let point = (dot < 0 ? mantissa.length : dot) + (e < 0 ? 0 : Number(shortest.slice(e + 1)));
-  const leadingZeros = digits.length - digits.replace(/^0+/, "").length;
+  let leadingZeros = 0;
+  while (leadingZeros < digits.length - 1 && digits.charCodeAt(leadingZeros) === 48) leadingZeros += 1;
   digits = digits.slice(leadingZeros);
   point -= leadingZeros;
 
