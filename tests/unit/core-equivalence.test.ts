@@ -7,7 +7,7 @@
 import { readFileSync } from "node:fs";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { analyzeAttic, AtticInputSchema } from "../../shared/ventilation/index";
+import { analyzeAttic, analyzeParsedAttic, AtticInputSchema, ParsedAtticSchema, tryAnalyzeAttic } from "../../shared/ventilation/index";
 import { atticArb } from "../../shared/ventilation/arbitraries.test-helpers";
 import { analyzeAttic as analyzeBefore } from "../setup/frozen-core/analyze-attic-3600f6f.mjs";
 import { benchFixtures, RECORDED_ANALYSES_PATH } from "../setup/frozen-core/bench-fixtures";
@@ -18,6 +18,7 @@ describe("analyzeAttic before and after issue 17", () => {
   for (const [name, input] of Object.entries(benchFixtures())) {
     it(`when the ${name} is analysed, then the JSON is the one recorded before the change, byte for byte`, () => {
       expect(JSON.stringify(analyzeAttic(input))).toBe(JSON.stringify(recorded[name]));
+      expect(JSON.stringify(analyzeParsedAttic(ParsedAtticSchema.parse(input)))).toBe(JSON.stringify(recorded[name]));
       // The frozen copy is the core that made the recording.
       expect(JSON.stringify(analyzeBefore(input))).toBe(JSON.stringify(recorded[name]));
     });
@@ -30,6 +31,11 @@ describe("analyzeAttic before and after issue 17", () => {
         const after = analyzeAttic(input);
         expect(after).toStrictEqual(before);
         expect(JSON.stringify(after)).toBe(JSON.stringify(before));
+        // The trusting entry, on the same input parsed once at the boundary, and the form's entry.
+        const trusted = analyzeParsedAttic(ParsedAtticSchema.parse(input));
+        expect(trusted).toStrictEqual(before);
+        expect(JSON.stringify(trusted)).toBe(JSON.stringify(before));
+        expect(tryAnalyzeAttic(input)).toStrictEqual({ ok: true, analysis: before });
       }),
       { numRuns: 300 },
     );
@@ -49,6 +55,7 @@ describe("analyzeAttic before and after issue 17", () => {
           return "no error";
         };
         expect(issues(() => analyzeAttic(bad))).toStrictEqual(issues(() => analyzeBefore(bad)));
+        expect(tryAnalyzeAttic(bad).ok).toBe(false);
       }),
       { numRuns: 50 },
     );
