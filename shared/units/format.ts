@@ -46,11 +46,12 @@ export function formatNumber(value: number, options?: FormatNumberOptions): stri
   if (!Number.isFinite(value)) return "—";
   const max = options?.maxFractionDigits ?? 2;
   const min = Math.min(options?.minFractionDigits ?? 0, max);
-  const isNegative = value < 0 || Object.is(value, -0);
+  const isNegative = value < 0 || (value === 0 && 1 / value < 0);
   const magnitude = isNegative ? -value : value;
   if (Number.isInteger(magnitude) && magnitude < 1e21) {
     // The common case: a whole number, whose shortest decimal is its own digits.
-    const text = groupThousands(String(magnitude)) + (min > 0 ? `.${"0".repeat(min)}` : "");
+    const whole = groupThousands(String(magnitude));
+    const text = min > 0 ? `${whole}.${"0".repeat(min)}` : whole;
     return isNegative ? (text === "0" ? "0" : `-${text}`) : text;
   }
   const text = formatScaled(magnitude, max, min) ?? formatDecimal(magnitude, max, min);
@@ -78,15 +79,15 @@ const POWERS_OF_TEN = Array.from({ length: 21 }, (_, i) => 10 ** i);
 function formatScaled(magnitude: number, max: number, min: number): string | undefined {
   const scaled = magnitude * POWERS_OF_TEN[max]!;
   if (!(scaled < 1e15)) return undefined;
-  const rounded = Math.round(scaled);
+  let rounded = Math.round(scaled);
   if (Math.abs(scaled - rounded) > 0.5 - 1e-6) return undefined;
-  let digits = String(rounded);
+  if (rounded === 0) return min > 0 ? `0.${"0".repeat(min)}` : "0";
   let fractionLength = max;
-  while (fractionLength > min && digits.charCodeAt(digits.length - 1) === 48 && digits.length > 1) {
-    digits = digits.slice(0, -1);
+  while (fractionLength > min && rounded % 10 === 0) {
+    rounded /= 10;
     fractionLength -= 1;
   }
-  if (rounded === 0) return min > 0 ? `0.${"0".repeat(min)}` : "0";
+  const digits = String(rounded);
   if (fractionLength === 0) return groupThousands(digits);
   if (digits.length <= fractionLength) return `0.${"0".repeat(fractionLength - digits.length)}${digits}`;
   return `${groupThousands(digits.slice(0, digits.length - fractionLength))}.${digits.slice(digits.length - fractionLength)}`;

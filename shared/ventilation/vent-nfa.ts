@@ -74,6 +74,10 @@ export function ventNfa(vent: Vent): VentNfa {
     explanation = "no size recorded";
   }
   const fullNfaSqIn = roundTo(exactSqIn, 2);
+  if (vent.condition === undefined || vent.condition === "open" || vent.condition === "damaged") {
+    // All of it counts (conditionShare's answer for these, without building it for every vent).
+    return nfaEntry(vent, false, false, fullNfaSqIn, exactSqIn, fullNfaSqIn, 1, 0, `${explanation} = ${formatNumber(fullNfaSqIn)} sq in`);
+  }
   const { openShare, words } = conditionShare(vent, quantity);
   const countedExactSqIn = exactSqIn * openShare;
   const nfaSqIn = roundTo(countedExactSqIn, 2);
