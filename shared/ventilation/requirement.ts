@@ -207,7 +207,10 @@ function checkPlacement(input: RequirementInput, edition: "2009" | "2012" | "201
   }
   const lowQualifying: typeof lower = [];
   const lowOther: typeof lower = [];
-  for (const v of lower) (edition === "2018" ? v.position.isInBottomThird : v.position.isEaveVent) ? lowQualifying.push(v) : lowOther.push(v);
+  for (const v of lower) {
+    if (edition === "2018" ? v.position.isInBottomThird : v.position.isEaveVent) lowQualifying.push(v);
+    else lowOther.push(v);
+  }
 
   const upperQSqIn = sumExactSqIn(qualifying);
   const lowerQSqIn = sumExactSqIn(lowQualifying);
