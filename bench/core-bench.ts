@@ -65,6 +65,6 @@ for (const c of candidates) {
   const median = quantile(s, 0.5);
   const isBaseline = c === candidates[0];
   const goal = c.label.startsWith("trusted") ? ` · goal ≤ ${GOAL_US} µs: ${median <= GOAL_US ? "met" : "NOT met"}` : "";
-  const ratio = isBaseline || c.label.startsWith("trusted, 200") ? "" : ` · ${(median / baselineUs).toFixed(3)}× before (${(baselineUs / median).toFixed(1)} times faster)`;
+  const ratio = isBaseline || c.label.startsWith("trusted, 200") || c.label.startsWith("parse") ? "" : ` · ${(median / baselineUs).toFixed(3)}× before (${(baselineUs / median).toFixed(1)} times faster)`;
   console.log(`${c.label.padEnd(32)} median ${median.toFixed(1).padStart(7)} µs · p99 ${quantile(s, 0.99).toFixed(1).padStart(7)} µs${goal}${ratio}`);
 }
