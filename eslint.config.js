@@ -17,7 +17,7 @@ const featureZones = features.map((name) => ({
 }));
 
 export default tseslint.config(
-  { ignores: ["dist/**", "node_modules/**", ".var/**", "drizzle/**", "public/**"] },
+  { ignores: ["dist/**", "node_modules/**", ".var/**", "drizzle/**", "public/**", "tests/setup/frozen-core/*.mjs"] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -1,6 +1,7 @@
 /**
- * simulateAirflow on the 20-section, 200-vent attic (25 powered fans), summer conditions, beside
- * analyzeAttic on the same attic in the same run: `npm run bench -- airflow-model`.
+ * simulateAirflow on the 20-section attic of bench/core-fixture.ts (150 vent rows, the most a space
+ * may hold; 18 powered fans), summer conditions, beside analyzeAttic on the same attic in the same
+ * run: `npm run bench -- airflow-model`.
  * "Unchanged vents" reuses the vent objects between runs, as the survey does on a keystroke (the
  * core's per-vent NFA is kept per vent object); "every vent new" clones the attic before each run
  * (outside the timing), the worst case.
@@ -27,7 +28,7 @@ function time(label: string, runs: number, prepare: () => unknown, run: (x: neve
 }
 
 const result = simulateAirflow(input, summer);
-console.log(`200 vents, ${result.openings.length} openings; fans ${result.fanCfm.toFixed(0)} cfm; attic ${result.atticPressurePa} Pa, house ${result.housePressurePa} Pa`);
+console.log(`${input.vents.length} vent rows, ${result.openings.length} openings; fans ${result.fanCfm.toFixed(0)} cfm; attic ${result.atticPressurePa} Pa, house ${result.housePressurePa} Pa`);
 time("simulateAirflow, unchanged vents", 2000, () => input, (x: typeof input) => simulateAirflow(x, summer));
 time("simulateAirflow, every vent new", 1000, () => structuredClone(input), (x: typeof input) => simulateAirflow(x, summer));
 time("baseline: analyzeAttic, same attic", 1000, () => input, (x: typeof input) => analyzeAttic(x));

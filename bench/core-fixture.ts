@@ -1,7 +1,11 @@
-/** A large attic for benchmarks: 20 sections and 200 vents (Tallgrass Exteriors, Marrow Creek demo). */
-import type { AtticInput, Vent } from "../shared/ventilation/index";
+/**
+ * A large attic for benchmarks: 20 sections and, by default, 150 vent rows, the most one space may
+ * hold (`LIMITS.maxVents`, decision 27); pass 200 for the attic issue 17 measured before that limit
+ * (it no longer validates, so only the trusted core entry takes it). Tallgrass Exteriors demo.
+ */
+import { LIMITS, type AtticInput, type Vent } from "../shared/ventilation/index";
 
-export function largeAttic(): AtticInput {
+export function largeAttic(ventRows: number = LIMITS.maxVents): AtticInput {
   const sections: AtticInput["sections"] = Array.from({ length: 20 }, (_, i) => {
     if (i % 3 === 0) return { kind: "rect", id: `sec-${i}`, lengthFt: 30 + i, widthFt: 24, roofForm: "gable", pitchIn12: 6 };
     if (i % 3 === 1) {
@@ -18,7 +22,7 @@ export function largeAttic(): AtticInput {
     }
     return { kind: "area", id: `sec-${i}`, areaSqFt: 400 + i * 10, roofForm: "shed", pitchIn12: 4, spanFt: 16 };
   });
-  const vents: Vent[] = Array.from({ length: 200 }, (_, i): Vent => {
+  const vents: Vent[] = Array.from({ length: ventRows }, (_, i): Vent => {
     const sectionId = `sec-${i % 20}`;
     switch (i % 8) {
       case 0:

@@ -1,4 +1,5 @@
 import convert from "convert-units";
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
   ceilWhole,
@@ -91,5 +92,40 @@ describe("display helpers", () => {
     expect(formatFeetInches(7.5 / 0.3048)).toBe("24 ft 7 1/4 in");
     expect(formatFeetInches(11.999)).toBe("12 ft");
     expect(formatFeetInches(0.5 / 12)).toBe("1/2 in");
+  });
+});
+
+describe("formatNumber against Intl.NumberFormat (the platform's ICU, an independent implementation)", () => {
+  // The formatter before issue 17 was Intl.NumberFormat("en-US") with these options; the fast one must
+  // print the very same characters for every finite double and every digit setting the core uses.
+  const intl = (value: number, max: number, min: number) => {
+    const text = new Intl.NumberFormat("en-US", { maximumFractionDigits: max, minimumFractionDigits: min, useGrouping: true }).format(value);
+    return text === "-0" ? "0" : text;
+  };
+  const digits = fc.integer({ min: 0, max: 20 }).chain((max) => fc.tuple(fc.constant(max), fc.integer({ min: 0, max: 20 })));
+  const check = (value: number, [max, min]: [number, number]) => {
+    expect(formatNumber(value, { maxFractionDigits: max, minFractionDigits: min }), `${value} max ${max} min ${min}`).toBe(intl(value, max, Math.min(min, max)));
+  };
+
+  it("when given any finite double, then it prints what Intl prints", () => {
+    fc.assert(fc.property(fc.double({ noNaN: true, noDefaultInfinity: true }), digits, check), { numRuns: 20_000 });
+  });
+
+  it("when given figures like the core's (sizes, areas, halves, ties at the last digit), then it prints what Intl prints", () => {
+    const tie = fc.tuple(fc.integer({ min: -10_000_000, max: 10_000_000 }), fc.integer({ min: 0, max: 6 })).map(([n, scale]) => (n + 0.5) / 10 ** scale);
+    const everyday = fc.oneof(
+      fc.integer({ min: -1e9, max: 1e9 }),
+      fc.double({ min: -1e7, max: 1e7, noNaN: true }),
+      fc.double({ min: -1e-3, max: 1e-3, noNaN: true }),
+      tie,
+      fc.integer({ min: -1e6, max: 1e6 }).map((n) => n / 100),
+      fc.integer({ min: 0, max: 1e6 }).map((n) => (n * 144) / 300),
+    );
+    fc.assert(fc.property(everyday, digits, check), { numRuns: 20_000 });
+  });
+
+  it("when given the awkward cases (ties, carries, -0, tiny and huge), then it prints what Intl prints", () => {
+    const cases = [0, -0, 0.5, 1.5, 2.5, -2.5, 1.005, 1.255, 8.345, 9.995, 999.9999, 999_999.995, 0.0005, -0.0001, -0.001, 1e-7, 1.5e-7, 5e-324, 1e21, Number("1.2345678901234567e25"), 1e300, -1e300, 2 ** 53 + 2, Number.MAX_VALUE, Number.MIN_VALUE, 0.1 + 0.2];
+    for (const value of cases) for (let max = 0; max <= 20; max += 1) for (const min of [0, 1, 2, max]) check(value, [max, min]);
   });
 });

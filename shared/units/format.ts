@@ -26,35 +26,128 @@ export interface FormatNumberOptions {
   minFractionDigits?: number;
 }
 
-const formatterCache = new Map<string, Intl.NumberFormat>();
-
 /**
  * Formats a number for reasons and labels: en-US digits with thousands separators, at most
  * `maxFractionDigits` decimals, no trailing zeros. Non-finite input prints as "—" so a bug never
  * shows "NaN" to a homeowner.
+ *
+ * Prints exactly what `Intl.NumberFormat("en-US", { maximumFractionDigits, minimumFractionDigits })`
+ * prints (ICU rounds the shortest decimal that reads back as the same double, half away from zero),
+ * except that a lone "-0" prints as "0"; a property test checks it against Intl over many numbers.
+ * Written by hand because an analysis formats about a thousand figures and Intl took ~0.4 µs each
+ * (issue 17).
  *
  * @example
  * formatNumber(1440) // "1,440"
  * formatNumber(1185.12) // "1,185.12"
  * formatNumber(149.3333) // "149.33"
  */
-export function formatNumber(value: number, options: FormatNumberOptions = {}): string {
+export function formatNumber(value: number, options?: FormatNumberOptions): string {
   if (!Number.isFinite(value)) return "—";
-  const max = options.maxFractionDigits ?? 2;
-  const min = Math.min(options.minFractionDigits ?? 0, max);
-  const key = `${min}:${max}`;
-  let formatter = formatterCache.get(key);
-  if (!formatter) {
-    formatter = new Intl.NumberFormat("en-US", {
-      maximumFractionDigits: max,
-      minimumFractionDigits: min,
-      useGrouping: true,
-    });
-    formatterCache.set(key, formatter);
+  const max = options?.maxFractionDigits ?? 2;
+  const min = Math.min(options?.minFractionDigits ?? 0, max);
+  const isNegative = value < 0 || (value === 0 && 1 / value < 0);
+  const magnitude = isNegative ? -value : value;
+  if (Number.isInteger(magnitude) && magnitude < 1e21) {
+    // The common case: a whole number, whose shortest decimal is its own digits.
+    const whole = groupThousands(String(magnitude));
+    const text = min > 0 ? `${whole}.${"0".repeat(min)}` : whole;
+    return isNegative ? (text === "0" ? "0" : `-${text}`) : text;
   }
-  // Avoid "-0" after rounding a tiny negative float.
-  const text = formatter.format(value);
-  return text === "-0" ? "0" : text;
+  const text = formatScaled(magnitude, max, min) ?? formatDecimal(magnitude, max, min);
+  return isNegative ? (text === "0" ? "0" : `-${text}`) : text;
+}
+
+/** "1234567" → "1,234,567". */
+function groupThousands(digits: string): string {
+  const length = digits.length;
+  if (length <= 3) return digits;
+  let head = length % 3 || 3;
+  let text = digits.slice(0, head);
+  for (; head < length; head += 3) text += `,${digits.slice(head, head + 3)}`;
+  return text;
+}
+
+const POWERS_OF_TEN = Array.from({ length: 21 }, (_, i) => 10 ** i);
+
+/**
+ * The quick way for most figures: scale by 10^max and round. It equals rounding the shortest decimal
+ * whenever the scaled value is clearly away from a half (the shortest decimal is within half an ulp
+ * of the double, far less than the margin kept here); near a half, or for large values, it declines
+ * (undefined) and the digit-string way decides.
+ */
+function formatScaled(magnitude: number, max: number, min: number): string | undefined {
+  const scaled = magnitude * POWERS_OF_TEN[max]!;
+  if (!(scaled < 1e15)) return undefined;
+  let rounded = Math.round(scaled);
+  if (Math.abs(scaled - rounded) > 0.5 - 1e-6) return undefined;
+  if (rounded === 0) return min > 0 ? `0.${"0".repeat(min)}` : "0";
+  let fractionLength = max;
+  while (fractionLength > min && rounded % 10 === 0) {
+    rounded /= 10;
+    fractionLength -= 1;
+  }
+  const digits = String(rounded);
+  if (fractionLength === 0) return groupThousands(digits);
+  if (digits.length <= fractionLength) return `0.${"0".repeat(fractionLength - digits.length)}${digits}`;
+  return `${groupThousands(digits.slice(0, digits.length - fractionLength))}.${digits.slice(digits.length - fractionLength)}`;
+}
+
+/**
+ * A positive finite number to at most `max` and at least `min` decimals, from its shortest
+ * round-trip decimal (what `String` gives), rounded half away from zero as ICU does.
+ */
+function formatDecimal(magnitude: number, max: number, min: number): string {
+  // Shortest decimal as a digit string and the position of the point: "123.45" → "12345", 3.
+  const shortest = String(magnitude);
+  const e = shortest.indexOf("e");
+  const mantissa = e < 0 ? shortest : shortest.slice(0, e);
+  const dot = mantissa.indexOf(".");
+  let digits = dot < 0 ? mantissa : mantissa.slice(0, dot) + mantissa.slice(dot + 1);
+  let point = (dot < 0 ? mantissa.length : dot) + (e < 0 ? 0 : Number(shortest.slice(e + 1)));
+  let leadingZeros = 0;
+  while (leadingZeros < digits.length - 1 && digits.charCodeAt(leadingZeros) === 48) leadingZeros += 1;
+  digits = digits.slice(leadingZeros);
+  point -= leadingZeros;
+
+  // Keep the digits up to `max` decimals; round half away from zero on the first one dropped.
+  const keep = point + max;
+  if (keep < digits.length) {
+    const roundsUp = keep >= 0 && digits.charCodeAt(keep) >= 53; // "5"
+    digits = keep > 0 ? digits.slice(0, keep) : "";
+    if (roundsUp) {
+      let i = digits.length - 1;
+      while (i >= 0 && digits[i] === "9") i -= 1;
+      if (i < 0) {
+        // All nines (or nothing kept): 9.996 → 10.00, 0.005 → 0.01.
+        digits = `1${"0".repeat(digits.length)}`;
+        point += 1;
+        if (keep <= 0) point = 1 - max;
+      } else {
+        digits = digits.slice(0, i) + String.fromCharCode(digits.charCodeAt(i) + 1) + "0".repeat(digits.length - i - 1);
+      }
+    }
+  }
+  // Split into whole and fraction digits around the point.
+  let whole: string;
+  let fraction: string;
+  if (point <= 0) {
+    whole = "0";
+    fraction = "0".repeat(-point) + digits;
+  } else if (point >= digits.length) {
+    whole = digits + "0".repeat(point - digits.length);
+    fraction = "";
+  } else {
+    whole = digits.slice(0, point);
+    fraction = digits.slice(point);
+  }
+  if (whole === "") whole = "0";
+  fraction = fraction.slice(0, max);
+  let end = fraction.length;
+  while (end > min && fraction.charCodeAt(end - 1) === 48) end -= 1; // trailing "0"
+  fraction = fraction.slice(0, end);
+  if (fraction.length < min) fraction += "0".repeat(min - fraction.length);
+  return fraction === "" ? groupThousands(whole) : `${groupThousands(whole)}.${fraction}`;
 }
 
 /** Rounds to `digits` decimals, half away from zero, without the 1.005 float surprise. */

@@ -13,7 +13,7 @@ import { requiredNfa, unventedRequirement, type Requirement } from "./requiremen
 import { checkRafterBays, type RafterBayCheck } from "./rafter-bays";
 import { aboveMinimum, type Recommendation } from "./recommendations";
 import { checkUnventedAssembly, type UnventedCheck } from "./unvented";
-import { AtticInputSchema, type AtticInput } from "./schema";
+import { ParsedAtticSchema, type AtticInput, type ParsedAttic } from "./schema";
 import { isPoweredKind } from "./vent-kinds";
 import { ventNfa } from "./vent-nfa";
 import { riseLookup, ventPosition } from "./vent-position";
@@ -77,7 +77,8 @@ export interface AtticAnalysis {
 
 /**
  * Analyses one attic space. The input is validated with AtticInputSchema first; invalid input
- * throws the ZodError (use `tryAnalyzeAttic` for a result instead).
+ * throws the ZodError (use `tryAnalyzeAttic` for a result instead, or `analyzeParsedAttic` when the
+ * input was parsed already).
  *
  * @example
  * // SOURCES.md §8 E1: 1,500 sq ft at 1/150 → 10 sq ft = 1,440 sq in
@@ -87,22 +88,21 @@ export interface AtticAnalysis {
  * a.requirement.reasons.at(-2) // "Required: 1,500 sq ft ÷ 150 = 10 sq ft = 1,440 sq in."
  */
 export function analyzeAttic(input: AtticInput): AtticAnalysis {
-  const attic = AtticInputSchema.parse(input);
+  return analyzeParsedAttic(ParsedAtticSchema.parse(input));
+}
+
+/**
+ * The core itself, for input already parsed with `ParsedAtticSchema` at the boundary: it trusts the
+ * input and does not validate it again. Same answer as `analyzeAttic`.
+ *
+ * @example
+ * const parsed = ParsedAtticSchema.safeParse(surveyInput);
+ * if (parsed.success) analyzeParsedAttic(parsed.data).compliant // the verdict, never rounded
+ */
+export function analyzeParsedAttic(attic: ParsedAttic): AtticAnalysis {
   const site = attic.site ?? {};
 
-  const sections: SectionAnalysis[] = attic.sections.map((section, index) => {
-    const areaSqFt = sectionAreaSqFt(section);
-    const geometry = sectionGeometry(section, (n) => formatNumber(n));
-    return {
-      index,
-      ...(section.id !== undefined ? { id: section.id } : {}),
-      areaSqFt,
-      areaExplanation: describeSectionArea(section, (n) => formatNumber(n)),
-      riseFt: geometry.isKnown ? geometry.riseFt : null,
-      volumeCuFt: geometry.isKnown ? geometry.volumeCuFt : null,
-      volumeExplanation: geometry.isKnown ? geometry.explanation : geometry.reason,
-    };
-  });
+  const sections: SectionAnalysis[] = attic.sections.map(analyzeSection);
   // Rounded to 1e-6 sq ft only to drop float noise from outlines; tiny sections must not vanish.
   const floorAreaSqFt = roundTo(sections.reduce((acc, s) => acc + s.areaSqFt, 0), 6);
   const unknownVolume = sections.find((s) => s.volumeCuFt === null);
@@ -188,8 +188,8 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
     });
   }
   for (const vent of attic.vents) {
-    if (vent.diagnostics) findings.push(...diagnoseFan(vent.diagnostics, vent.id));
-    if (isPoweredKind(vent.kind)) findings.push(...fanControlFindings(vent, attic.climateZone));
+    if (vent.diagnostics) for (const finding of diagnoseFan(vent.diagnostics, vent.id)) findings.push(finding);
+    if (isPoweredKind(vent.kind)) for (const finding of fanControlFindings(vent, attic.climateZone)) findings.push(finding);
   }
 
   // "Not less than" (IRC R806.2): the exact figures, never rounded [SOURCES.md S1, S7].
@@ -244,6 +244,22 @@ export function analyzeAttic(input: AtticInput): AtticAnalysis {
   };
 }
 
+/** Area and volume of one section, with the arithmetic in words. */
+function analyzeSection(section: ParsedAttic["sections"][number], index: number): SectionAnalysis {
+  const areaSqFt = sectionAreaSqFt(section);
+  const geometry = sectionGeometry(section, formatPlain);
+  const areaExplanation = describeSectionArea(section, formatPlain);
+  const riseFt = geometry.isKnown ? geometry.riseFt : null;
+  const volumeCuFt = geometry.isKnown ? geometry.volumeCuFt : null;
+  const volumeExplanation = geometry.isKnown ? geometry.explanation : geometry.reason;
+  // Plain literals in the key order the JSON has always had (a spread cost microseconds, issue 17).
+  return section.id !== undefined
+    ? { index, id: section.id, areaSqFt, areaExplanation, riseFt, volumeCuFt, volumeExplanation }
+    : { index, areaSqFt, areaExplanation, riseFt, volumeCuFt, volumeExplanation };
+}
+
+const formatPlain = (value: number): string => formatNumber(value);
+
 export type TryAnalyzeResult =
   | { ok: true; analysis: AtticAnalysis }
   | { ok: false; issues: { path: string; message: string }[] };
@@ -255,12 +271,12 @@ export type TryAnalyzeResult =
  * tryAnalyzeAttic({ codeBasis: "irc-2018" }).ok // false
  */
 export function tryAnalyzeAttic(input: unknown): TryAnalyzeResult {
-  const parsed = AtticInputSchema.safeParse(input);
+  const parsed = ParsedAtticSchema.safeParse(input);
   if (!parsed.success) {
     return {
       ok: false,
       issues: parsed.error.issues.map((issue) => ({ path: issue.path.map(String).join("."), message: issue.message })),
     };
   }
-  return { ok: true, analysis: analyzeAttic(parsed.data) };
+  return { ok: true, analysis: analyzeParsedAttic(parsed.data) };
 }

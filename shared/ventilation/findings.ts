@@ -92,14 +92,13 @@ export interface Finding {
   caution?: string;
 }
 
-const SEVERITY_ORDER: Record<Severity, number> = { critical: 0, warning: 1, info: 2 };
-
 /** Critical first, then warnings, then notes; stable within a severity. */
 export function sortFindings(findings: Finding[]): Finding[] {
-  return findings
-    .map((finding, index) => ({ finding, index }))
-    .sort((a, b) => SEVERITY_ORDER[a.finding.severity] - SEVERITY_ORDER[b.finding.severity] || a.index - b.index)
-    .map(({ finding }) => finding);
+  const critical: Finding[] = [];
+  const warning: Finding[] = [];
+  const info: Finding[] = [];
+  for (const finding of findings) (finding.severity === "critical" ? critical : finding.severity === "warning" ? warning : info).push(finding);
+  return critical.concat(warning, info);
 }
 
 export interface FanSummary {
@@ -131,6 +130,8 @@ const PASSIVE_EXHAUST_KINDS: ReadonlySet<VentKind> = new Set<VentKind>(["ridge",
 const kindLabel = (kind: VentKind) => VENT_KIND_LABELS[kind];
 const plural = (n: number, one: string, many: string) => (n === 1 ? one : many);
 const capitalize = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
+const ids = (items: ReadonlyArray<VentNfa>): string[] => items.map(ventIdOf);
+const ventIdOf = (v: VentNfa): string => v.ventId;
 
 /** Every ventilation finding for one attic space (fan diagnostics are added by the caller). */
 export function ventilationFindings(ctx: FindingContext): Finding[] {
@@ -140,7 +141,6 @@ export function ventilationFindings(ctx: FindingContext): Finding[] {
   const powered = ctx.perVent.filter((v) => v.isPowered);
   const passiveUpper = passive.filter((v) => v.location === "upper" && v.nfaSqIn > 0);
   const passiveLower = passive.filter((v) => v.location === "lower" && v.nfaSqIn > 0);
-  const ids = (items: ReadonlyArray<VentNfa>) => items.map((v) => v.ventId);
 
   // IRC R806.2 minimum: "not less than" — exact figures, never rounded [SOURCES.md S1, S7].
   const meetsArea = meetsRequiredArea(provided.exactTotalSqIn, requirement.exactSqIn);

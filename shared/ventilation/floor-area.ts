@@ -22,12 +22,14 @@ export function shoelaceAreaSqFt(pointsFt: ReadonlyArray<PointFt>): number {
   const n = pointsFt.length;
   if (n < 3) return 0;
   // Shift to the first vertex so large coordinates don't lose precision in the cross products.
-  const [x0, y0] = pointsFt[0]!;
+  // Indexed reads, not destructuring: this runs several times per outline on every keystroke.
+  const x0 = pointsFt[0]![0];
+  const y0 = pointsFt[0]![1];
   let twiceArea = 0;
   for (let i = 0; i < n; i += 1) {
-    const [ax, ay] = pointsFt[i]!;
-    const [bx, by] = pointsFt[(i + 1) % n]!;
-    twiceArea += (ax - x0) * (by - y0) - (bx - x0) * (ay - y0);
+    const a = pointsFt[i]!;
+    const b = pointsFt[(i + 1) % n]!;
+    twiceArea += (a[0] - x0) * (b[1] - y0) - (b[0] - x0) * (a[1] - y0);
   }
   return Math.abs(twiceArea) / 2;
 }

@@ -1,10 +1,11 @@
 /**
  * The ventilation core's public face (DESIGN.md §4). Import from here, not from the files behind it.
  */
-export { analyzeAttic, tryAnalyzeAttic } from "./analyze-attic";
+export { analyzeAttic, analyzeParsedAttic, tryAnalyzeAttic } from "./analyze-attic";
 export type { AtticAnalysis, FanAnalysis, SectionAnalysis, TryAnalyzeResult } from "./analyze-attic";
 export {
   AtticInputSchema,
+  ParsedAtticSchema,
   SectionSchema,
   VentSchema,
   SiteSchema,
@@ -19,7 +20,7 @@ export {
   CODE_BASES,
   LIMITS,
 } from "./schema";
-export type { AtticInput, CodeBasis, RoofColor, Section, Site, VaporRetarder, Vent, VentLocation, UpperShareBase, MoistureRegime, UnventedAssembly } from "./schema";
+export type { AtticInput, ParsedAttic, CodeBasis, RoofColor, Section, Site, VaporRetarder, Vent, VentLocation, UpperShareBase, MoistureRegime, UnventedAssembly } from "./schema";
 export { UpperShareBaseSchema, MoistureRegimeSchema, AtticAssemblySchema, UnventedAssemblySchema, LouverMaterialSchema } from "./schema";
 export { checkUnventedAssembly, minCondensationControlR } from "./unvented";
 export type { UnventedCheck, UnventedCondition } from "./unvented";

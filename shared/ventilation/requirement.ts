@@ -150,9 +150,18 @@ const PRACTICE_SPLIT_BASIS =
   "The code sets no split for this ratio; Eavesight suggests 40–50 % in high vents and the rest, at least as much, at the eaves, so intake is never smaller than exhaust (common practice: BC Housing, HVI).";
 
 function listVents(items: ReadonlyArray<{ nfa: VentNfa; label?: string | undefined }>): string {
-  return items
-    .map((v) => `${ventDisplayName({ kind: v.nfa.kind, label: v.label })} (${formatNumber(v.nfa.nfaSqIn)} sq in)`)
-    .join(", ");
+  let text = "";
+  for (const v of items) {
+    text += `${text === "" ? "" : ", "}${ventDisplayName({ kind: v.nfa.kind, label: v.label })} (${formatNumber(v.nfa.nfaSqIn)} sq in)`;
+  }
+  return text;
+}
+
+/** Exact NFA of the vents, sq in (never rounded: it feeds the verdicts). */
+function sumExactSqIn(items: ReadonlyArray<{ nfa: VentNfa }>): number {
+  let total = 0;
+  for (const v of items) total += v.nfa.exactNfaSqIn;
+  return total;
 }
 
 interface PlacementCheck {
@@ -196,14 +205,17 @@ function checkPlacement(input: RequirementInput, edition: "2009" | "2012" | "201
     }
     if (v.position.dropSource === "at-ridge-kind") assumedAtRidge.push(v);
   }
-  const lowQualifying = lower.filter((v) => (edition === "2018" ? v.position.isInBottomThird : v.position.isEaveVent));
-  const lowOther = lower.filter((v) => !lowQualifying.includes(v));
+  const lowQualifying: typeof lower = [];
+  const lowOther: typeof lower = [];
+  for (const v of lower) {
+    if (edition === "2018" ? v.position.isInBottomThird : v.position.isEaveVent) lowQualifying.push(v);
+    else lowOther.push(v);
+  }
 
-  const sum = (items: ReadonlyArray<{ nfa: VentNfa }>) => items.reduce((acc, v) => acc + v.nfa.exactNfaSqIn, 0);
-  const upperQSqIn = sum(qualifying);
-  const lowerQSqIn = sum(lowQualifying);
-  const upperAllSqIn = sum(upper);
-  const passiveSqIn = sum(passive);
+  const upperQSqIn = sumExactSqIn(qualifying);
+  const lowerQSqIn = sumExactSqIn(lowQualifying);
+  const upperAllSqIn = sumExactSqIn(upper);
+  const passiveSqIn = sumExactSqIn(passive);
 
   const upperNeedSqIn = required300SqIn * shareMin;
   const upperCountedSqIn = Math.min(upperQSqIn, required300SqIn * shareMax);

@@ -301,3 +301,12 @@ export type Section = z.infer<typeof SectionSchema>;
 export type Vent = z.infer<typeof VentSchema>;
 export type Site = z.infer<typeof SiteSchema>;
 export type AtticInput = z.infer<typeof AtticInputSchema>;
+
+/**
+ * The same schema, its output marked as checked. Parse with it once at the boundary (the server's
+ * request, the client's form) and hand the result to `analyzeParsedAttic`, which trusts it and does
+ * not validate again (issue 17: the input was validated twice on both paths). The mark is a type
+ * only; at run time it is AtticInputSchema.
+ */
+export const ParsedAtticSchema = AtticInputSchema.brand<"ParsedAttic">();
+export type ParsedAttic = z.output<typeof ParsedAtticSchema>;

@@ -78,12 +78,17 @@ export const VENT_KIND_LABELS: Readonly<Record<VentKind, string>> = {
  */
 export function ventDisplayName(vent: { kind: VentKind; label?: string | undefined }): string {
   const label = vent.label?.trim();
-  return label ? `the ${VENT_KIND_LABELS[vent.kind]} "${label}"` : `the ${VENT_KIND_LABELS[vent.kind]}`;
+  return label ? `the ${VENT_KIND_LABELS[vent.kind]} "${label}"` : THE_KIND[vent.kind];
 }
+
+/** "the ridge vent", … built once: most vents have no label and a big attic names them often. */
+const THE_KIND = Object.fromEntries(VENT_KINDS.map((kind) => [kind, `the ${VENT_KIND_LABELS[kind]}`])) as Readonly<Record<VentKind, string>>;
 
 /** Several vents in one phrase, each name once: "the ridge vent and the box (static) vent". */
 export function ventListPhrase(vents: ReadonlyArray<{ kind: VentKind; label?: string | undefined }>): string {
-  const names = [...new Set(vents.map(ventDisplayName))];
+  const unique = new Set<string>();
+  for (const vent of vents) unique.add(ventDisplayName(vent));
+  const names = [...unique];
   if (names.length <= 1) return names[0] ?? "";
   return `${names.slice(0, -1).join(", ")} and ${names[names.length - 1]}`;
 }

@@ -39,54 +39,33 @@ export interface VentNfa {
  */
 export function ventNfa(vent: Vent): VentNfa {
   const quantity = vent.quantity ?? 1;
-  const base = { ventId: vent.id, kind: vent.kind, location: vent.location, ...(vent.label ? { label: vent.label } : {}) };
-  const qtyText = (each: string) => (quantity > 1 ? `${formatNumber(quantity)} × ${each}` : each);
 
-  if (isWholeHouseFanKind(vent.kind)) {
+  if (isWholeHouseFanKind(vent.kind) || isPoweredKind(vent.kind)) {
+    const isWholeHouseFan = isWholeHouseFanKind(vent.kind);
     const airflowCfm = quantity * (vent.cfm ?? 0);
-    return {
-      ...base,
-      isPowered: false,
-      isWholeHouseFan: true,
-      nfaSqIn: 0,
-      exactNfaSqIn: 0,
-      fullNfaSqIn: 0,
-      openShare: 1,
-      airflowCfm,
-      explanation: `${qtyText(`${formatNumber(vent.cfm ?? 0)} cfm`)}${quantity > 1 ? ` = ${formatNumber(airflowCfm)} cfm` : ""}; a whole-house fan blows house air into the attic and adds no net free area`,
-    };
-  }
-  if (isPoweredKind(vent.kind)) {
-    const airflowCfm = quantity * (vent.cfm ?? 0);
-    return {
-      ...base,
-      isPowered: true,
-      isWholeHouseFan: false,
-      nfaSqIn: 0,
-      exactNfaSqIn: 0,
-      fullNfaSqIn: 0,
-      openShare: 1,
-      airflowCfm,
-      explanation: `${qtyText(`${formatNumber(vent.cfm ?? 0)} cfm`)}${quantity > 1 ? ` = ${formatNumber(airflowCfm)} cfm` : ""}; a powered fan is mechanical and adds no net free area`,
-    };
+    const rated = timesQuantity(quantity, `${formatNumber(vent.cfm ?? 0)} cfm`);
+    const total = quantity > 1 ? ` = ${formatNumber(airflowCfm)} cfm` : "";
+    const why = isWholeHouseFan ? "a whole-house fan blows house air into the attic and adds no net free area" : "a powered fan is mechanical and adds no net free area";
+    return nfaEntry(vent, !isWholeHouseFan, isWholeHouseFan, 0, 0, 0, 1, airflowCfm, `${rated}${total}; ${why}`);
   }
 
   let exactSqIn: number;
   let explanation: string;
   if (vent.nfaSqIn !== undefined) {
     exactSqIn = quantity * vent.nfaSqIn;
-    explanation = `rated ${qtyText(`${formatNumber(vent.nfaSqIn)} sq in`)}`;
+    explanation = `rated ${timesQuantity(quantity, `${formatNumber(vent.nfaSqIn)} sq in`)}`;
   } else if (vent.nfaSqInPerUnit !== undefined) {
     exactSqIn = quantity * vent.nfaSqInPerUnit;
-    explanation = qtyText(`${formatNumber(vent.nfaSqInPerUnit)} sq in`);
+    explanation = timesQuantity(quantity, `${formatNumber(vent.nfaSqInPerUnit)} sq in`);
   } else if (vent.lengthFt !== undefined && vent.nfaSqInPerFt !== undefined) {
     exactSqIn = quantity * vent.lengthFt * vent.nfaSqInPerFt;
-    explanation = qtyText(`${formatNumber(vent.lengthFt)} ft × ${formatNumber(vent.nfaSqInPerFt)} sq in per ft`);
+    explanation = timesQuantity(quantity, `${formatNumber(vent.lengthFt)} ft × ${formatNumber(vent.nfaSqInPerFt)} sq in per ft`);
   } else if (vent.grossWidthIn !== undefined && vent.grossHeightIn !== undefined && vent.covering !== undefined) {
     const grossSqIn = vent.grossWidthIn * vent.grossHeightIn;
     const factor = coveringFactor(vent.covering);
     exactSqIn = (quantity * grossSqIn) / factor;
-    explanation = qtyText(
+    explanation = timesQuantity(
+      quantity,
       `${formatNumber(vent.grossWidthIn)} in × ${formatNumber(vent.grossHeightIn)} in = ${formatNumber(grossSqIn)} sq in gross ÷ ${formatNumber(factor)} (${describeCovering(vent.covering)})`,
     );
   } else {
@@ -95,20 +74,40 @@ export function ventNfa(vent: Vent): VentNfa {
     explanation = "no size recorded";
   }
   const fullNfaSqIn = roundTo(exactSqIn, 2);
+  if (vent.condition === undefined || vent.condition === "open" || vent.condition === "damaged") {
+    // All of it counts (conditionShare's answer for these, without building it for every vent).
+    return nfaEntry(vent, false, false, fullNfaSqIn, exactSqIn, fullNfaSqIn, 1, 0, `${explanation} = ${formatNumber(fullNfaSqIn)} sq in`);
+  }
   const { openShare, words } = conditionShare(vent, quantity);
   const countedExactSqIn = exactSqIn * openShare;
   const nfaSqIn = roundTo(countedExactSqIn, 2);
-  return {
-    ...base,
-    isPowered: false,
-    isWholeHouseFan: false,
-    nfaSqIn,
-    exactNfaSqIn: countedExactSqIn,
-    fullNfaSqIn,
-    openShare,
-    airflowCfm: 0,
-    explanation: openShare === 1 ? `${explanation} = ${formatNumber(nfaSqIn)} sq in` : `${explanation} = ${formatNumber(fullNfaSqIn)} sq in; ${words}: ${formatNumber(nfaSqIn)} sq in counted`,
-  };
+  const counted = openShare === 1 ? `${explanation} = ${formatNumber(nfaSqIn)} sq in` : `${explanation} = ${formatNumber(fullNfaSqIn)} sq in; ${words}: ${formatNumber(nfaSqIn)} sq in counted`;
+  return nfaEntry(vent, false, false, nfaSqIn, countedExactSqIn, fullNfaSqIn, openShare, 0, counted);
+}
+
+/** "6 × 25 sq in" for several units, the size alone for one. */
+function timesQuantity(quantity: number, each: string): string {
+  return quantity > 1 ? `${formatNumber(quantity)} × ${each}` : each;
+}
+
+/**
+ * One entry as a plain literal (object spreads cost microseconds each in Node 20, issue 17); the
+ * label, when there is one, sits after the location, as it always has in the JSON.
+ */
+function nfaEntry(
+  vent: Vent,
+  isPowered: boolean,
+  isWholeHouseFan: boolean,
+  nfaSqIn: number,
+  exactNfaSqIn: number,
+  fullNfaSqIn: number,
+  openShare: number,
+  airflowCfm: number,
+  explanation: string,
+): VentNfa {
+  return vent.label
+    ? { ventId: vent.id, kind: vent.kind, location: vent.location, label: vent.label, isPowered, isWholeHouseFan, nfaSqIn, exactNfaSqIn, fullNfaSqIn, openShare, airflowCfm, explanation }
+    : { ventId: vent.id, kind: vent.kind, location: vent.location, isPowered, isWholeHouseFan, nfaSqIn, exactNfaSqIn, fullNfaSqIn, openShare, airflowCfm, explanation };
 }
 
 const BLOCKED_BY_WORDS: Record<NonNullable<Vent["blockedBy"]>, string> = {

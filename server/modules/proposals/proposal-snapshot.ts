@@ -10,7 +10,7 @@ import { OptionSpaceSchema, type OptionSpace } from "../../../shared/schemas/opt
 import type { CatalogItem } from "../../../shared/schemas/catalog.ts";
 import type { SpaceSurvey } from "../../../shared/schemas/survey.ts";
 import { toAtticInput } from "../../../shared/survey/to-attic-input.ts";
-import { analyzeAttic, AtticInputSchema, isPoweredKind } from "../../../shared/ventilation/index.ts";
+import { analyzeParsedAttic, isPoweredKind, ParsedAtticSchema } from "../../../shared/ventilation/index.ts";
 import type { ProjectRow } from "../projects/projects.repository.ts";
 import type { SpaceRow } from "../spaces/spaces.repository.ts";
 import type { OptionRow } from "../options/options.repository.ts";
@@ -61,9 +61,9 @@ function frozenAirflow(estimate: AirflowEstimate): SnapshotAirflow {
 function spaceView(project: ProjectRow, space: SpaceRow, survey: SpaceSurvey, findingCodes: string[] | null, conditions: EstimateConditions): SnapshotSpace {
   const base = { spaceId: space.id, name: space.name };
   if (survey.sections.length === 0) return { ...base, analysis: null, picture: null, pictureDescription: [], issues: ["No attic floor was measured for this space."] };
-  const parsed = AtticInputSchema.safeParse(toAtticInput(project, survey));
+  const parsed = ParsedAtticSchema.safeParse(toAtticInput(project, survey));
   if (!parsed.success) return { ...base, analysis: null, picture: null, pictureDescription: [], issues: parsed.error.issues.map((i) => i.message) };
-  const a = analyzeAttic(parsed.data);
+  const a = analyzeParsedAttic(parsed.data);
   const estimate = estimateAirflow(parsed.data, conditions);
   const picture = buildAirflowPicture(parsed.data, a, { airflow: estimate.results.summer });
   const analysis: SnapshotAnalysis = {
