@@ -39,6 +39,10 @@ const EnvSchema = z.object({
    * the mailer's worst case (about 50 s). Tests shorten it to watch a recovery happen.
    */
   JOBS_RECOVERY_SECONDS: z.coerce.number().int().min(2).max(3_600).default(90),
+  /** Worker threads for analyses and PDFs (server/lib/compute); unset: the cores less one; 0 runs them inline. */
+  COMPUTE_THREADS: z.coerce.number().int().min(0).max(64).optional(),
+  /** Tasks that may wait for a compute thread before the next is refused as busy (503). */
+  COMPUTE_QUEUE: z.coerce.number().int().min(0).max(10_000).default(64),
   /**
    * Where the payment provider's API is, e.g. http://127.0.0.1:4243 for the local fake
    * (scripts/lib/fake-payments.ts); unset means the provider's real API.

@@ -11,6 +11,7 @@
  */
 import os from "node:os";
 import Tinypool from "tinypool";
+import { parseEnv } from "../../env.ts";
 import { AppError } from "../errors.ts";
 import type * as Tasks from "./compute-tasks.ts";
 
@@ -20,21 +21,14 @@ type TaskOutput<N extends TaskName> = Awaited<ReturnType<(typeof Tasks)[N]>>;
 
 export interface ComputePool {
   run<N extends TaskName>(name: N, input: TaskInput<N>): Promise<TaskOutput<N>>;
-  /** Tasks waiting for a thread now. */
-  readonly queued: number;
   close(): Promise<void>;
 }
 
 export const busyError = () => new AppError("busy", "The server is busy with large calculations. Please try again in a few seconds.", 503);
 
-const numberFromEnv = (name: string, fallback: number) => {
-  const value = Number(process.env[name]);
-  return process.env[name] !== undefined && process.env[name] !== "" && Number.isInteger(value) && value >= 0 ? value : fallback;
-};
-
 export function createComputePool(opts: { threads?: number; maxQueue?: number } = {}): ComputePool {
-  const threads = opts.threads ?? numberFromEnv("COMPUTE_THREADS", Math.max(1, os.availableParallelism() - 1));
-  const maxQueue = opts.maxQueue ?? numberFromEnv("COMPUTE_QUEUE", 64);
+  const threads = opts.threads ?? Math.max(1, os.availableParallelism() - 1);
+  const maxQueue = opts.maxQueue ?? 64;
   if (threads === 0) {
     let loaded: Promise<typeof Tasks> | undefined;
     return {
@@ -43,7 +37,6 @@ export function createComputePool(opts: { threads?: number; maxQueue?: number } 
         const tasks = await loaded;
         return (tasks[name] as (i: typeof input) => unknown)(input) as never;
       },
-      queued: 0,
       async close() {},
     };
   }
@@ -60,9 +53,6 @@ export function createComputePool(opts: { threads?: number; maxQueue?: number } 
       if (pool.queueSize >= maxQueue) throw busyError();
       return (await pool.run(input, { name })) as never;
     },
-    get queued() {
-      return pool.queueSize;
-    },
     async close() {
       await pool.destroy();
     },
@@ -70,9 +60,12 @@ export function createComputePool(opts: { threads?: number; maxQueue?: number } 
 }
 
 let shared: ComputePool | undefined;
-/** The process's pool, made on first use. */
+/** The process's pool, made on first use with the configured sizes (server/env.ts). */
 export function computePool(): ComputePool {
-  shared ??= createComputePool();
+  if (!shared) {
+    const env = parseEnv();
+    shared = createComputePool({ threads: env.COMPUTE_THREADS, maxQueue: env.COMPUTE_QUEUE });
+  }
   return shared;
 }
 /** Ends the process's pool (at shutdown). */
